@@ -153,6 +153,9 @@ func (p *parser) bodyStatement(gate string, params, qubits []string) (bodyCall, 
 			}
 			return b, p.errorf(q.off, "%s is not a qubit argument of gate %s", q.text, gate)
 		}
+		if p.tok.is("[") {
+			return b, p.errorf(p.tok.off, "indexing is not allowed in a gate body; use the gate's qubit arguments")
+		}
 		for _, j := range b.qubits {
 			if j == k {
 				return b, p.errorf(q.off, "qubit %s used twice in one call", q.text)

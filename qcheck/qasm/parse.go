@@ -1,6 +1,7 @@
 package qasm
 
 import (
+	"bytes"
 	"fmt"
 	"math"
 	"strconv"
@@ -29,6 +30,10 @@ func ParseProgram(src []byte, opts ...Option) (*Program, error) {
 	}
 	p := &parser{src: src, lx: lexer{src: src}, cfg: cfg, gates: map[string]*gateDef{},
 		regs: map[string]*register{}}
+	// Most statements make one op: size the op list once instead of growing it.
+	if n := bytes.Count(src, []byte{';'}); n <= cfg.maxOps {
+		p.ops, p.offs = make([]circuit.Op, 0, n), make([]int, 0, n)
+	}
 	for name, d := range builtins() {
 		if d.keyword {
 			p.gates[name] = d
