@@ -91,7 +91,14 @@ func drawAll[V any](t *testing.T, g *rapid.Generator[V], n int, base int) (examp
 	for i := range n {
 		example = append(example, g.Example(base+i))
 	}
-	perCase := (n + 99) / 100
+	checks, err := strconv.Atoi(flag.Lookup("rapid.checks").Value.String())
+	if err != nil || checks <= 0 {
+		t.Fatalf("cannot read -rapid.checks: %v", err)
+	}
+	if testing.Short() {
+		checks /= 5 // rapid.Check runs a fifth of its cases in -short mode
+	}
+	perCase := (n + checks - 1) / checks
 	checkSeeded(t, uint64(base), func(rt *rapid.T) {
 		for range perCase {
 			checked = append(checked, g.Draw(rt, "value"))
