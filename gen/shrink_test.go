@@ -40,10 +40,10 @@ type recorder struct {
 	failed bool
 }
 
-func (r *recorder) Helper()                        {}
-func (r *recorder) Name() string                   { return r.name + "/shrink-probe" }
+func (r *recorder) Helper()                         {}
+func (r *recorder) Name() string                    { return r.name + "/shrink-probe" }
 func (r *recorder) Logf(format string, args ...any) {}
-func (r *recorder) Log(args ...any)                {}
+func (r *recorder) Log(args ...any)                 {}
 func (r *recorder) Skipf(format string, args ...any) {
 	panic(fmt.Sprintf("shrink probe skipped: "+format, args...))
 }
