@@ -1,0 +1,127 @@
+package campaign_test
+
+import (
+	"bytes"
+	"flag"
+	"os"
+	"path/filepath"
+	"strings"
+	"testing"
+	"time"
+
+	"qcheck.dev/examples/ancilla"
+	"qcheck.dev/examples/campaign"
+	"qcheck.dev/examples/peephole"
+	"qcheck.dev/qcheck"
+	"qcheck.dev/qcheck/circuit"
+)
+
+var (
+	update = flag.Bool("update", false, "rewrite testdata/examples/demo-seed1.txt from the demo's output")
+	detect = flag.Bool("detect", false, "measure each planted bug's detection rate over 100 seeds (minutes)")
+)
+
+const golden = "../../testdata/examples/demo-seed1.txt"
+
+// The demo's output for seed 1 is kept in testdata so that a change to what a newcomer sees is a
+// visible diff; rerun with -update after an intended change.
+func TestRunMatchesGolden(t *testing.T) {
+	var b bytes.Buffer
+	if err := campaign.Run(&b, 1); err != nil {
+		t.Fatal(err)
+	}
+	out := b.String()
+	for _, want := range []string{"Scenario:", "Checked ", "qcheck: the pass changed the meaning", "input (as small as rapid could make it)", "replay:"} {
+		if !strings.Contains(out, want) {
+			t.Errorf("demo output lacks %q:\n%s", want, out)
+		}
+	}
+	if *update {
+		if err := os.WriteFile(filepath.FromSlash(golden), []byte(out), 0o644); err != nil {
+			t.Fatal(err)
+		}
+	}
+	want, err := os.ReadFile(filepath.FromSlash(golden))
+	if err != nil {
+		t.Fatal(err)
+	}
+	if out != string(want) {
+		t.Errorf("demo output for seed 1 differs from %s (rerun with -update if intended):\n%s", golden, out)
+	}
+	var again bytes.Buffer
+	if err := campaign.Run(&again, 1); err != nil {
+		t.Fatal(err)
+	}
+	if again.String() != out {
+		t.Error("two runs with seed 1 printed different output")
+	}
+}
+
+func TestHuntBadInput(t *testing.T) {
+	if _, err := campaign.Hunt(campaign.Peephole(), 0, 100); err == nil || !strings.Contains(err.Error(), "seed 0") {
+		t.Errorf("seed 0: got %v", err)
+	}
+	if _, err := campaign.Hunt(campaign.Peephole(), 1, 0); err == nil || !strings.Contains(err.Error(), "0 checks") {
+		t.Errorf("0 checks: got %v", err)
+	}
+}
+
+// correct gives, for each planted target, the correct pass the bug was planted in, so that a
+// failure can be confirmed to be the planted bug: the correct pass must keep the same input.
+func correct(name string) qcheck.Pass {
+	if name == "leak.Lower" {
+		return ancilla.Lowering{Build: ancilla.Chain, Ancillas: 3, Clean: true}.Apply
+	}
+	return peephole.Optimize
+}
+
+// TestDetectionRate measures, for each planted bug, in how many of 100 seeds qcheck's search
+// finds it within rapid's default 100 checks; issue 5 asks for at least 95. It takes minutes
+// (every found failure is also shrunk), so it runs only with -detect:
+//
+//	go test ./examples/campaign/ -run TestDetectionRate -detect -v -timeout 60m
+//
+// A seed counts only if the failure is of kind NotEquivalent and the correct pass keeps the
+// meaning of the same shrunk input, so noise or a bug of the checker cannot count as detection.
+func TestDetectionRate(t *testing.T) {
+	if !*detect {
+		t.Skip("slow measurement; run with -detect")
+	}
+	const seeds = 100
+	for _, target := range campaign.Planted() {
+		t.Run(target.Name, func(t *testing.T) {
+			start := time.Now()
+			found, checks := 0, 0
+			var missed []uint64
+			for seed := uint64(1); seed <= seeds; seed++ {
+				f, err := campaign.Hunt(target, seed, campaign.DefaultChecks)
+				if err != nil {
+					t.Fatalf("seed %d: %v", seed, err)
+				}
+				if f == nil || f.Kind != qcheck.NotEquivalent || !keeps(t, correct(target.Name), f.Input, target.Options) {
+					missed = append(missed, seed)
+					checks += campaign.DefaultChecks
+					continue
+				}
+				found++
+				checks += f.Passed + 1
+			}
+			t.Logf("%s (%s): found in %d of %d seeds, %.1f circuits checked per seed on average, missed seeds %v, %v",
+				target.Name, target.Bug, found, seeds, float64(checks)/seeds, missed, time.Since(start).Round(time.Second))
+			if found < 95 {
+				t.Errorf("%s found in %d of %d seeds, want at least 95", target.Name, found, seeds)
+			}
+		})
+	}
+}
+
+// keeps reports whether pass keeps the meaning of in under opts.
+func keeps(t *testing.T, pass qcheck.Pass, in *circuit.Circuit, opts []qcheck.Option) bool {
+	t.Helper()
+	out, err := pass(in)
+	if err != nil {
+		return false
+	}
+	r, err := qcheck.Compare(in, out, opts...)
+	return err == nil && r.Equivalent
+}
