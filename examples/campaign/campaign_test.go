@@ -12,6 +12,7 @@ import (
 	"qcheck.dev/examples/ancilla"
 	"qcheck.dev/examples/campaign"
 	"qcheck.dev/examples/peephole"
+	"qcheck.dev/examples/route"
 	"qcheck.dev/qcheck"
 	"qcheck.dev/qcheck/circuit"
 )
@@ -68,11 +69,21 @@ func TestHuntBadInput(t *testing.T) {
 
 // correct gives, for each planted target, the correct pass the bug was planted in, so that a
 // failure can be confirmed to be the planted bug: the correct pass must keep the same input.
-func correct(name string) qcheck.Pass {
-	if name == "leak.Lower" {
-		return ancilla.Lowering{Build: ancilla.Chain, Ancillas: 3, Clean: true}.Apply
+func correct(name string) qcheck.LayoutPass {
+	switch name {
+	case "leak.Lower":
+		return withoutLayout(ancilla.Lowering{Build: ancilla.Chain, Ancillas: 3, Clean: true}.Apply)
+	case "inverted.Route":
+		return func(c *circuit.Circuit) (*circuit.Circuit, []int, error) { return route.Route(c, route.Line(5)) }
 	}
-	return peephole.Optimize
+	return withoutLayout(peephole.Optimize)
+}
+
+func withoutLayout(p qcheck.Pass) qcheck.LayoutPass {
+	return func(c *circuit.Circuit) (*circuit.Circuit, []int, error) {
+		out, err := p(c)
+		return out, nil, err
+	}
 }
 
 // TestDetectionRate measures, for each planted bug, in how many of 100 seeds qcheck's search
@@ -115,12 +126,15 @@ func TestDetectionRate(t *testing.T) {
 	}
 }
 
-// keeps reports whether pass keeps the meaning of in under opts.
-func keeps(t *testing.T, pass qcheck.Pass, in *circuit.Circuit, opts []qcheck.Option) bool {
+// keeps reports whether pass keeps the meaning of in under opts, up to the layout it reports.
+func keeps(t *testing.T, pass qcheck.LayoutPass, in *circuit.Circuit, opts []qcheck.Option) bool {
 	t.Helper()
-	out, err := pass(in)
+	out, perm, err := pass(in)
 	if err != nil {
 		return false
+	}
+	if perm != nil {
+		opts = append(append([]qcheck.Option(nil), opts...), qcheck.OutputPermutation(perm))
 	}
 	r, err := qcheck.Compare(in, out, opts...)
 	return err == nil && r.Equivalent

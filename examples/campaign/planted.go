@@ -4,6 +4,8 @@ import (
 	"qcheck.dev/examples/ancilla"
 	"qcheck.dev/examples/ancilla/leak"
 	"qcheck.dev/examples/peephole/shortcut"
+	"qcheck.dev/examples/route"
+	"qcheck.dev/examples/route/inverted"
 	"qcheck.dev/gen"
 	"qcheck.dev/qcheck"
 	"qcheck.dev/qcheck/circuit"
@@ -25,7 +27,8 @@ func Peephole() Target {
 }
 
 // Planted returns every planted bug of the examples with the circuits it is hunted on: the two
-// shortcuts of package shortcut one at a time, and the leaky ancilla chain of package leak.
+// shortcuts of package shortcut one at a time, the leaky ancilla chain of package leak, and the
+// inverted layout of package inverted.
 func Planted() []Target {
 	circuits := gen.Circuit(gen.Options{Qubits: 3, MaxOps: 30, GateSet: peepholeGates})
 	return []Target{
@@ -42,6 +45,21 @@ func Planted() []Target {
 			Circuits: circuits,
 		},
 		Leak(),
+		Inverted(),
+	}
+}
+
+// Inverted is the target of the routing bug: 5-qubit circuits of one- and two-qubit gates routed
+// onto a line of five, checked up to the layout the router reports.
+func Inverted() Target {
+	line := route.Line(5)
+	return Target{
+		Name: "inverted.Route",
+		Bug:  "the router reports its final layout inverted (physical → logical)",
+		LayoutPass: func(c *circuit.Circuit) (*circuit.Circuit, []int, error) {
+			return inverted.Route(c, line)
+		},
+		Circuits: gen.Circuit(gen.Options{Qubits: 5, MaxOps: 20, GateSet: []string{"h", "t", "rz", "cx", "cz", "cp"}}),
 	}
 }
 

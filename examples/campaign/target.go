@@ -17,8 +17,10 @@ type Target struct {
 	Name string
 	// Bug says in a line what is wrong with the pass.
 	Bug string
-	// Pass is the pass under test.
-	Pass qcheck.Pass
+	// Pass is the pass under test; for a pass that reports its final layout, Pass is nil and
+	// LayoutPass is set.
+	Pass       qcheck.Pass
+	LayoutPass qcheck.LayoutPass
 	// Circuits generates its inputs.
 	Circuits *rapid.Generator[*circuit.Circuit]
 	// Options are the comparison options the pass must satisfy.
@@ -59,6 +61,9 @@ func Hunt(t Target, seed uint64, checks int) (*qcheck.Failure, error) {
 		return nil, err
 	}
 	defer restore()
+	if t.LayoutPass != nil {
+		return qcheck.SearchLayout(t.LayoutPass, t.Circuits, t.Options...)
+	}
 	return qcheck.Search(t.Pass, t.Circuits, t.Options...)
 }
 

@@ -6,7 +6,9 @@ import (
 	"testing"
 
 	"pgregory.net/rapid"
+	"qcheck.dev/examples/campaign"
 	"qcheck.dev/examples/route"
+	"qcheck.dev/examples/route/inverted"
 	"qcheck.dev/gen"
 	"qcheck.dev/qcheck"
 	"qcheck.dev/qcheck/circuit"
@@ -96,5 +98,30 @@ func TestRouteBadInput(t *testing.T) {
 		if err == nil || !strings.Contains(err.Error(), tc.want) {
 			t.Errorf("%s: got error %v, want one mentioning %q", tc.name, err, tc.want)
 		}
+	}
+}
+
+// The inverted layout of package inverted is caught by the layout check. A cx between the ends of
+// Tarn-6 leaves the layout [2 0 1 4 5 3] (ExampleRoute), two 3-cycles, which are not their own
+// inverses; a single SWAP, as in most hand-written router tests, would not show the bug.
+func TestInvertedLayoutIsCaught(t *testing.T) {
+	c := circuit.New(6).H(0).CX(0, 5)
+	out, perm, err := inverted.Route(c, route.Line(6))
+	if err != nil {
+		t.Fatal(err)
+	}
+	r, err := qcheck.Compare(c, out, qcheck.OutputPermutation(perm))
+	if err != nil {
+		t.Fatal(err)
+	}
+	if r.Equivalent {
+		t.Errorf("the inverted layout %v passed:\n%v", perm, out)
+	}
+	f, err := campaign.Hunt(campaign.Inverted(), 20261201, campaign.DefaultChecks)
+	if err != nil {
+		t.Fatal(err)
+	}
+	if f == nil || f.Kind != qcheck.NotEquivalent {
+		t.Fatalf("the campaign did not catch the inverted layout: %v", f)
 	}
 }
