@@ -23,6 +23,11 @@ func benchCircuits(b testing.TB) map[string]*circuit.Circuit {
 	return out
 }
 
+// reportCPU adds the process CPU time per op since start (all goroutines together) as "cpu-s/op".
+func reportCPU(b *testing.B, start float64) {
+	b.ReportMetric((processCPU()-start)/float64(b.N), "cpu-s/op")
+}
+
 // BenchmarkUnitary builds the dense unitary of 10 qubits × 1000 gates, 12 qubits × 200 gates,
 // and the sweep of 200 gates from 6 to 12 qubits.
 func BenchmarkUnitary(b *testing.B) {
@@ -34,11 +39,13 @@ func BenchmarkUnitary(b *testing.B) {
 	for _, name := range names {
 		c := circuits[name]
 		b.Run(name, func(b *testing.B) {
+			cpu := processCPU()
 			for b.Loop() {
 				if _, err := Unitary(c); err != nil {
 					b.Fatal(err)
 				}
 			}
+			reportCPU(b, cpu)
 		})
 	}
 }
@@ -52,12 +59,13 @@ func BenchmarkApply(b *testing.B) {
 	}
 	state := make([]complex128, 1<<c.Qubits())
 	state[0] = 1
-	b.SetBytes(int64(len(state)) * 16 * int64(len(c.Ops)))
+	cpu := processCPU()
 	for b.Loop() {
 		if err := p.Apply(state); err != nil {
 			b.Fatal(err)
 		}
 	}
+	reportCPU(b, cpu)
 	b.ReportMetric(float64(len(p.kernels)), "fused-gates")
 }
 

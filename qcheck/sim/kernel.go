@@ -242,12 +242,16 @@ func (kn *kernel) apply(data []complex128, g0, g1 int) {
 			scratch = make([]complex128, kn.scratchLen) // once per call, not per group
 		}
 	}
+	// The base of group g0 has zeros inserted at the gate's bits; each later run starts at the
+	// next index with zeros there, found without redoing the insertion.
+	base := g0
+	mask := 0
+	for _, b := range kn.sorted {
+		base = (base>>b)<<(b+1) | base&(1<<b-1)
+		mask |= 1 << b
+	}
 	run := 1 << kn.sorted[0]
 	for g := g0; g < g1; {
-		base := g
-		for _, b := range kn.sorted {
-			base = (base>>b)<<(b+1) | base&(1<<b-1)
-		}
 		r := min(run-g&(run-1), g1-g)
 		switch kn.kind {
 		case pairKind:
@@ -263,6 +267,7 @@ func (kn *kernel) apply(data []complex128, g0, g1 int) {
 			kn.sparseRun(data, base, r, scratch)
 		}
 		g += r
+		base = (((base + r - 1) | mask) + 1) &^ mask
 	}
 }
 
