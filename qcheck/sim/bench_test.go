@@ -84,9 +84,11 @@ func BenchmarkSweep(b *testing.B) {
 	copy(other, state) // fault the pages in before timing
 	b.Run("copy", func(b *testing.B) {
 		b.SetBytes(bytes)
+		cpu := processCPU()
 		for b.Loop() {
 			copy(other, state)
 		}
+		reportCPU(b, cpu)
 	})
 	gates := []struct {
 		name string
@@ -98,6 +100,8 @@ func BenchmarkSweep(b *testing.B) {
 		{"rz-q5", circuit.New(n).RZ(0.3, 5)},
 		{"cx-q3-q17", circuit.New(n).CX(3, 17)},
 		{"rxx-q2-q20", circuit.New(n).RXX(0.4, 2, 20)},
+		{"crx-q15-q0", circuit.New(n).CRX(0.6, 15, 0)},
+		{"rxx-q0-q1", circuit.New(n).RXX(0.4, 0, 1)},
 		{"fused-u-cx-q1-q9", circuit.New(n).U(0.1, 0.2, 0.3, 1).RY(0.5, 9).CX(1, 9).RZ(0.7, 9)},
 	}
 	for _, g := range gates {
@@ -107,11 +111,13 @@ func BenchmarkSweep(b *testing.B) {
 		}
 		b.Run(strings.ReplaceAll(g.name, " ", ""), func(b *testing.B) {
 			b.SetBytes(bytes)
+			cpu := processCPU()
 			for b.Loop() {
 				if err := p.Apply(state); err != nil {
 					b.Fatal(err)
 				}
 			}
+			reportCPU(b, cpu)
 		})
 	}
 }
