@@ -105,40 +105,14 @@ func mergeInto(g *block, last []*block, sweepCost float64) *block {
 	return g
 }
 
-// cost estimates the time of applying a k-qubit matrix per amplitude of the register: the share
-// of amplitudes it moves times sweepCost, plus one unit per complex multiply.
+// cost estimates the time of applying the k-qubit matrix m per amplitude of the register, with
+// the inner loop the kernels would choose for it.
 func cost(m []complex128, k int, sweepCost float64) float64 {
-	d := 1 << k
-	moved, mults := 0, 0
-	for a := 0; a < d; a++ {
-		nz, identity := 0, true
-		for b, v := range m[a*d : a*d+d] {
-			if v != 0 {
-				nz++
-			}
-			if (b == a && v != 1) || (b != a && v != 0) {
-				identity = false
-			}
-		}
-		if !identity {
-			moved++
-			if !(nz == 1 && (m[a*d+a] == 1 || offDiagonalOne(m[a*d:a*d+d], a))) {
-				mults += nz
-			}
-		}
+	bits := make([]uint, k)
+	for i := range bits {
+		bits[i] = uint(k - 1 - i)
 	}
-	return (float64(moved)*sweepCost + float64(mults)) / float64(d)
-}
-
-// offDiagonalOne reports whether the row's only nonzero entry is a 1 off the diagonal (a plain
-// exchange, no multiply).
-func offDiagonalOne(row []complex128, a int) bool {
-	for b, v := range row {
-		if v != 0 {
-			return b != a && v == 1
-		}
-	}
-	return false
+	return newKernel(m, bits).cost(sweepCost)
 }
 
 // embed writes the matrix m on qubits sub as a matrix on qubits all (sub ⊆ all), identity on the

@@ -90,14 +90,10 @@ func newKernel(m []complex128, bits []uint) *kernel {
 
 	// Active rows are the local states the gate moves: rows other than e_a.
 	var active []int
-	nnz := 0
 	for a := 0; a < d; a++ {
 		row := m[a*d : a*d+d]
 		identity := true
 		for b, v := range row {
-			if v != 0 {
-				nnz++
-			}
 			if (b == a && v != 1) || (b != a && v != 0) {
 				identity = false
 			}
@@ -161,8 +157,8 @@ func newKernel(m []complex128, bits []uint) *kernel {
 		a, b := active[0], active[1]
 		kn.p0, kn.p1 = kn.offs[a], kn.offs[b]
 		kn.m00, kn.m01, kn.m10, kn.m11 = m[a*d+a], m[a*d+b], m[b*d+a], m[b*d+b]
-	case k == 2 && len(active) == 4 && nnz == 16:
-		kn.kind = dense2Kind
+	case k == 2:
+		kn.kind = dense2Kind // zeros cost less than the sparse kernel's indirection
 	default:
 		kn.kind = sparseKind
 		read := make([]bool, d)
@@ -185,6 +181,35 @@ func newKernel(m []complex128, bits []uint) *kernel {
 		kn.scratchLen = d
 	}
 	return kn
+}
+
+// cost estimates the time of the kernel per amplitude of the register, in units of one complex
+// multiply-add: the share of amplitudes it moves times sweepCost (the price of streaming them
+// through memory), plus the arithmetic of its inner loop.
+func (kn *kernel) cost(sweepCost float64) float64 {
+	d := float64(int(1) << kn.qubits)
+	switch kn.kind {
+	case pairKind:
+		return (2*sweepCost + 4) / d
+	case diagonalKind:
+		return float64(len(kn.scale)) * (sweepCost + 1) / d
+	case swapKind:
+		c := float64(len(kn.scale)) * (sweepCost + 1)
+		for _, s := range kn.swaps {
+			c += 2 * sweepCost
+			if s.va != 1 || s.vb != 1 {
+				c += 2
+			}
+		}
+		return c / d
+	case dense2Kind:
+		return (4*sweepCost + 16) / d
+	}
+	c := 0.0
+	for _, r := range kn.rows {
+		c += sweepCost + 1.5*float64(len(r.cols)) // the sparse loop's indirection costs extra
+	}
+	return c / d
 }
 
 // pairOnly reports whether rows a and b of m have their nonzero entries in columns a and b only.
