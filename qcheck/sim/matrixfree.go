@@ -11,12 +11,18 @@ import (
 
 // MatrixFreeOptions tunes MatrixFreeDistance. The zero value asks for the defaults.
 type MatrixFreeOptions struct {
-	// MaxSteps bounds the applications of W = V†U spent exploring its spectrum; exploration also
-	// stops early once the Krylov space is invariant to rounding. Default 32.
-	MaxSteps int
-	// CertifySteps is the number of applications of W, from a second and independent random
-	// state, that back the probabilistic upper bound. Default 40; negative skips the bound.
+	// ExploreSteps bounds the applications of W = V†U spent exploring its spectrum from a first
+	// random state; exploration stops early once its Krylov space is invariant to rounding.
+	// Default 12.
+	ExploreSteps int
+	// CertifySteps bounds the applications of W, from a second and independent random state,
+	// that back the probabilistic upper bound; the bound needs about 24 at 20 qubits and
+	// tightens with more. Default 40; negative skips the bound.
 	CertifySteps int
+	// Tolerance, when positive, lets the run stop as soon as the verdict at this distance is
+	// settled: when the witness shows more than Tolerance, or the upper bound falls to Tolerance
+	// or below. Zero runs every step, for the sharpest estimate and bound.
+	Tolerance float64
 	// Failure is the probability, over the random states, that the upper bound does not hold.
 	// Default 1e-6.
 	Failure float64
@@ -44,18 +50,20 @@ type MatrixFreeResult struct {
 	// shows more than √2, so Lower ≤ √2 even when D is near 2.
 	Lower float64
 	// Upper bounds ‖U − e^{iφ}V‖ ≥ D at φ = Phase, with probability at least 1 − Failure over
-	// the second random state (Kuczyński–Woźniakowski bound on Krylov estimates), plus an
-	// allowance for rounding; +Inf when the certification was skipped or had too few steps.
+	// the second random state (the Kuczyński–Woźniakowski bound on Krylov estimates), plus an
+	// allowance for rounding; +Inf when the certification was skipped, stopped early, or had too
+	// few steps.
 	Upper float64
 	// Failure is the probability that Upper does not hold; 0 when the certifying Krylov space
 	// became exactly invariant, which leaves nothing unexplored.
 	Failure float64
-	// Steps is the number of applications of W (each one run of U and one of the inverse of V).
+	// Steps is the number of applications of W (each one run of U and one of the inverse of V,
+	// or of the parts of them that differ). Checking the witness candidates adds two runs of
+	// each circuit, four when the second space shows more than the first.
 	Steps int
-	// Invariant reports that the exploring Krylov space became invariant to rounding: it then
-	// holds every eigen-component of the first random state, and the estimate is exact unless
-	// that state missed an eigenvector of W, a probability-zero event.
-	Invariant bool
+	// Shared is the number of ops at the start and at the end that the two circuits have in
+	// common; W is replaced by the similar, and cheaper, product of the parts in between.
+	Shared int
 }
 
 // Exact reports whether the distance is pinned down to within tol: Upper − Lower ≤ tol. Lower is
@@ -67,12 +75,17 @@ func (r MatrixFreeResult) Exact(tol float64) bool { return r.Upper-r.Lower <= to
 // entries, a few dozen of them, so it serves widths of 15 to about 24 qubits where no dense
 // matrix fits.
 //
-// W = V†U is applied to a statevector by running U and then the inverse of V. From a random
-// state v, an Arnoldi iteration builds an orthonormal basis Q of span{v, Wv, W²v, …} and the
-// small matrix H with WQ = QH + (rounding). Because W is unitary (normal), the eigenvectors that
-// matter, those at the two ends of the shortest arc holding its eigenphases, are reached as fast
-// as a Lanczos iteration on a Hermitian part of e^{−iφ}W would reach them, at half the cost (a
-// Lanczos step needs W and W†); and H gives the compressions of every Hermitian part at once:
+// W = V†U is applied to a statevector by running U and then the inverse of V. Ops the circuits
+// share at the start (P) and at the end (S) are dropped first: with U = S·A·P and V = S·B·P,
+// W = P†(B†A)P has the eigenvalues of B†A, so D and the phase are those of A and B, and a witness
+// ψ′ for A and B gives the witness P†ψ′ for U and V.
+//
+// From a random state, an Arnoldi iteration builds an orthonormal basis Q of span{v, Wv, W²v, …}
+// and the small matrix H with WQ = QH + (rounding). Because W is unitary (normal), the
+// eigenvectors that matter, those at the two ends of the shortest arc holding its eigenphases,
+// are reached as fast as a Lanczos iteration on a Hermitian part of e^{−iφ}W would reach them,
+// at half the cost (a Lanczos step needs W and W†); and H gives the compressions of every
+// Hermitian part at once:
 //   - ‖(W − e^{iφ})x‖ over x in span Q is at most σ_max(e^{−iφ}H − I), minimised over φ for the
 //     estimate and the phase;
 //   - the Hermitian part (e^{−iφ}W − e^{iφ}W†)/2i, whose eigenvalues are sin(θ_k − φ), gives by
@@ -85,7 +98,8 @@ func (r MatrixFreeResult) Exact(tol float64) bool { return r.Upper-r.Lower <= to
 // 1.648·√n·e^{−√ε(2k−1)} after k steps. It is applied to (e^{−iφ}W − I)†(e^{−iφ}W − I), of order
 // 2·2^n as a real matrix, with k = ⌊(steps − 1)/2⌋ + 1 (the span of m powers of a unitary W holds,
 // after multiplication by a power of W that changes no norm, every polynomial of degree
-// ⌊(m−1)/2⌋ in W + W†).
+// ⌊(m−1)/2⌋ in W + W†). The phase comes from the first space, so it is independent of the second
+// state, as the bound requires.
 //
 // Both circuits must have the same width and only unitary ops; the error names the circuit and op.
 func MatrixFreeDistance(u, v *circuit.Circuit, opts MatrixFreeOptions) (MatrixFreeResult, error) {
@@ -103,58 +117,120 @@ func MatrixFreeDistance(u, v *circuit.Circuit, opts MatrixFreeOptions) (MatrixFr
 	if err != nil {
 		return MatrixFreeResult{}, fmt.Errorf("sim: second circuit: %w", err)
 	}
-	w, err := Compile(u.Clone().Compose(v.Inverse()))
-	if err != nil {
-		return MatrixFreeResult{}, err
-	}
-	opts, err = opts.settle(u.Qubits())
-	if err != nil {
-		return MatrixFreeResult{}, err
-	}
 	n := u.Qubits()
+	opts, err = opts.settle(n)
+	if err != nil {
+		return MatrixFreeResult{}, err
+	}
+	pre, suf := sharedEnds(u, v)
+	middle := span(u, pre, u.Len()-suf)
+	w, err := Compile(middle.Compose(span(v, pre, v.Len()-suf).Inverse()))
+	if err != nil {
+		return MatrixFreeResult{}, err
+	}
+	back, err := Compile(span(u, 0, pre).Inverse())
+	if err != nil {
+		return MatrixFreeResult{}, err
+	}
+	check := &witnessCheck{back: back, u: pu, v: pv}
 	dim := 1 << n
 	rng := rand.New(rand.NewPCG(opts.Seed, 0x6d66))
 	rounding := roundingAllowance(u.Len() + v.Len())
+	res := MatrixFreeResult{Upper: math.Inf(1), Failure: 1, Shared: pre + suf}
 
-	// Explore.
-	ex := newArnoldi(w, randomState(rng, dim), opts.MaxSteps)
-	if err := ex.run(exploreInvariant); err != nil {
+	// Explore: the estimate, the phase and the witness.
+	ex := newArnoldi(w, randomState(rng, dim), opts.ExploreSteps)
+	if err := ex.run(exploreInvariant, nil); err != nil {
 		return MatrixFreeResult{}, err
 	}
-	phase, est := ex.bestPhase()
-	res := MatrixFreeResult{Distance: est, Phase: phase, Steps: ex.steps(), Invariant: ex.invariant, Upper: math.Inf(1), Failure: 1}
-	res.Witness, res.Lower = ex.witness(phase, pu, pv)
+	res.Phase, res.Distance = ex.bestPhase()
+	res.Witness, res.Lower = ex.witness(res.Phase, check)
+	res.Steps = ex.steps()
 	ex = nil // free the basis before the second space is built
+	if opts.CertifySteps < 0 || (opts.Tolerance > 0 && res.Lower > opts.Tolerance) {
+		return res, nil
+	}
 
-	if opts.CertifySteps > 0 {
-		ce := newArnoldi(w, randomState(rng, dim), opts.CertifySteps)
-		if err := ce.run(0); err != nil {
-			return res, err
+	// Certify: an upper bound at the phase found, from an independent random state.
+	ce := newArnoldi(w, randomState(rng, dim), opts.CertifySteps)
+	upper := func() (float64, float64) {
+		xi := ce.deviation(res.Phase)
+		if ce.invariant {
+			return xi + rounding, 0
 		}
-		res.Steps += ce.steps()
-		xi := ce.deviation(phase)
-		switch {
-		case ce.invariant:
-			res.Upper, res.Failure = xi+rounding, 0
-		default:
-			k := (ce.steps()-1)/2 + 1
-			sq := math.Log(1.648*math.Sqrt(2*float64(dim))/opts.Failure) / float64(2*k-1)
-			if eps := sq * sq; eps < 1 {
-				res.Upper, res.Failure = xi/math.Sqrt(1-eps)+rounding, opts.Failure
-			}
+		k := (ce.steps()-1)/2 + 1
+		sq := math.Log(1.648*math.Sqrt(2*float64(dim))/opts.Failure) / float64(2*k-1)
+		if eps := sq * sq; eps < 1 {
+			return xi/math.Sqrt(1-eps) + rounding, opts.Failure
 		}
-		// The second space is an independent look at the spectrum: keep its view when it saw more.
-		if p2, d2 := ce.bestPhase(); d2 > res.Distance {
-			if wit, low := ce.witness(p2, pu, pv); low > res.Lower {
-				res.Witness, res.Lower = wit, low
-			}
-			res.Distance = d2
-			if res.Upper < d2 { // cannot happen in exact arithmetic; keep the report consistent
-				res.Upper = d2 + rounding
-			}
+		return math.Inf(1), 1
+	}
+	settled := func() bool {
+		up, _ := upper()
+		return opts.Tolerance > 0 && up <= opts.Tolerance
+	}
+	if err := ce.run(0, settled); err != nil {
+		return res, err
+	}
+	res.Steps += ce.steps()
+	res.Upper, res.Failure = upper()
+	// The second space is an independent look at the spectrum: keep its view when it saw more.
+	if p2, d2 := ce.bestPhase(); d2 > res.Distance {
+		if wit, low := ce.witness(p2, check); low > res.Lower {
+			res.Witness, res.Lower = wit, low
+		}
+		res.Distance = d2
+		if res.Upper < d2 { // cannot happen in exact arithmetic; keep the report consistent
+			res.Upper = d2 + rounding
 		}
 	}
 	return res, nil
+}
+
+// sharedEnds returns how many ops u and v share at the start, and then at the end.
+func sharedEnds(u, v *circuit.Circuit) (pre, suf int) {
+	for pre < u.Len() && pre < v.Len() && u.Ops[pre].Equal(v.Ops[pre]) {
+		pre++
+	}
+	for suf < u.Len()-pre && suf < v.Len()-pre && u.Ops[u.Len()-1-suf].Equal(v.Ops[v.Len()-1-suf]) {
+		suf++
+	}
+	return pre, suf
+}
+
+// span returns a new circuit of c's width holding copies of c.Ops[from:to].
+func span(c *circuit.Circuit, from, to int) *circuit.Circuit {
+	out := circuit.New(c.Qubits())
+	for _, op := range c.Ops[from:to] {
+		out.AppendOp(op)
+	}
+	return out
+}
+
+// witnessCheck maps a candidate state for the middle parts back to the full circuits and
+// measures it on them.
+type witnessCheck struct {
+	back, u, v *Program
+}
+
+// measure turns ψ′ into ψ = P†ψ′ (in place) and returns min over φ of ‖Uψ − e^{iφ}Vψ‖, from one
+// run of each circuit: the phase that attains it is that of ⟨Vψ|Uψ⟩.
+func (wc *witnessCheck) measure(psi []complex128) float64 {
+	if wc.back.Apply(psi) != nil {
+		return 0
+	}
+	a := append([]complex128(nil), psi...)
+	b := append([]complex128(nil), psi...)
+	if wc.u.Apply(a) != nil || wc.v.Apply(b) != nil {
+		return 0
+	}
+	z := dot(b, a)
+	rot := complex(1, 0)
+	if cmplx.Abs(z) > 0 {
+		rot = z / complex(cmplx.Abs(z), 0)
+	}
+	axpy(-rot, b, a)
+	return norm(a)
 }
 
 // exploreInvariant is the residual below which the exploring Krylov space is taken as invariant:
@@ -169,8 +245,8 @@ func roundingAllowance(gates int) float64 { return 8 * 0x1p-53 * float64(gates+1
 
 // settle fills in defaults and fits the step counts into the memory limit.
 func (o MatrixFreeOptions) settle(n int) (MatrixFreeOptions, error) {
-	if o.MaxSteps == 0 {
-		o.MaxSteps = 32
+	if o.ExploreSteps == 0 {
+		o.ExploreSteps = 12
 	}
 	if o.CertifySteps == 0 {
 		o.CertifySteps = 40
@@ -181,15 +257,15 @@ func (o MatrixFreeOptions) settle(n int) (MatrixFreeOptions, error) {
 	if o.MemoryLimit == 0 {
 		o.MemoryLimit = DefaultMemoryLimit
 	}
-	if o.MaxSteps < 0 || !(o.Failure > 0 && o.Failure < 1) || o.MemoryLimit < 0 {
-		return o, fmt.Errorf("sim: bad matrix-free options: MaxSteps %d, Failure %g, MemoryLimit %d", o.MaxSteps, o.Failure, o.MemoryLimit)
+	if o.ExploreSteps < 0 || !(o.Failure > 0 && o.Failure < 1) || o.MemoryLimit < 0 || !(o.Tolerance >= 0) {
+		return o, fmt.Errorf("sim: bad matrix-free options: ExploreSteps %d, Failure %g, Tolerance %g, MemoryLimit %d", o.ExploreSteps, o.Failure, o.Tolerance, o.MemoryLimit)
 	}
 	vector := int64(16) << n
 	fit := int(o.MemoryLimit/vector) - 2 // the basis plus one working vector
 	if fit < 2 {
 		return o, fmt.Errorf("sim: a %d-qubit matrix-free distance needs at least 4 statevectors (%s), over the limit of %s", n, bytesString(4*vector), bytesString(o.MemoryLimit))
 	}
-	o.MaxSteps = min(o.MaxSteps, fit)
+	o.ExploreSteps = min(o.ExploreSteps, fit)
 	o.CertifySteps = min(o.CertifySteps, fit)
 	return o, nil
 }
@@ -223,39 +299,51 @@ func (a *arnoldi) steps() int { return len(a.h) }
 
 // run applies W up to max times, orthogonalising each new vector against the basis again while a
 // pass removes more than 30% of its norm (Gram–Schmidt with reorthogonalisation, the DGKS
-// criterion, at most three passes), and stops early when the residual falls to stop or below, or
-// the basis fills the whole space (then the space is invariant).
-func (a *arnoldi) run(stop float64) error {
-	for len(a.h) < a.max {
-		j := len(a.h)
-		x := append([]complex128(nil), a.basis[j]...)
-		if err := a.w.Apply(x); err != nil {
+// criterion, at most three passes). It stops early when the residual falls to stop or below, or
+// the basis fills the whole space (then the space is invariant), or done, when given, reports
+// that enough is known.
+func (a *arnoldi) run(stop float64, done func() bool) error {
+	for len(a.h) < a.max && !a.invariant {
+		if err := a.step(stop); err != nil {
 			return err
 		}
-		col := make([]complex128, j+2)
-		before := norm(x)
-		for pass := 0; pass < 3; pass++ {
-			for i, q := range a.basis {
-				c := dot(q, x)
-				col[i] += c
-				axpy(-c, q, x)
-			}
-			if norm(x) > 0.7*before {
-				break
-			}
-			before = norm(x)
-		}
-		beta := norm(x)
-		col[j+1] = complex(beta, 0)
-		a.h = append(a.h, col)
-		if beta <= stop || beta < 1e-290 || len(a.basis) == len(x) {
-			col[j+1] = 0
-			a.invariant = true
+		if done != nil && done() {
 			return nil
 		}
-		scale(x, 1/beta)
-		a.basis = append(a.basis, x)
 	}
+	return nil
+}
+
+// step applies W once and extends the basis.
+func (a *arnoldi) step(stop float64) error {
+	j := len(a.h)
+	x := append([]complex128(nil), a.basis[j]...)
+	if err := a.w.Apply(x); err != nil {
+		return err
+	}
+	col := make([]complex128, j+2)
+	before := norm(x)
+	for pass := 0; pass < 3; pass++ {
+		for i, q := range a.basis {
+			c := dot(q, x)
+			col[i] += c
+			axpy(-c, q, x)
+		}
+		if norm(x) > 0.7*before {
+			break
+		}
+		before = norm(x)
+	}
+	beta := norm(x)
+	col[j+1] = complex(beta, 0)
+	a.h = append(a.h, col)
+	if beta <= stop || beta < 1e-290 || len(a.basis) == len(x) {
+		col[j+1] = 0
+		a.invariant = true
+		return nil
+	}
+	scale(x, 1/beta)
+	a.basis = append(a.basis, x)
 	return nil
 }
 
@@ -325,7 +413,7 @@ func (a *arnoldi) bestPhase() (phi, dev float64) {
 // measure its phase-free deviation, and returns the best. The candidates are the equal-weight
 // sum of the Ritz vectors at the two extremes of sin(θ − φ) (the two ends of the arc) and the
 // vector of largest deviation at φ.
-func (a *arnoldi) witness(phi float64, pu, pv *Program) ([]complex128, float64) {
+func (a *arnoldi) witness(phi float64, check *witnessCheck) ([]complex128, float64) {
 	m := len(a.h)
 	var cands [][]complex128
 	lo, hi := skewExtremes(a.h, m, phi)
@@ -346,7 +434,7 @@ func (a *arnoldi) witness(phi float64, pu, pv *Program) ([]complex128, float64) 
 		} else {
 			continue
 		}
-		if low := phaseFreeDeviation(psi, pu, pv); low > bestLow {
+		if low := check.measure(psi); low > bestLow {
 			best, bestLow = psi, low
 		}
 	}
@@ -362,23 +450,6 @@ func (a *arnoldi) lift(y []complex128) []complex128 {
 		}
 	}
 	return out
-}
-
-// phaseFreeDeviation returns min over φ of ‖Uψ − e^{iφ}Vψ‖ for a unit ψ, from one run of each
-// circuit: the phase that attains it is that of ⟨Vψ|Uψ⟩.
-func phaseFreeDeviation(psi []complex128, pu, pv *Program) float64 {
-	a := append([]complex128(nil), psi...)
-	b := append([]complex128(nil), psi...)
-	if pu.Apply(a) != nil || pv.Apply(b) != nil {
-		return 0
-	}
-	z := dot(b, a)
-	rot := complex(1, 0)
-	if cmplx.Abs(z) > 0 {
-		rot = z / complex(cmplx.Abs(z), 0)
-	}
-	axpy(-rot, b, a)
-	return norm(a)
 }
 
 func wrapAngle(x float64) float64 {
