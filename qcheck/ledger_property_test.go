@@ -43,16 +43,16 @@ func drawApproximatePass(t *rapid.T, n, maxOps int) approximatePass {
 		case 0: // the gate with its angles nudged, or the gate itself when it has none
 			g := lop.Gate.Clone()
 			for k := range g.Params {
-				g.Params[k] += rapid.Float64Range(-0.05, 0.05).Draw(t, "nudge")
+				g.Params[k] += drawAngle(t, -0.05, 0.05, "nudge")
 			}
 			repl.Append(g, lop.Qubits...)
 		case 1: // the gate, then a small rotation on one of its qubits
 			repl.AppendOp(lop)
 			q := rapid.IntRange(0, len(op.Qubits)-1).Draw(t, "extra qubit")
-			repl.RX(rapid.Float64Range(-0.05, 0.05).Draw(t, "extra angle"), q)
+			repl.RX(drawAngle(t, -0.05, 0.05, "extra angle"), q)
 		default: // anything at all on the same qubits
 			if len(op.Qubits) == 1 {
-				repl.U(rapid.Float64Range(-4, 4).Draw(t, "θ"), rapid.Float64Range(-4, 4).Draw(t, "φ"), rapid.Float64Range(-4, 4).Draw(t, "λ"), 0)
+				repl.U(drawAngle(t, -4, 4, "θ"), drawAngle(t, -4, 4, "φ"), drawAngle(t, -4, 4, "λ"), 0)
 			} else {
 				repl = drawCircuit(t, 2, 3, "arbitrary")
 			}
@@ -175,7 +175,7 @@ func TestProbabilityBound(t *testing.T) {
 		v := u.Clone()
 		k := rapid.IntRange(0, v.Len()-1).Draw(t, "changed op")
 		if len(v.Ops[k].Gate.Params) > 0 {
-			v.Ops[k].Gate.Params[0] += rapid.Float64Range(-0.3, 0.3).Draw(t, "nudge")
+			v.Ops[k].Gate.Params[0] += drawAngle(t, -0.3, 0.3, "nudge")
 		} else {
 			v.Ops = append(v.Ops[:k], v.Ops[k+1:]...)
 		}
