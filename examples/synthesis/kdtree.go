@@ -32,9 +32,11 @@ func (t *kdTree) build(lo, hi, depth int) {
 	t.build(mid+1, hi, depth+1)
 }
 
-// nearest returns the index of the point closest to q and the squared distance.
-func (t *kdTree) nearest(q quat) (int, float64) {
-	best, bestD := -1, 5.0 // unit quaternions are at most 2 apart: squared distance ≤ 4
+// nearest returns the index of the point closest to q and the squared distance, or −1 when no
+// point is closer than the squared distance bound (start with 5: unit quaternions are at most 2
+// apart, so 4 is the largest squared distance).
+func (t *kdTree) nearest(q quat, bound float64) (int, float64) {
+	best, bestD := -1, bound
 	var search func(lo, hi, depth int)
 	search = func(lo, hi, depth int) {
 		if lo >= hi {

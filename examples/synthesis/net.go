@@ -103,8 +103,8 @@ func (n *Net) word(i int32) word {
 func (n *Net) nearest(q quat) (word, quat) {
 	q = q.canonical()
 	// ±q are the same operator; the tree holds canonical points, so search near both.
-	i, d := n.tree.nearest(q)
-	if j, e := n.tree.nearest(quat{-q[0], -q[1], -q[2], -q[3]}); e < d {
+	i, d := n.tree.nearest(q, 5)
+	if j, _ := n.tree.nearest(quat{-q[0], -q[1], -q[2], -q[3]}, d); j >= 0 {
 		i = j
 	}
 	return n.word(int32(i)), n.nodes[i].q
