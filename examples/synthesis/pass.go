@@ -81,18 +81,12 @@ func (p Pass) Run(c *circuit.Circuit, rec qcheck.Recorder) (*circuit.Circuit, er
 				return nil
 			}
 		}
-		var best synthesized
-		for level := 0; level <= levels; level++ {
-			a := p.Net.solovayKitaev(u, level)
-			best = synthesized{op: i, w: a.w, dist: u.distance(a.w.element())}
-			if best.dist <= target {
-				break
-			}
-		}
-		if best.dist > target {
+		w, dist, _ := p.Net.approximate(u, target, levels)
+		if dist > target {
 			return fmt.Errorf("synthesis: op %d (%s): after %d levels the word is %.3g away, over its share %.3g of ε = %g; use a longer net, more levels or a larger ε",
-				i, c.Ops[i], levels, best.dist, share, p.Epsilon)
+				i, c.Ops[i], levels, dist, share, p.Epsilon)
 		}
+		best := synthesized{op: i, w: w, dist: dist}
 		cache.Store(key(u.canonical()), best)
 		results[k] = best
 		return nil

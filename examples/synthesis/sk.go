@@ -8,6 +8,24 @@ type approximation struct {
 	q quat
 }
 
+// approximate returns the word of the first level of the recursion, from 0 up to maxLevels, whose
+// operator is within eps of u, with its distance (recomputed from the word's letters) and the
+// level; when no level reaches eps, the deepest level's word.
+func (n *Net) approximate(u quat, eps float64, maxLevels int) (word, float64, int) {
+	var (
+		w     word
+		dist  float64
+		level int
+	)
+	for level = 0; level <= maxLevels; level++ {
+		w = n.solovayKitaev(u, level).w
+		if dist = u.distance(w.element()); dist <= eps {
+			break
+		}
+	}
+	return w, dist, min(level, maxLevels)
+}
+
 // solovayKitaev returns a word approximating u with n levels of the recursion of Dawson &
 // Nielsen (2006), §3, on top of the net's basic approximations:
 //
