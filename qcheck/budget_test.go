@@ -156,3 +156,11 @@ func ExampleWithinBudget() {
 	// Output:
 	// failed: false, bound 2.30e-03
 }
+
+func ExampleWeightedSplit() {
+	// Three pieces whose synthesis costs 1, 1 and 2 units: the dearer one gets twice the share.
+	shares, _ := WeightedSplit(1e-3, []float64{1, 1, 2})
+	fmt.Printf("%.2e %.2e %.2e\n", shares[0], shares[1], shares[2])
+	// Output:
+	// 2.50e-04 2.50e-04 5.00e-04
+}

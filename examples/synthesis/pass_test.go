@@ -62,10 +62,14 @@ func randomCircuit(r *rand.Rand, n, ops int) *circuit.Circuit {
 func TestWordsAreProductsOfTheGateSet(t *testing.T) {
 	r := rand.New(rand.NewSource(1))
 	before := randomCircuit(r, 3, 40)
+	orig := before.Clone()
 	var l qcheck.Ledger
 	after, err := Pass{Net: smallNet(), Epsilon: 0.2, MaxLevels: 3}.Run(before, &l)
 	if err != nil {
 		t.Fatal(err)
+	}
+	if !before.Equal(orig) {
+		t.Fatal("the pass modified its input")
 	}
 	if l.Len() == 0 {
 		t.Fatal("no rotation was replaced")
