@@ -125,7 +125,7 @@ func (s *spectrum) transform(alpha float64, work []complex128, piv []int) bool {
 		tau:  make([]complex128, n),
 	}
 	s.tri.off = s.tri.off[:max(n-1, 0)]
-	s.tri.reduce(work[2*n*n : 2*n*n+n])
+	s.tri.reduce()
 	var vals []float64
 	var ok bool
 	if s.withVectors {
