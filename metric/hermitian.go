@@ -20,7 +20,11 @@ type tridiagonal struct {
 	off  []float64    // sub-diagonal of T, length n−1
 	tau  []complex128 // reflector k is I − tau[k]·v·vᴴ, v = (1, a[k+2:n, k])
 	wbuf []complex128 // the vector w of the current rank-2 update
+	work []complex128 // n·(maxWorkers+2) elements for reduce, or nil to allocate
 }
+
+// maxWorkers caps the goroutines one reduction or product uses.
+const maxWorkers = 8
 
 // reduce overwrites t.a (n×n, column-major, Hermitian: only the lower triangle
 // is read) with the reflectors and fills diag, off and tau.
@@ -38,14 +42,17 @@ func (t *tridiagonal) reduce() {
 	}
 	workers := 1
 	if n >= parallelTridiagonal {
-		workers = max(1, min(runtime.GOMAXPROCS(0), 8))
+		workers = max(1, min(runtime.GOMAXPROCS(0), maxWorkers))
 	}
-	x := make([]complex128, n*(workers+1))
-	ys := make([][]complex128, workers)
+	if len(t.work) < n*(workers+1) {
+		t.work = make([]complex128, n*(workers+1))
+	}
+	x := t.work[:n]
+	var yarr [maxWorkers][]complex128
+	ys := yarr[:workers]
 	for w := range ys {
-		ys[w] = x[n*(w+1) : n*(w+2)]
+		ys[w] = t.work[n*(w+1) : n*(w+2)]
 	}
-	x = x[:n]
 	t.wbuf = x
 
 	// Reflector 0 and its product with the trailing block.
@@ -256,15 +263,12 @@ func (t *tridiagonal) values() ([]float64, bool) {
 	return t.diag, ok
 }
 
-// vectors returns the eigenvalues of T in ascending order and the
-// eigenvectors of T as the columns of a row-major n×n real matrix, overwriting
-// diag and off.
-func (t *tridiagonal) vectors() ([]float64, []float64, bool) {
-	n := t.n
-	z := make([]float64, n*n)
-	work := make([]float64, max(1, 2*n-2))
-	ok := lapackgonum.Implementation{}.Dsteqr(lapack.EVTridiag, n, t.diag, t.off, z, n, work)
-	return t.diag, z, ok
+// vectors returns the eigenvalues of T in ascending order, overwriting diag
+// and off, and puts the eigenvectors of T into the columns of z (row-major
+// n×n). work needs length max(1, 2n−2).
+func (t *tridiagonal) vectors(z, work []float64) ([]float64, bool) {
+	ok := lapackgonum.Implementation{}.Dsteqr(lapack.EVTridiag, t.n, t.diag, t.off, z, t.n, work)
+	return t.diag, ok
 }
 
 // backTransform turns an eigenvector of T, given as column j of the
