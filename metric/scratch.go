@@ -7,12 +7,12 @@ import "sync"
 // Slices handed out by take are not cleared: every user writes before it
 // reads.
 type scratch struct {
-	c   []complex128
-	f   []float64
-	i   []int
-	nc  int // complex elements handed out so far
-	nf  int
-	ni  int
+	c  []complex128
+	f  []float64
+	i  []int
+	nc int // complex elements handed out so far
+	nf int
+	ni int
 }
 
 var scratchPool sync.Pool

@@ -230,4 +230,3 @@ func wrapPhase(x float64) float64 {
 	}
 	return x
 }
-
