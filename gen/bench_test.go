@@ -66,3 +66,19 @@ func BenchmarkClifford5(b *testing.B) {
 		g.Example(i)
 	}
 }
+
+// BenchmarkHouseholderQR8 is the QR on a 256×256 matrix, quick enough to
+// compare code changes on a busy machine.
+func BenchmarkHouseholderQR8(b *testing.B) {
+	const d = 256
+	rng := rand.New(rand.NewPCG(1, 1))
+	a := make([]complex128, d*d)
+	work := make([]complex128, d*d)
+	for i := range a {
+		a[i] = complex(rng.NormFloat64(), rng.NormFloat64())
+	}
+	for b.Loop() {
+		copy(work, a)
+		householderQR(work, d)
+	}
+}
