@@ -23,8 +23,13 @@ func BenchmarkHaarUnitary10(b *testing.B) {
 
 // BenchmarkHouseholderQR10 is the QR alone on a 1024×1024 complex Gaussian
 // matrix, the cost BenchmarkHaarUnitary10 rests on.
-func BenchmarkHouseholderQR10(b *testing.B) {
-	const d = 1024
+func BenchmarkHouseholderQR10(b *testing.B) { benchmarkQR(b, 1024) }
+
+// BenchmarkHouseholderQR8 is the QR on a 256×256 matrix, quick enough to
+// compare code changes on a busy machine.
+func BenchmarkHouseholderQR8(b *testing.B) { benchmarkQR(b, 256) }
+
+func benchmarkQR(b *testing.B, d int) {
 	rng := rand.New(rand.NewPCG(1, 1))
 	a := make([]complex128, d*d)
 	work := make([]complex128, d*d)
@@ -67,18 +72,3 @@ func BenchmarkClifford5(b *testing.B) {
 	}
 }
 
-// BenchmarkHouseholderQR8 is the QR on a 256×256 matrix, quick enough to
-// compare code changes on a busy machine.
-func BenchmarkHouseholderQR8(b *testing.B) {
-	const d = 256
-	rng := rand.New(rand.NewPCG(1, 1))
-	a := make([]complex128, d*d)
-	work := make([]complex128, d*d)
-	for i := range a {
-		a[i] = complex(rng.NormFloat64(), rng.NormFloat64())
-	}
-	for b.Loop() {
-		copy(work, a)
-		householderQR(work, d)
-	}
-}

@@ -8,6 +8,7 @@ import (
 	"testing"
 
 	"gonum.org/v1/gonum/mat"
+	"pgregory.net/rapid"
 	"qcheck.dev/qcheck/circuit"
 )
 
@@ -302,4 +303,43 @@ func TestCircuitShrinksTowardSimpleGatesAndAngles(t *testing.T) {
 	if want := circuit.New(4).RZ(math.Pi/4, 0); !got.Equal(want) {
 		t.Errorf("a circuit with a nonzero angle shrinks to\n%v\nwant\n%v", got, want)
 	}
+}
+
+func TestCircuitAnyOptions(t *testing.T) {
+	// Whatever sensible options a test passes, every draw is a valid circuit
+	// within them (a property test over Options themselves).
+	var unitary []string
+	for _, s := range circuit.Standard() {
+		if g, err := circuit.NewGate(s.Name, make([]float64, s.Params)...); err == nil && g.Unitary() {
+			unitary = append(unitary, s.Name)
+		}
+	}
+	rapid.Check(t, func(rt *rapid.T) {
+		qubits := rapid.IntRange(1, 5).Draw(rt, "qubits")
+		maxOps := rapid.IntRange(1, 30).Draw(rt, "maxOps")
+		minOps := rapid.IntRange(0, maxOps).Draw(rt, "minOps")
+		set := rapid.SliceOfNDistinct(rapid.SampledFrom(unitary), 1, 6, rapid.ID[string]).
+			Filter(func(names []string) bool {
+				for _, n := range names {
+					if s, _ := circuit.Lookup(n); s.Qubits > qubits {
+						return false
+					}
+				}
+				return true
+			}).Draw(rt, "gates")
+		opts := Options{Qubits: qubits, MinOps: minOps, MaxOps: maxOps, GateSet: set,
+			Motifs: rapid.IntRange(-1, 100).Draw(rt, "motifs")}
+		c := Circuit(opts).Draw(rt, "circuit")
+		if err := c.Validate(); err != nil {
+			rt.Fatalf("invalid circuit: %v\n%v", err, c)
+		}
+		if c.Qubits() != qubits || c.Len() < minOps || c.Len() > maxOps {
+			rt.Fatalf("%d qubits, %d ops; want %d qubits, %d..%d ops", c.Qubits(), c.Len(), qubits, minOps, maxOps)
+		}
+		for i, op := range c.Ops {
+			if !slices.Contains(set, op.Gate.Name) {
+				rt.Fatalf("op %d is %v, outside the set %v", i, op, set)
+			}
+		}
+	})
 }
