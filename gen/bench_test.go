@@ -71,4 +71,3 @@ func BenchmarkClifford5(b *testing.B) {
 		g.Example(i)
 	}
 }
-
