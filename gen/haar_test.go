@@ -86,7 +86,7 @@ func TestUnitaryEntryLaw(t *testing.T) {
 	// per matrix keeps the sample independent; the entry's position cycles so
 	// every position is used. Six KS checks (d = 2, 4, 8; drawn with Example
 	// and inside rapid.Check), each at 1e-6/6: false failure ≤ 1e-6 per run.
-	const n = 4000
+	n := sampleSize(4000, 25)
 	alpha := falseFailure / 6
 	for _, qubits := range []int{1, 2, 3} {
 		d := 1 << qubits
@@ -147,7 +147,7 @@ func traceMomentsCheck(us []*mat.CDense, alpha float64) string {
 func TestUnitaryTraceMoments(t *testing.T) {
 	// Three dimensions × two moments; traceMomentsCheck runs both moments at
 	// alpha each, so alpha = 1e-6/6 keeps the run's false failure ≤ 1e-6.
-	const n = 20000
+	n := sampleSize(20000, 10)
 	alpha := falseFailure / 6
 	for _, qubits := range []int{1, 2, 3} {
 		us, _ := drawAll(t, Unitary(qubits), n, 50000*qubits)
@@ -238,10 +238,7 @@ func TestUnitarySpacingLaw(t *testing.T) {
 	// spacing law exactly. Two KS checks (Example, rapid.Check) at 1e-6/2
 	// each: false failure ≤ 1e-6 per run.
 	const surmiseGap = 0.002
-	n := 200
-	if !testing.Short() {
-		n = 400
-	}
+	n := sampleSize(150, 20)
 	alpha := falseFailure / 2
 	pick := rand.New(rand.NewPCG(11, 11))
 	example, checked := drawAll(t, Unitary(6), n, 900000)
@@ -268,7 +265,7 @@ func TestStateEntryLaw(t *testing.T) {
 	// |ψ_i|² of a Haar-random state of dimension d follows Beta(1, d−1)
 	// (uniform unit vector in C^d; Mezzadri 2007 §2). One coordinate per
 	// state, position cycling. Six KS checks at 1e-6/6: false failure ≤ 1e-6.
-	const n = 4000
+	n := sampleSize(4000, 25)
 	alpha := falseFailure / 6
 	for _, qubits := range []int{1, 2, 3} {
 		d := 1 << qubits
