@@ -23,6 +23,11 @@ func benchCircuits(b testing.TB) map[string]*circuit.Circuit {
 	return out
 }
 
+// reportCPU adds the process CPU time per op since start (all goroutines together) as "cpu-s/op".
+func reportCPU(b *testing.B, start float64) {
+	b.ReportMetric((processCPU()-start)/float64(b.N), "cpu-s/op")
+}
+
 // BenchmarkUnitary builds the dense unitary of 10 qubits × 1000 gates, 12 qubits × 200 gates,
 // and the sweep of 200 gates from 6 to 12 qubits.
 func BenchmarkUnitary(b *testing.B) {
@@ -34,11 +39,13 @@ func BenchmarkUnitary(b *testing.B) {
 	for _, name := range names {
 		c := circuits[name]
 		b.Run(name, func(b *testing.B) {
+			cpu := processCPU()
 			for b.Loop() {
 				if _, err := Unitary(c); err != nil {
 					b.Fatal(err)
 				}
 			}
+			reportCPU(b, cpu)
 		})
 	}
 }
@@ -52,12 +59,13 @@ func BenchmarkApply(b *testing.B) {
 	}
 	state := make([]complex128, 1<<c.Qubits())
 	state[0] = 1
-	b.SetBytes(int64(len(state)) * 16 * int64(len(c.Ops)))
+	cpu := processCPU()
 	for b.Loop() {
 		if err := p.Apply(state); err != nil {
 			b.Fatal(err)
 		}
 	}
+	reportCPU(b, cpu)
 	b.ReportMetric(float64(len(p.kernels)), "fused-gates")
 }
 
@@ -76,9 +84,11 @@ func BenchmarkSweep(b *testing.B) {
 	copy(other, state) // fault the pages in before timing
 	b.Run("copy", func(b *testing.B) {
 		b.SetBytes(bytes)
+		cpu := processCPU()
 		for b.Loop() {
 			copy(other, state)
 		}
+		reportCPU(b, cpu)
 	})
 	gates := []struct {
 		name string
@@ -90,6 +100,8 @@ func BenchmarkSweep(b *testing.B) {
 		{"rz-q5", circuit.New(n).RZ(0.3, 5)},
 		{"cx-q3-q17", circuit.New(n).CX(3, 17)},
 		{"rxx-q2-q20", circuit.New(n).RXX(0.4, 2, 20)},
+		{"crx-q15-q0", circuit.New(n).CRX(0.6, 15, 0)},
+		{"rxx-q0-q1", circuit.New(n).RXX(0.4, 0, 1)},
 		{"fused-u-cx-q1-q9", circuit.New(n).U(0.1, 0.2, 0.3, 1).RY(0.5, 9).CX(1, 9).RZ(0.7, 9)},
 	}
 	for _, g := range gates {
@@ -99,11 +111,13 @@ func BenchmarkSweep(b *testing.B) {
 		}
 		b.Run(strings.ReplaceAll(g.name, " ", ""), func(b *testing.B) {
 			b.SetBytes(bytes)
+			cpu := processCPU()
 			for b.Loop() {
 				if err := p.Apply(state); err != nil {
 					b.Fatal(err)
 				}
 			}
+			reportCPU(b, cpu)
 		})
 	}
 }

@@ -39,7 +39,7 @@ type kernel struct {
 	offs   []int        // offs[a] is the index offset of local state a within a group
 	m      []complex128 // the gate's matrix, row-major 2^k × 2^k in local order
 
-	// pairKind: the two local states and the 2×2 block.
+	// pairKind: the index offsets of the two local states it moves, and the 2×2 block.
 	p0, p1             int
 	m00, m01, m10, m11 complex128
 	// diagonalKind and swapKind: local states multiplied by a phase in place.
@@ -53,17 +53,21 @@ type kernel struct {
 	scratchLen int
 }
 
+// scaled multiplies the amplitude at index offset off of each group by v.
 type scaled struct {
 	off int
 	v   complex128
 }
 
-// swapped exchanges local states a and b: new[a] = va·old[b], new[b] = vb·old[a].
+// swapped exchanges the amplitudes at index offsets a and b of each group:
+// new[a] = va·old[b], new[b] = vb·old[a].
 type swapped struct {
 	a, b   int
 	va, vb complex128
 }
 
+// sparseRow writes the amplitude at index offset a of each group as Σ vals[t]·old[cols[t]], with
+// cols in local states.
 type sparseRow struct {
 	a    int
 	cols []int
@@ -242,12 +246,16 @@ func (kn *kernel) apply(data []complex128, g0, g1 int) {
 			scratch = make([]complex128, kn.scratchLen) // once per call, not per group
 		}
 	}
+	// The base of group g0 has zeros inserted at the gate's bits; each later run starts at the
+	// next index with zeros there, found without redoing the insertion.
+	base := g0
+	mask := 0
+	for _, b := range kn.sorted {
+		base = (base>>b)<<(b+1) | base&(1<<b-1)
+		mask |= 1 << b
+	}
 	run := 1 << kn.sorted[0]
 	for g := g0; g < g1; {
-		base := g
-		for _, b := range kn.sorted {
-			base = (base>>b)<<(b+1) | base&(1<<b-1)
-		}
 		r := min(run-g&(run-1), g1-g)
 		switch kn.kind {
 		case pairKind:
@@ -263,6 +271,7 @@ func (kn *kernel) apply(data []complex128, g0, g1 int) {
 			kn.sparseRun(data, base, r, scratch)
 		}
 		g += r
+		base = (((base + r - 1) | mask) + 1) &^ mask
 	}
 }
 

@@ -4,6 +4,7 @@ import (
 	"math"
 	"math/cmplx"
 	"math/rand/v2"
+	"strings"
 	"testing"
 
 	"qcheck.dev/qcheck/circuit"
@@ -120,5 +121,30 @@ func TestStatevectorParallelAndInverse(t *testing.T) {
 	}
 	if worst > 1e-11 {
 		t.Errorf("Apply(c.Inverse()) after Apply(c) is off the input by %.3g", worst)
+	}
+}
+
+// Edge widths and sizes: the empty register has the 1×1 unitary [1]; a wrong state length and a
+// matrix over the memory limit are errors that give the sizes (2^14 × 2^14 entries of 16 bytes
+// are 4 GiB, worked out by hand).
+func TestSizes(t *testing.T) {
+	u := unitaryOf(t, circuit.New(0))
+	if r, c := u.Dims(); r != 1 || c != 1 || u.At(0, 0) != 1 {
+		t.Errorf("0-qubit unitary is %d×%d %v, want [1]", r, c, u.At(0, 0))
+	}
+	state := []complex128{0.5}
+	if err := Apply(circuit.New(0), state); err != nil || state[0] != 0.5 {
+		t.Errorf("0-qubit Apply: %v, state %v", err, state)
+	}
+	err := Apply(circuit.New(3).H(0), make([]complex128, 4))
+	if err == nil || !strings.Contains(err.Error(), "4 entries") || !strings.Contains(err.Error(), "= 8") {
+		t.Errorf("wrong state length: got %v", err)
+	}
+	_, err = UnitaryWithin(circuit.New(14).H(3), 1<<30)
+	if err == nil || !strings.Contains(err.Error(), "4.0 GiB") || !strings.Contains(err.Error(), "1.0 GiB") {
+		t.Errorf("over the limit: got %v", err)
+	}
+	if _, err := Compile(circuit.New(2).H(0).Reset(1)); err == nil || !strings.Contains(err.Error(), "op 1 (reset)") {
+		t.Errorf("reset: got %v", err)
 	}
 }

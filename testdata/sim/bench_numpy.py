@@ -21,12 +21,14 @@ def ops_of(c):
 
 
 def best_of(f, repeat):
-    times = []
+    """Best and median wall time, and the median process CPU time (all threads), in seconds."""
+    walls, cpus = [], []
     for _ in range(repeat):
-        t = time.perf_counter()
+        t, c = time.perf_counter(), time.process_time()
         f()
-        times.append(time.perf_counter() - t)
-    return min(times), sorted(times)[len(times) // 2]
+        walls.append(time.perf_counter() - t)
+        cpus.append(time.process_time() - c)
+    return min(walls), sorted(walls)[len(walls) // 2], sorted(cpus)[len(cpus) // 2]
 
 
 def main():
@@ -46,9 +48,10 @@ def main():
             psi[0] = 1
             f = lambda: reference.statevector(n, ops, psi)
             kind = "statevector"
-        repeat = 3 if n >= 11 else 5
-        best, median = best_of(f, repeat)
-        print("%-16s %-11s best %10.1f ms  median %10.1f ms  (%d runs)" % (c["name"], kind, best * 1e3, median * 1e3, repeat))
+        repeat = 1 if n >= 12 else 3 if n >= 11 else 5
+        best, median, cpu = best_of(f, repeat)
+        print("%-16s %-11s wall best %10.3f s  median %10.3f s  cpu median %10.3f s  (%d runs)"
+              % (c["name"], kind, best, median, cpu, repeat), flush=True)
 
 
 if __name__ == "__main__":
