@@ -443,7 +443,7 @@ func (p *parser) barrier() error {
 	if p.cfg.dropBarriers {
 		return nil
 	}
-	seen := map[int]bool{}
+	seen := make([]bool, p.nq)
 	var qubits []int
 	for _, a := range qs {
 		lo, hi := a.index, a.index+1
