@@ -8,6 +8,7 @@ import (
 
 	"gonum.org/v1/gonum/mat"
 	"pgregory.net/rapid"
+	"qcheck.dev/gen"
 	"qcheck.dev/qcheck/circuit"
 	"qcheck.dev/qcheck/sim"
 )
@@ -194,4 +195,30 @@ func TestAppendAngle(t *testing.T) {
 			t.Errorf("appendAngle(%v) = %s, want %s", v, got, want)
 		}
 	}
+}
+
+// The same round trip over the gen package's circuits, which add motifs (runs, inverse pairs,
+// repeated blocks) and its own mix of special angles.
+func TestFormatRoundTripGen(t *testing.T) {
+	var set []string
+	for _, s := range circuit.Standard() {
+		if g, err := circuit.NewGate(s.Name, make([]float64, s.Params)...); err == nil && g.Unitary() && s.Qubits <= 4 {
+			set = append(set, s.Name)
+		}
+	}
+	circuits := gen.Circuit(gen.Options{Qubits: 4, MaxOps: 40, GateSet: set})
+	rapid.Check(t, func(t *rapid.T) {
+		c := circuits.Draw(t, "circuit")
+		src, err := Format(c)
+		if err != nil {
+			t.Fatalf("Format: %v", err)
+		}
+		back, err := Parse(src)
+		if err != nil {
+			t.Fatalf("Parse: %v\n%s", err, src)
+		}
+		if !back.Equal(c) {
+			t.Fatalf("round trip changed the circuit\nwrote:\n%s", src)
+		}
+	})
 }
