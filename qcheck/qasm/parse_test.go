@@ -227,3 +227,20 @@ func TestParseExpansionLimit(t *testing.T) {
 }
 
 func itoa(i int) string { return string(rune('0'+i/10)) + string(rune('0'+i%10)) }
+
+// A barrier over a register of 200,000 qubits survives a round trip in well under a second: no
+// step may be quadratic in the number of operands (the fuzzer found one in Validate).
+func TestWideBarrierRoundTrip(t *testing.T) {
+	c := mustParse(t, "OPENQASM 2;qreg q[200000];barrier q;").Circuit
+	if len(c.Ops) != 1 || len(c.Ops[0].Qubits) != 200000 {
+		t.Fatalf("got %d ops", len(c.Ops))
+	}
+	src, err := Format(c)
+	if err != nil {
+		t.Fatal(err)
+	}
+	back, err := Parse(src)
+	if err != nil || !back.Equal(c) {
+		t.Fatalf("round trip: %v", err)
+	}
+}
