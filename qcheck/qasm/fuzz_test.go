@@ -50,16 +50,6 @@ func FuzzParse(f *testing.F) {
 			// slow for the fuzzer's hang detector; TestWideBarrierRoundTrip covers it.
 			return
 		}
-		out, err := Format(c)
-		if err != nil {
-			t.Fatalf("parsed circuit cannot be written: %v", err)
-		}
-		back, err := Parse(out)
-		if err != nil {
-			t.Fatalf("written source does not parse: %v\n%s", err, out)
-		}
-		if !back.Equal(c) {
-			t.Fatalf("round trip changed the circuit:\nparsed  %v\nwritten %s\nread back %v", c.Ops, out, back.Ops)
-		}
+		roundTrip(t, c)
 	})
 }

@@ -60,6 +60,21 @@ func anyCircuit() *rapid.Generator[*circuit.Circuit] {
 	})
 }
 
+// roundTrip fails unless Parse(Format(c)) equals c op for op, with the same classical register.
+func roundTrip(t interface{ Fatalf(string, ...any) }, c *circuit.Circuit) {
+	src, err := Format(c)
+	if err != nil {
+		t.Fatalf("Format: %v", err)
+	}
+	back, err := Parse(src)
+	if err != nil {
+		t.Fatalf("Parse: %v\n%s", err, src)
+	}
+	if !back.Equal(c) || back.Clbits() != c.Clbits() {
+		t.Fatalf("round trip changed the circuit\nbefore: %v\nwrote:\n%s\nread back: %v", c.Ops, src, back.Ops)
+	}
+}
+
 func seq(n int) []int {
 	out := make([]int, n)
 	for i := range out {
@@ -73,17 +88,7 @@ func seq(n int) []int {
 func TestFormatRoundTrip(t *testing.T) {
 	rapid.Check(t, func(t *rapid.T) {
 		c := anyCircuit().Draw(t, "circuit")
-		src, err := Format(c)
-		if err != nil {
-			t.Fatalf("Format: %v", err)
-		}
-		back, err := Parse(src)
-		if err != nil {
-			t.Fatalf("Parse: %v\n%s", err, src)
-		}
-		if !back.Equal(c) || back.Clbits() != c.Clbits() {
-			t.Fatalf("round trip changed the circuit\nwrote:\n%s\ngot %v", src, back.Ops)
-		}
+		roundTrip(t, c)
 	})
 }
 
@@ -209,16 +214,6 @@ func TestFormatRoundTripGen(t *testing.T) {
 	circuits := gen.Circuit(gen.Options{Qubits: 4, MaxOps: 40, GateSet: set})
 	rapid.Check(t, func(t *rapid.T) {
 		c := circuits.Draw(t, "circuit")
-		src, err := Format(c)
-		if err != nil {
-			t.Fatalf("Format: %v", err)
-		}
-		back, err := Parse(src)
-		if err != nil {
-			t.Fatalf("Parse: %v\n%s", err, src)
-		}
-		if !back.Equal(c) {
-			t.Fatalf("round trip changed the circuit\nwrote:\n%s", src)
-		}
+		roundTrip(t, c)
 	})
 }
