@@ -182,6 +182,10 @@ func TestFormatErrors(t *testing.T) {
 	}
 	for _, tc := range cases {
 		_, err := Format(tc.c)
+		if err == nil {
+			t.Errorf("Format accepted %v", tc.c.Ops)
+			continue
+		}
 		if err == nil || !strings.Contains(err.Error(), tc.words) {
 			t.Errorf("Format: error %v, want …%s…", err, tc.words)
 		}
@@ -216,4 +220,19 @@ func TestFormatRoundTripGen(t *testing.T) {
 		c := circuits.Draw(t, "circuit")
 		roundTrip(t, c)
 	})
+}
+
+// A measure set into Ops directly may write past Clbits(); Format sizes the classical register to
+// hold it, and FormatProgram refuses a bit outside the registers it is given.
+func TestFormatClassicalBits(t *testing.T) {
+	c := circuit.New(1)
+	c.Ops = append(c.Ops, circuit.Op{Gate: circuit.Gate{Name: "measure"}, Qubits: []int{0}, Clbits: []int{3}})
+	src, err := Format(c)
+	if err != nil || !strings.Contains(string(src), "creg c[4];\nmeasure q[0] -> c[3];") {
+		t.Errorf("Format: %v\n%s", err, src)
+	}
+	p := &Program{Circuit: c, Qregs: []Register{{"q", 1, 0}}, Cregs: []Register{{"c", 2, 0}}}
+	if _, err := FormatProgram(p); err == nil || !strings.Contains(err.Error(), "op 0 (measure) writes classical bit 3") {
+		t.Errorf("FormatProgram: %v", err)
+	}
 }
