@@ -20,7 +20,8 @@ must mean the same. Prints one row per pair and a summary. Without -expect every
 equivalent. With -expect FILE, each line "NAME equivalent|different [DISTANCE]" ('#' starts a
 comment) says what a pair must give; a listed distance must match within 1e-9 + 1e-9·DISTANCE
 (with the default operator-norm measure). Exit 0 when every pair passes, 1 when one fails, 2 when
-a file is missing or unreadable, or on bad usage. The comparison flags are those of equiv.`
+a file is missing or unreadable, or on bad usage. The comparison flags are those of equiv, with
+A = NAME.before.qasm and B = NAME.after.qasm.`
 
 // expectation is one line of an -expect file.
 type expectation struct {

@@ -22,11 +22,11 @@ Exit 0, or 2 on bad input or usage.`
 
 func random(args []string, stdout, stderr io.Writer) int {
 	c := newCommand("random", "random [flags]", randomAbout, stdout, stderr)
-	qubits := c.fs.Int("qubits", 3, "width `N` of the circuits")
-	gates := c.fs.Int("gates", 20, "number `N` of ops per circuit")
+	qubits := c.fs.Int("qubits", 3, "`N` qubits per circuit")
+	gates := c.fs.Int("gates", 20, "`N` ops per circuit")
 	set := c.fs.String("set", "", "gates to draw from, `G1,G2,...` by OpenQASM name (default: "+strings.Join(gen.DefaultGateSet(), ",")+")")
-	seed := c.fs.Int("seed", 1, "seed `S` of the first circuit")
-	count := c.fs.Int("count", 1, "how many `N` circuits to write")
+	seed := c.fs.Int("seed", 1, "seed `S` of the first circuit; circuit i has seed S+i")
+	count := c.fs.Int("count", 1, "write `N` circuits")
 	out := c.fs.String("out", "", "folder `DIR` to write random-SEED.qasm files into (made if missing)")
 	motifs := c.fs.Int("motifs", 0, "percentage `P` of draws that place a motif (runs, inverse pairs, repeated blocks) instead of one op")
 	if _, code, ok := c.parse(args, 0); !ok {
