@@ -174,14 +174,21 @@ func (p *densePair) deviationOf(a, b []complex128) float64 {
 		}
 		return math.Sqrt(s)
 	}
+	// The best phase is that of ⟨b|a⟩; the difference is formed directly rather than through
+	// 2 − 2|⟨a|b⟩|, which loses all digits of distances near 1e-8.
 	var overlap complex128
-	na, nb := 0.0, 0.0
 	for i := range a {
-		overlap += cmplx.Conj(a[i]) * b[i]
-		na += abs2(a[i])
-		nb += abs2(b[i])
+		overlap += cmplx.Conj(b[i]) * a[i]
 	}
-	return math.Sqrt(math.Max(0, na+nb-2*cmplx.Abs(overlap)))
+	ph := complex(1, 0)
+	if overlap != 0 {
+		ph = overlap / complex(cmplx.Abs(overlap), 0)
+	}
+	s := 0.0
+	for i := range a {
+		s += abs2(a[i] - ph*b[i])
+	}
+	return math.Sqrt(s)
 }
 
 // simpleWitnessDim is the largest register dimension for which simpler witnesses are sought.

@@ -127,6 +127,7 @@ func TestPreservesFailsOnceWithReport(t *testing.T) {
 }
 
 func TestPreservesSilentOnSuccess(t *testing.T) {
+	withoutFailFiles(t)
 	h := &searchTB{name: "TestPreservesSilentOnSuccess"}
 	Preserves(h, cancelPairs, circuits(3, 10))
 	if h.failed {
@@ -163,6 +164,7 @@ func TestPreservesRefusesAHandleWithoutRapid(t *testing.T) {
 }
 
 func TestPreservesRefusesBadOptions(t *testing.T) {
+	withoutFailFiles(t)
 	h := &searchTB{name: "x"}
 	Preserves(h, cancelPairs, circuits(2, 5), Tolerance(-1))
 	if !h.failed || !strings.Contains(strings.Join(h.errors, ""), "Tolerance(-1)") {

@@ -209,20 +209,31 @@ func (r Result) writeEvidence(b *strings.Builder) {
 		switch {
 		case !m.Basis:
 			b.WriteString("  then test whether the output is want's output state (a projective measurement):\n")
-			fmt.Fprintf(b, "  want passes with probability %.4g, got with %.4g\n", m.Want, m.Got)
+			fmt.Fprintf(b, "  want passes with probability %s, got with %s\n", prob(m.Want), prob(m.Got))
 		case r.Measured != nil:
-			fmt.Fprintf(b, "  measuring %s gives %s with probability %.4g after want, %.4g after got\n",
-				qubitList(r.Measured), outcomeWords(m.Outcome, r.Measured), m.Want, m.Got)
+			fmt.Fprintf(b, "  measuring %s gives %s with probability %s after want, %s after got\n",
+				qubitList(r.Measured), outcomeWords(m.Outcome, r.Measured), prob(m.Want), prob(m.Got))
 		default:
-			fmt.Fprintf(b, "  measuring every qubit gives %s with probability %.4g after want, %.4g after got\n",
-				basisKet(m.Outcome, n), m.Want, m.Got)
+			fmt.Fprintf(b, "  measuring every qubit gives %s with probability %s after want, %s after got\n",
+				basisKet(m.Outcome, n), prob(m.Want), prob(m.Got))
 		}
 	}
-	if r.Witness != nil || m.Input != nil {
+	if (r.Witness != nil || m.Input != nil) && 2*r.OperatorDistance < 1 {
 		fmt.Fprintf(b, "  no outcome probability can differ by more than 2 × %.4g = %.4g, twice the operator-norm\n",
 			r.OperatorDistance, 2*r.OperatorDistance)
 		b.WriteString("  distance (Nielsen & Chuang §4.5.3)\n")
 	}
+}
+
+// prob writes a probability to four digits, with rounding noise at the ends written as 0 and 1.
+func prob(p float64) string {
+	switch {
+	case p < 1e-12:
+		return "0"
+	case p > 1-1e-12:
+		return "1"
+	}
+	return fmt.Sprintf("%.4g", p)
 }
 
 func sameState(a, c []complex128) bool {
