@@ -43,17 +43,6 @@ func (w Window) String() string {
 	return fmt.Sprintf("%s → %s on %s", w.Before, w.After, qubitList(w.Qubits))
 }
 
-func qubitList(qs []int) string {
-	s := ""
-	for i, q := range qs {
-		if i > 0 {
-			s += ","
-		}
-		s += fmt.Sprintf("q%d", q)
-	}
-	return s
-}
-
 // check reports a malformed window.
 func (w Window) check() error {
 	if len(w.Qubits) == 0 {
