@@ -237,7 +237,10 @@ func outline(c *circuit.Circuit, ws []Window, span func(Window) Span) ([]mark, e
 	for k := range order {
 		order[k] = k
 	}
-	sort.SliceStable(order, func(i, j int) bool { return span(ws[order[i]]).Start < span(ws[order[j]]).Start })
+	sort.SliceStable(order, func(i, j int) bool {
+		a, b := span(ws[order[i]]), span(ws[order[j]])
+		return a.Start < b.Start || a.Start == b.Start && a.End < b.End
+	})
 	owner := make([]int, c.Len()) // window that takes op i into its piece, or -1
 	for i := range owner {
 		owner[i] = -1

@@ -6,8 +6,8 @@ import (
 	"testing"
 )
 
-// The single-qubit Clifford group has 24 elements modulo global phase (Nielsen & Chuang
-// exercise 10.39 style count, from memory); with T at most once, 96 = 24·(3·2 − 2) (Matsumoto &
+// The single-qubit Clifford group has 24 elements modulo global phase (the rotation group of the
+// cube; common knowledge, from memory); with T at most once, 96 = 24·(3·2 − 2) (Matsumoto &
 // Amano, arXiv:0806.3834, count 192(3·2^n − 2) with the 8 phases of ω, from memory).
 func TestNetCountsCliffordAndOneT(t *testing.T) {
 	n, err := NewNet(14)
