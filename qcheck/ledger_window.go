@@ -16,6 +16,7 @@ type Span struct {
 // Len returns the number of ops in the span.
 func (s Span) Len() int { return s.End - s.Start }
 
+// String writes the span for people: "op 7", "ops 7–9", or "before op 7" when empty.
 func (s Span) String() string {
 	switch s.Len() {
 	case 0:
@@ -39,6 +40,7 @@ type Window struct {
 	Qubits []int
 }
 
+// String writes the window as "op 7 → ops 7–9 on q3", the place shown in budget reports.
 func (w Window) String() string {
 	return fmt.Sprintf("%s → %s on %s", w.Before, w.After, qubitList(w.Qubits))
 }
