@@ -114,7 +114,7 @@ func TestDenseDistanceWithinBound(t *testing.T) {
 		before := randomCircuit(r, 8, 60)
 		var l qcheck.Ledger
 		const eps = 0.3
-		after, err := Pass{Net: smallNet(), Epsilon: eps, MaxLevels: 3}.Run(before, &l)
+		after, err := Pass{Net: smallNet(), Epsilon: eps}.Run(before, &l)
 		if err != nil {
 			t.Fatal(err)
 		}
