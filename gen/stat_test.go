@@ -71,15 +71,7 @@ func normalCritical(alpha float64) float64 {
 // values drawn, and a statistical verdict on them, repeat from run to run.
 func checkSeeded(t *testing.T, seed uint64, prop func(*rapid.T)) {
 	t.Helper()
-	f := flag.Lookup("rapid.seed")
-	if f == nil {
-		t.Fatal("rapid registers no -rapid.seed flag; cannot fix the seed")
-	}
-	old := f.Value.String()
-	if err := f.Value.Set(strconv.FormatUint(seed, 10)); err != nil {
-		t.Fatal(err)
-	}
-	defer f.Value.Set(old)
+	defer setFlag(t, "rapid.seed", strconv.FormatUint(seed, 10))()
 	rapid.Check(t, prop)
 }
 

@@ -5,8 +5,9 @@ Run: /usr/bin/python3 testdata/gen/reference.py > testdata/gen/reference.txt
 The Go tests read nothing from here at run time; the values they use are
 copied into gen/*_test.go with a comment pointing to this file.
 
-1. Chi-square upper critical values chi2.isf(alpha, df) for the Clifford
-   uniformity tests (24 and 11520 classes).
+1. Chi-square upper critical values chi2.isf(alpha, df) for the uniformity
+   tests: circuit lengths (10 classes), embeddings (12), layouts and one-qubit
+   Cliffords (24), two-qubit Cliffords (11520).
 2. The nearest-neighbour spacing law of the circular unitary ensemble for
    N = 64, computed exactly as a Fredholm determinant (Gaudin; Mehta, Random
    Matrices, 3rd ed., ch. 11; quadrature method of Bornemann, Markov Processes
@@ -48,7 +49,7 @@ def surmise_cdf(s):
 
 print("# numpy", np.__version__, "scipy", scipy.__version__)
 print("# chi-square upper critical values: df alpha chi2.isf(alpha, df)")
-for df in (23, 11519):
+for df in (9, 11, 23, 11519):
     for alpha in (1e-6, 5e-7, 2.5e-7):
         print("chi2", df, alpha, repr(float(stats.chi2.isf(alpha, df))))
 
