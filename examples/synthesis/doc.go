@@ -4,7 +4,7 @@
 // qcheck.Ledger so that a test can certify the whole circuit's error without simulating it.
 //
 // The method is the Solovay–Kitaev algorithm as written by Dawson & Nielsen, "The
-// Solovay–Kitaev algorithm", Quantum Inf. Comput. 6, 81–95 (2006):
+// Solovay–Kitaev algorithm", Quantum Inf. Comput. 6, 81–95 (2006; pages from memory):
 //
 //   - the basic approximations come from an ε-net of words, found by breadth-first enumeration
 //     of words over the gate set, identified modulo global phase and deduplicated, with a
