@@ -59,3 +59,29 @@ func TestNewNetRefusesBadLengths(t *testing.T) {
 		}
 	}
 }
+
+// BenchmarkNewNet times building the scenario's net (words of up to 20 letters).
+func BenchmarkNewNet(b *testing.B) {
+	for b.Loop() {
+		if _, err := NewNet(20); err != nil {
+			b.Fatal(err)
+		}
+	}
+}
+
+// BenchmarkApproximate times one rotation brought within 1e-3 on the scenario's net.
+func BenchmarkApproximate(b *testing.B) {
+	net := scenarioNet()
+	r := rand.New(rand.NewSource(9))
+	targets := make([]quat, 64)
+	for i := range targets {
+		targets[i] = randomSU2(r)
+	}
+	i := 0
+	for b.Loop() {
+		if _, d, _ := net.approximate(targets[i%len(targets)], 1e-3, 6); d > 1e-3 {
+			b.Fatalf("distance %g", d)
+		}
+		i++
+	}
+}
