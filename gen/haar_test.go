@@ -145,14 +145,17 @@ func traceMomentsCheck(us []*mat.CDense, alpha float64) string {
 }
 
 func TestUnitaryTraceMoments(t *testing.T) {
-	// Three dimensions × two moments; traceMomentsCheck runs both moments at
-	// alpha each, so alpha = 1e-6/6 keeps the run's false failure ≤ 1e-6.
+	// Three dimensions × two sources (Example, rapid.Check) × two moments;
+	// traceMomentsCheck runs both moments at alpha each, so alpha = 1e-6/12
+	// keeps the run's false failure ≤ 1e-6.
 	n := sampleSize(20000, 10)
-	alpha := falseFailure / 6
+	alpha := falseFailure / 12
 	for _, qubits := range []int{1, 2, 3} {
-		us, _ := drawAll(t, Unitary(qubits), n, 50000*qubits)
-		if msg := traceMomentsCheck(us, alpha); msg != "" {
-			t.Errorf("d=%d: %s", 1<<qubits, msg)
+		example, checked := drawAll(t, Unitary(qubits), n, 50000*qubits)
+		for name, us := range map[string][]*mat.CDense{"Example": example, "rapid.Check": checked} {
+			if msg := traceMomentsCheck(us, alpha); msg != "" {
+				t.Errorf("d=%d via %s: %s", 1<<qubits, name, msg)
+			}
 		}
 	}
 }
