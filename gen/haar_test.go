@@ -338,3 +338,19 @@ func TestDrawsDoNotRepeat(t *testing.T) {
 	}
 	t.Logf("seeds from rapid.Uint64: %d repeats in %d draws", repeats, n)
 }
+
+func TestUnitaryShrinksToSeedZero(t *testing.T) {
+	// A failing Haar draw shrinks to the unitary of seed 0, still generic.
+	got := shrunk(t, Unitary(1), func(*mat.CDense) bool { return true })
+	want := haarUnitary(rand.New(rand.NewPCG(0, sourceStream)), 2)
+	for i := range 2 {
+		for j := range 2 {
+			if got.At(i, j) != want.At(i, j) {
+				t.Fatalf("shrunk unitary %v, want seed 0's %v", got, want)
+			}
+		}
+	}
+	if cmplx.Abs(want.At(0, 0)) < 1e-3 || cmplx.Abs(want.At(0, 1)) < 1e-3 {
+		t.Errorf("seed 0 gives a special-looking unitary %v", want)
+	}
+}
