@@ -1,0 +1,75 @@
+package metric
+
+import (
+	"math"
+	"testing"
+
+	"gonum.org/v1/gonum/mat"
+)
+
+// Pure-state trace distance sqrt(1 − |⟨a|b⟩|²) and fidelity |⟨a|b⟩|²
+// (Nielsen & Chuang §9.2.3, eq. 9.60 and §9.2.2) on states worked by hand.
+func TestStateDistanceByHand(t *testing.T) {
+	s := 1 / math.Sqrt2
+	zero, one := []complex128{1, 0}, []complex128{0, 1}
+	plus, iplus := []complex128{complex(s, 0), complex(s, 0)}, []complex128{complex(0, s), complex(0, s)}
+	near(t, "StateDistance(0,1)", StateDistance(zero, one), 1, 1e-15)
+	near(t, "StateDistance(0,+)", StateDistance(zero, plus), s, 1e-15)
+	near(t, "StateDistance(+,i+)", StateDistance(plus, iplus), 0, 1e-15)
+	near(t, "StateFidelity(0,+)", StateFidelity(zero, plus), 0.5, 1e-15)
+	// Unnormalised input: only the direction counts.
+	near(t, "StateDistance(2·0,+)", StateDistance([]complex128{2, 0}, plus), s, 1e-15)
+	// Nearly equal states keep relative accuracy: the angle 1e-12 between
+	// (1, 0) and (cos 1e-12, sin 1e-12) gives distance sin(1e-12).
+	near(t, "StateDistance tiny", StateDistance(zero, []complex128{complex(math.Cos(1e-12), 0), complex(math.Sin(1e-12), 0)}), 1e-12, 1e-27)
+}
+
+// Trace distance of density matrices: ½ Σ|λ_i(ρ − σ)| (Nielsen & Chuang
+// §9.2.1). |0⟩⟨0| vs |1⟩⟨1| is 1; |0⟩⟨0| vs I/2 is ½; for pure states it
+// agrees with StateDistance (eq. 9.60).
+func TestTraceDistance(t *testing.T) {
+	p0 := mat.NewCDense(2, 2, []complex128{1, 0, 0, 0})
+	p1 := mat.NewCDense(2, 2, []complex128{0, 0, 0, 1})
+	mixed := mat.NewCDense(2, 2, []complex128{0.5, 0, 0, 0.5})
+	near(t, "TraceDistance(0,1)", TraceDistance(p0, p1), 1, 1e-15)
+	near(t, "TraceDistance(0,I/2)", TraceDistance(p0, mixed), 0.5, 1e-15)
+	rng := newRand(3)
+	for _, n := range []int{2, 5, 16} {
+		a, b := haarState(rng, n), haarState(rng, n)
+		near(t, "TraceDistance(pure)", TraceDistance(projector(a), projector(b)), StateDistance(a, b), 1e-13)
+	}
+}
+
+func projector(a []complex128) *mat.CDense {
+	n := len(a)
+	m := mat.NewCDense(n, n, nil)
+	for i := range a {
+		for j := range a {
+			m.Set(i, j, a[i]*conj(a[j]))
+		}
+	}
+	return m
+}
+
+// Size mismatches are programmer errors that panic with an *InputError.
+func TestInputErrors(t *testing.T) {
+	cases := map[string]func(){
+		"non-square":     func() { PhaseDistance(mat.NewCDense(2, 3, nil), mat.NewCDense(2, 3, nil)) },
+		"sizes":          func() { Distance(identity(2), identity(4)) },
+		"states":         func() { StateDistance([]complex128{1}, []complex128{1, 0}) },
+		"zero state":     func() { StateFidelity([]complex128{0, 0}, []complex128{1, 0}) },
+		"witness sizes":  func() { Witness(identity(2), identity(3)) },
+		"diamond square": func() { Diamond(mat.NewCDense(1, 2, nil), mat.NewCDense(1, 2, nil)) },
+	}
+	for name, f := range cases {
+		func() {
+			defer func() {
+				r := recover()
+				if _, ok := r.(*InputError); !ok {
+					t.Errorf("%s: recovered %v (%T), want an *InputError", name, r, r)
+				}
+			}()
+			f()
+		}()
+	}
+}
