@@ -17,7 +17,6 @@ import (
 
 var matrixFreeWide = flag.Bool("matrixfree.wide", false, "also check the matrix-free distance against the dense engine at 10 and 12 qubits (minutes)")
 
-
 // perturb returns a copy of c with the angle of `count` of its rotations shifted by delta.
 func perturb(rng *rand.Rand, c *circuit.Circuit, count int, delta float64) *circuit.Circuit {
 	d := c.Clone()
