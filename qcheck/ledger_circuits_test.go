@@ -3,36 +3,20 @@ package qcheck
 import (
 	"pgregory.net/rapid"
 
+	"qcheck.dev/gen"
 	"qcheck.dev/qcheck/circuit"
 )
 
-// Test-only generators of small circuits for the ledger's properties. They draw from a fixed
-// mix of standard gates with arbitrary angles; the gen package serves users, these serve only the
-// ledger's own tests.
-
-var ledgerGates = []struct {
-	name   string
-	qubits int
-	params int
-}{
-	{"h", 1, 0}, {"s", 1, 0}, {"t", 1, 0}, {"x", 1, 0}, {"sx", 1, 0},
-	{"rx", 1, 1}, {"ry", 1, 1}, {"rz", 1, 1}, {"p", 1, 1}, {"u", 1, 3},
-	{"cx", 2, 0}, {"cz", 2, 0}, {"crz", 2, 1}, {"rzz", 2, 1}, {"swap", 2, 0},
-}
-
-// drawOp draws one gate on distinct qubits of an n-qubit register (n ≥ 2).
-func drawOp(t *rapid.T, n int, label string) circuit.Op {
-	g := ledgerGates[rapid.IntRange(0, len(ledgerGates)-1).Draw(t, label+" gate")]
-	params := make([]float64, g.params)
-	for i := range params {
-		params[i] = drawAngle(t, -7, 7, label+" angle")
+// drawCircuit draws a circuit of n qubits with between 1 and maxOps ops from gen.Circuit (the
+// default gate set up to two-qubit gates: Cliffords, T, rotations, controlled rotations).
+func drawCircuit(t *rapid.T, n, maxOps int, label string) *circuit.Circuit {
+	var set []string
+	for _, name := range gen.DefaultGateSet() {
+		if s, ok := circuit.Lookup(name); ok && s.Qubits <= 2 {
+			set = append(set, name)
+		}
 	}
-	gate, err := circuit.NewGate(g.name, params...)
-	if err != nil {
-		t.Fatalf("test generator: %v", err)
-	}
-	qs := rapid.Permutation(allQubits(n)).Draw(t, label+" qubits")[:g.qubits]
-	return circuit.Op{Gate: gate, Qubits: qs}
+	return gen.Circuit(gen.Options{Qubits: n, MinOps: 1, MaxOps: maxOps, GateSet: set}).Draw(t, label)
 }
 
 func allQubits(n int) []int {
@@ -41,16 +25,6 @@ func allQubits(n int) []int {
 		qs[i] = i
 	}
 	return qs
-}
-
-// drawCircuit draws a circuit of n qubits with between 1 and maxOps ops.
-func drawCircuit(t *rapid.T, n, maxOps int, label string) *circuit.Circuit {
-	c := circuit.New(n)
-	ops := rapid.IntRange(1, maxOps).Draw(t, label+" length")
-	for i := 0; i < ops; i++ {
-		c.AppendOp(drawOp(t, n, label))
-	}
-	return c
 }
 
 // drawAngle draws an angle in [lo, hi]. Angles of magnitude below 1e-20 are drawn as 0: they are

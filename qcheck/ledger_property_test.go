@@ -144,7 +144,7 @@ func TestBoundCoversTrueDistance(t *testing.T) {
 	})
 }
 
-// Subadditivity, Nielsen & Chuang §4.5.3 eq. (4.69): ‖U₂U₁ − V₂V₁‖ ≤ ‖U₁ − V₁‖ + ‖U₂ − V₂‖ for
+// Subadditivity, Nielsen & Chuang §4.5.3: ‖U₂U₁ − V₂V₁‖ ≤ ‖U₁ − V₁‖ + ‖U₂ − V₂‖ for
 // unitaries, in operator norm and in the phase-free distance (choose each factor's phase on its
 // own).
 func TestSubadditivity(t *testing.T) {
@@ -164,7 +164,7 @@ func TestSubadditivity(t *testing.T) {
 	})
 }
 
-// The probability bound, Nielsen & Chuang §4.5.3 eq. (4.63): if ‖U − V‖ ≤ ε then, for any state
+// The probability bound, Nielsen & Chuang §4.5.3: if ‖U − V‖ ≤ ε then, for any state
 // and any measurement outcome, |P_U − P_V| ≤ 2ε. The state is a random circuit applied to |0…0⟩;
 // the measurement is in the computational basis after it (any basis is a unitary away).
 func TestProbabilityBound(t *testing.T) {

@@ -170,7 +170,7 @@ func matrix2(x []complex128) *mat.CDense { return mat.NewCDense(2, 2, append([]c
 
 func ExampleLedger() {
 	// A pass replaced rz(0.01) on qubit 4 (op 12 of the circuit before) by nothing, and p(π/4)
-	// on qubit 1 (op 30) by the exactly equal t gate (ops 29 of the circuit after).
+	// on qubit 1 (op 30) by the equal t gate (op 29 of the circuit after).
 	var l Ledger
 	_ = l.Record(Rewrite{
 		Window:      Window{Before: Span{12, 13}, After: Span{12, 12}, Qubits: []int{4}},

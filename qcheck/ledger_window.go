@@ -16,6 +16,7 @@ type Span struct {
 // Len returns the number of ops in the span.
 func (s Span) Len() int { return s.End - s.Start }
 
+// String writes the span for people: "op 7", "ops 7–9", or "before op 7" when empty.
 func (s Span) String() string {
 	switch s.Len() {
 	case 0:
@@ -39,6 +40,7 @@ type Window struct {
 	Qubits []int
 }
 
+// String writes the window as "op 7 → ops 7–9 on q3", the place shown in budget reports.
 func (w Window) String() string {
 	return fmt.Sprintf("%s → %s on %s", w.Before, w.After, qubitList(w.Qubits))
 }
@@ -237,7 +239,10 @@ func outline(c *circuit.Circuit, ws []Window, span func(Window) Span) ([]mark, e
 	for k := range order {
 		order[k] = k
 	}
-	sort.SliceStable(order, func(i, j int) bool { return span(ws[order[i]]).Start < span(ws[order[j]]).Start })
+	sort.SliceStable(order, func(i, j int) bool {
+		a, b := span(ws[order[i]]), span(ws[order[j]])
+		return a.Start < b.Start || a.Start == b.Start && a.End < b.End
+	})
 	owner := make([]int, c.Len()) // window that takes op i into its piece, or -1
 	for i := range owner {
 		owner[i] = -1

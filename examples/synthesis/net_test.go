@@ -6,8 +6,8 @@ import (
 	"testing"
 )
 
-// The single-qubit Clifford group has 24 elements modulo global phase (Nielsen & Chuang
-// exercise 10.39 style count, from memory); with T at most once, 96 = 24·(3·2 − 2) (Matsumoto &
+// The single-qubit Clifford group has 24 elements modulo global phase (the rotation group of the
+// cube; common knowledge, from memory); with T at most once, 96 = 24·(3·2 − 2) (Matsumoto &
 // Amano, arXiv:0806.3834, count 192(3·2^n − 2) with the 8 phases of ω, from memory).
 func TestNetCountsCliffordAndOneT(t *testing.T) {
 	n, err := NewNet(14)
@@ -57,5 +57,31 @@ func TestNewNetRefusesBadLengths(t *testing.T) {
 		if _, err := NewNet(l); err == nil {
 			t.Errorf("NewNet(%d) accepted", l)
 		}
+	}
+}
+
+// BenchmarkNewNet times building the scenario's net (words of up to 20 letters).
+func BenchmarkNewNet(b *testing.B) {
+	for b.Loop() {
+		if _, err := NewNet(20); err != nil {
+			b.Fatal(err)
+		}
+	}
+}
+
+// BenchmarkApproximate times one rotation brought within 1e-3 on the scenario's net.
+func BenchmarkApproximate(b *testing.B) {
+	net := scenarioNet()
+	r := rand.New(rand.NewSource(9))
+	targets := make([]quat, 64)
+	for i := range targets {
+		targets[i] = randomSU2(r)
+	}
+	i := 0
+	for b.Loop() {
+		if _, d, _ := net.approximate(targets[i%len(targets)], 1e-3, 6); d > 1e-3 {
+			b.Fatalf("distance %g", d)
+		}
+		i++
 	}
 }

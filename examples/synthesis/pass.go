@@ -94,8 +94,13 @@ func (p Pass) Run(c *circuit.Circuit, rec qcheck.Recorder) (*circuit.Circuit, er
 	if err != nil {
 		return nil, err
 	}
+	total := len(c.Ops) - len(todo)
+	for _, r := range results {
+		total += len(r.w)
+	}
 	out := circuit.New(c.Qubits())
 	out.SetClbits(c.Clbits())
+	out.Ops = make([]circuit.Op, 0, total)
 	rewrites := make([]qcheck.Rewrite, len(todo))
 	k := 0
 	for i, op := range c.Ops {
@@ -119,6 +124,7 @@ func (p Pass) Run(c *circuit.Circuit, rec qcheck.Recorder) (*circuit.Circuit, er
 		op := c.Ops[todo[k]]
 		piece := circuit.New(1).Append(op.Gate, 0)
 		repl := circuit.New(1)
+		repl.Ops = make([]circuit.Op, 0, len(results[k].w))
 		results[k].w.appendTo(repl, 0)
 		rewrites[k].Piece, rewrites[k].Replacement = piece, repl
 		return rec.Record(rewrites[k])

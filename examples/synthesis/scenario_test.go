@@ -149,6 +149,20 @@ func TestScenarioCertified(t *testing.T) {
 	if math.Abs(again.Bound()-l.Bound()) > 1e-12 {
 		t.Errorf("certified again: %.15g, first %.15g", again.Bound(), l.Bound())
 	}
+	// A pass that reports only its windows: the ledger is rebuilt from the two circuits.
+	windows := make([]qcheck.Window, len(rewrites))
+	for k, r := range rewrites {
+		windows[k] = r.Window
+	}
+	start = time.Now()
+	rebuilt, err := qcheck.LedgerFromWindows(before, after, windows)
+	if err != nil {
+		t.Fatal(err)
+	}
+	rebuildTime := time.Since(start)
+	if math.Abs(rebuilt.Bound()-l.Bound()) > 1e-12 {
+		t.Errorf("rebuilt from windows: %.15g, recorded %.15g", rebuilt.Bound(), l.Bound())
+	}
 	tcount := 0
 	for _, op := range after.Ops {
 		if op.Gate.Name == "t" || op.Gate.Name == "tdg" {
@@ -157,7 +171,8 @@ func TestScenarioCertified(t *testing.T) {
 	}
 	t.Logf("40 qubits, %d ops (%d rotations) → %d ops, T-count %d; ε = %g, share %.3g each, certified Σδ = %.4g, probability bound %.4g",
 		before.Len(), l.Len(), after.Len(), tcount, eps, l.Entries()[0].Share, l.Bound(), l.ProbabilityBound())
-	t.Logf("net %v, synthesis with recording %v, certification alone (record %d entries + Covers) %v", netTime, runTime, l.Len(), certTime)
+	t.Logf("net %v, synthesis with recording %v, certification alone (record %d entries + Covers) %v, rebuilt from windows %v",
+		netTime, runTime, l.Len(), certTime, rebuildTime)
 }
 
 // BenchmarkCertify40Qubits times the certification of the scenario at ε = 0.1: recording every

@@ -80,7 +80,7 @@ func TestQuaternionsAreSU2(t *testing.T) {
 	}
 }
 
-// Dawson & Nielsen (2006) §4: the balanced group commutator reproduces Δ exactly, with V and W
+// Dawson & Nielsen (2006), §4 (section number from memory): the balanced group commutator reproduces Δ exactly, with V and W
 // rotations by the same angle φ, sin(θ/2) = 2 sin²(φ/2) √(1 − sin⁴(φ/2)).
 func TestGroupCommutator(t *testing.T) {
 	r := rand.New(rand.NewSource(11))

@@ -103,19 +103,9 @@ func (r MatrixFreeResult) Exact(tol float64) bool { return r.Upper-r.Lower <= to
 //
 // Both circuits must have the same width and only unitary ops; the error names the circuit and op.
 func MatrixFreeDistance(u, v *circuit.Circuit, opts MatrixFreeOptions) (MatrixFreeResult, error) {
-	if u == nil || v == nil {
-		return MatrixFreeResult{}, fmt.Errorf("sim: nil circuit")
-	}
-	if u.Qubits() != v.Qubits() {
-		return MatrixFreeResult{}, fmt.Errorf("sim: circuits have different widths: %d and %d qubits", u.Qubits(), v.Qubits())
-	}
-	pu, err := Compile(u)
+	pu, pv, err := buildPair(u, v, "first", "second", Compile)
 	if err != nil {
-		return MatrixFreeResult{}, fmt.Errorf("sim: first circuit: %w", err)
-	}
-	pv, err := Compile(v)
-	if err != nil {
-		return MatrixFreeResult{}, fmt.Errorf("sim: second circuit: %w", err)
+		return MatrixFreeResult{}, err
 	}
 	n := u.Qubits()
 	opts, err = opts.settle(n)
@@ -406,7 +396,7 @@ func (a *arnoldi) bestPhase() (phi, dev float64) {
 	if bestDev < dev {
 		phi, dev = best, bestDev
 	}
-	return wrapAngle(phi), dev
+	return math.Atan2(math.Sin(phi), math.Cos(phi)), dev // φ mapped to (−π, π]
 }
 
 // witness builds the candidate states from the space at phase φ, runs both circuits on each to
@@ -450,14 +440,6 @@ func (a *arnoldi) lift(y []complex128) []complex128 {
 		}
 	}
 	return out
-}
-
-func wrapAngle(x float64) float64 {
-	x = math.Remainder(x, 2*math.Pi)
-	if x <= -math.Pi {
-		x += 2 * math.Pi
-	}
-	return x
 }
 
 // dot returns ⟨a|b⟩ = Σ conj(a_i) b_i.
