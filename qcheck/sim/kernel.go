@@ -1,6 +1,8 @@
 package sim
 
-import "sort"
+import (
+	"slices"
+)
 
 // The engines share one kernel design. Amplitudes live in a flat array whose index holds basis
 // states bit by bit; a k-qubit gate acts on k bit positions of that index. A statevector of n
@@ -95,7 +97,7 @@ func newKernel(m []complex128, bits []uint) *kernel {
 		kn.offs[a] = off
 	}
 	kn.sorted = append([]uint(nil), bits...)
-	sort.Slice(kn.sorted, func(i, j int) bool { return kn.sorted[i] < kn.sorted[j] })
+	slices.Sort(kn.sorted)
 
 	// Active rows are the local states the gate moves: rows other than e_a.
 	var active []int
@@ -110,14 +112,6 @@ func newKernel(m []complex128, bits []uint) *kernel {
 		if !identity {
 			active = append(active, a)
 		}
-	}
-	isActive := func(a int) bool {
-		for _, x := range active {
-			if x == a {
-				return true
-			}
-		}
-		return false
 	}
 	// single returns the column of the one nonzero entry of row a, or −1.
 	single := func(a int) int {
@@ -140,7 +134,7 @@ func newKernel(m []complex128, bits []uint) *kernel {
 			monomial, diagonal = false, false
 		case c != a:
 			diagonal = false
-			if single(c) != a || !isActive(c) { // only exchanges of two states
+			if single(c) != a || !slices.Contains(active, c) { // only exchanges of two states
 				monomial = false
 			}
 		}
