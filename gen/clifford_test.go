@@ -290,7 +290,7 @@ func TestCliffordUniformTwoQubits(t *testing.T) {
 	// All 11520 two-qubit Cliffords modulo phase equally likely: chi-square
 	// with 11519 degrees of freedom, critical value chi2.isf(1e-6, 11519) =
 	// 12254.94 from SciPy (testdata/gen/reference.txt); one check, false
-	// failure ≤ 1e-6 per run. Six draws per class on average: Pearson's
+	// failure ≤ 1e-6 per run. Six draws per class on average (30 with -gen.long): Pearson's
 	// statistic for equal cell probabilities has mean k−1 and variance
 	// 2(k−1)(1−1/N) whatever the counts (Cochran, Ann. Math. Stat. 23 (1952)
 	// 315–345, from memory), and with k = 11520 cells its law is close to the
@@ -299,7 +299,7 @@ func TestCliffordUniformTwoQubits(t *testing.T) {
 	const crit = 12254.93801260624
 	k := cliffordGroupSize(2)
 	counts := map[string]int{}
-	for seed := range 6 * k {
+	for seed := range sampleSize(6, 5) * k {
 		class, err := cliffordClassOf(Clifford(2).Example(seed))
 		if err != nil {
 			t.Fatal(err)

@@ -14,24 +14,39 @@ import (
 // counterexample rapid reports. It fails the test if rapid finds no failure.
 func shrunk[V any](t *testing.T, g *rapid.Generator[V], fails func(V) bool) V {
 	t.Helper()
-	nofile := flag.Lookup("rapid.nofailfile")
-	old := nofile.Value.String()
-	nofile.Value.Set("true") // a probe's failure is expected: write no fail file
-	defer nofile.Value.Set(old)
+	minimal, _ := shrunkFrom(t, g, fails)
+	return minimal
+}
+
+// shrunkFrom is shrunk that also returns the first failing value rapid found,
+// the one it shrank from.
+func shrunkFrom[V any](t *testing.T, g *rapid.Generator[V], fails func(V) bool) (minimal, first V) {
+	t.Helper()
+	// A probe's failure is expected: write no fail file. Fix the seed and
+	// the number of cases so that the case rapid shrinks from is the same on
+	// every run, and give the shrinker time enough on a busy machine, so that
+	// where it ends does not depend on the load.
+	defer setFlag(t, "rapid.nofailfile", "true")()
+	defer setFlag(t, "rapid.seed", "12345")()
+	defer setFlag(t, "rapid.checks", "1000")()
+	defer setFlag(t, "rapid.shrinktime", "10m")()
 
 	rec := &recorder{name: t.Name()}
-	var last V
+	found := false
 	rapid.Check(rec, func(rt *rapid.T) {
 		v := g.Draw(rt, "value")
 		if fails(v) {
-			last = v // rapid replays the minimal case last
+			if !found {
+				first, found = v, true
+			}
+			minimal = v // rapid replays the minimal case last
 			rt.Fatalf("fails")
 		}
 	})
 	if !rec.failed {
 		t.Fatalf("rapid found no value of %v that fails the property", g)
 	}
-	return last
+	return minimal, first
 }
 
 // recorder is a rapid.TB that keeps quiet and only remembers whether rapid
@@ -65,10 +80,7 @@ func (r *recorder) Failed() bool                      { return r.failed }
 // whether rapid failed and everything it wrote.
 func report[V any](t *testing.T, g *rapid.Generator[V]) (bool, string) {
 	t.Helper()
-	nofile := flag.Lookup("rapid.nofailfile")
-	old := nofile.Value.String()
-	nofile.Value.Set("true")
-	defer nofile.Value.Set(old)
+	defer setFlag(t, "rapid.nofailfile", "true")()
 	rec := &recorder{name: t.Name()}
 	rapid.Check(rec, func(rt *rapid.T) { g.Draw(rt, "value") })
 	return rec.failed, strings.Join(rec.msgs, "\n")
@@ -92,4 +104,19 @@ func TestImpossibleArgumentsFailTheDraw(t *testing.T) {
 			t.Errorf("%s: failed=%v, report %q; want a failure containing %q", c.name, failed, out, c.want)
 		}
 	}
+}
+
+// setFlag sets one of rapid's flags and returns the function that restores
+// it. Tests in this package do not run in parallel.
+func setFlag(t *testing.T, name, value string) (restore func()) {
+	t.Helper()
+	f := flag.Lookup(name)
+	if f == nil {
+		t.Fatalf("rapid registers no -%s flag", name)
+	}
+	old := f.Value.String()
+	if err := f.Value.Set(value); err != nil {
+		t.Fatal(err)
+	}
+	return func() { f.Value.Set(old) }
 }

@@ -19,20 +19,22 @@ const (
 
 // Ket writes a state of a register of n qubits in words, such as "(|010⟩ + |011⟩)/√2" or
 // "0.6|00⟩ + 0.8i|11⟩". Basis states are written |q_{n−1} … q1 q0⟩: qubit 0 is the rightmost
-// bit, matching index = Σ_q b_q·2^q. The global phase is chosen to make the largest amplitude real
-// and positive; amplitudes below 1e-6 are left out and the result is then marked "≈"; at most 8
-// terms are written, the largest ones.
+// bit, matching index = Σ_q b_q·2^q. The global phase is chosen to make the first amplitude real
+// and positive; amplitudes below 1e-6 are left out and the result is then marked "≈" (unless
+// what is left out is rounding noise, below 1e-10); at most 8 terms are written, the largest
+// ones.
 func Ket(psi []complex128, n int) string {
 	if len(psi) == 0 {
 		return "(no state)"
 	}
-	top := 0
+	top := -1
 	for i, a := range psi {
-		if cmplx.Abs(a) > cmplx.Abs(psi[top]) {
+		if cmplx.Abs(a) >= ketNegligible {
 			top = i
+			break
 		}
 	}
-	if psi[top] == 0 {
+	if top < 0 {
 		return "0"
 	}
 	ph := cmplx.Conj(psi[top]) / complex(cmplx.Abs(psi[top]), 0)
@@ -52,7 +54,7 @@ func Ket(psi []complex128, n int) string {
 		terms = append(terms, term{i, a * ph})
 	}
 	prefix := ""
-	if dropped > 1e-12 {
+	if dropped > 1e-20 {
 		prefix = "≈ "
 	}
 	more := 0
@@ -132,6 +134,8 @@ func amplitudeTerm(z complex128, first bool) string {
 	re, im := real(z), imag(z)
 	const small = 5e-4
 	switch {
+	case math.Abs(im) < small*math.Abs(re) && num(math.Abs(re)) == "1":
+		return joinSign(signOf(re), "", first)
 	case math.Abs(im) < small*math.Abs(re):
 		return joinSign(signOf(re), num(math.Abs(re)), first)
 	case math.Abs(re) < small*math.Abs(im):

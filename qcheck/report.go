@@ -35,7 +35,7 @@ func (r Result) Report() string {
 		writeDiff(&b, "want", r.Want, "got", r.Got)
 	}
 	if !r.Equivalent {
-		r.writeBlame(&b)
+		r.writeBlame(&b, "want", "got")
 	}
 	r.writeEvidence(&b)
 	return b.String()
@@ -126,24 +126,28 @@ func opStrings(c *circuit.Circuit) []string {
 }
 
 // writeBlame names the ops that explain the difference.
-func (r Result) writeBlame(b *strings.Builder) {
+func (r Result) writeBlame(b *strings.Builder, wantName, gotName string) {
 	bl := r.Blame
 	if !bl.Found || r.Want == nil || r.Got == nil {
 		return
 	}
 	w, g := r.Want.Ops[bl.WantOps[0]:bl.WantOps[1]], r.Got.Ops[bl.GotOps[0]:bl.GotOps[1]]
 	b.WriteString("\nblame:\n")
-	fmt.Fprintf(b, "  the op lists first differ at op %d; apart from a common start and end, want has %s\n",
-		bl.FirstDiff, rangeWords(bl.WantOps))
-	fmt.Fprintf(b, "  where got has %s\n", rangeWords(bl.GotOps))
+	pad := max(len(wantName), len(gotName))
+	wl := fmt.Sprintf("    %-*s ", pad+1, wantName+":")
+	gl := fmt.Sprintf("    %-*s ", pad+1, gotName+":")
+	fmt.Fprintf(b, "  the op lists first differ at op %d; apart from a common start and end, %s has %s\n",
+		bl.FirstDiff, wantName, rangeWords(bl.WantOps))
+	fmt.Fprintf(b, "  where %s has %s\n", gotName, rangeWords(bl.GotOps))
 	if len(w)+len(g) <= 12 {
-		b.WriteString(wrapList("    want: ", opList(w, bl.WantOps[0]), " · "))
-		b.WriteString(wrapList("    got:  ", opList(g, bl.GotOps[0]), " · "))
+		b.WriteString(wrapList(wl, opList(w, bl.WantOps[0]), " · "))
+		b.WriteString(wrapList(gl, opList(g, bl.GotOps[0]), " · "))
 	}
 	if bl.Prefix > 0 {
 		k := bl.Prefix
-		fmt.Fprintf(b, "  the meaning first changes at op %d: got's first %d op(s) already differ from want's\n", k-1, k)
-		fmt.Fprintf(b, "    want: %d: %s\n    got:  %d: %s\n", k-1, r.Want.Ops[k-1], k-1, r.Got.Ops[k-1])
+		fmt.Fprintf(b, "  the meaning first changes at op %d: the first %d op(s) of %s already differ from %s's\n",
+			k-1, k, gotName, wantName)
+		fmt.Fprintf(b, "%s%d: %s\n%s%d: %s\n", wl, k-1, r.Want.Ops[k-1], gl, k-1, r.Got.Ops[k-1])
 	}
 }
 
@@ -176,9 +180,18 @@ func ketOrder(n int) string {
 // bound.
 func (r Result) writeEvidence(b *strings.Builder) {
 	n := r.Qubits
+	if p := r.Pauli; p != nil {
+		b.WriteString("\nwitness Pauli (the tableau engine; strings list qubits that are not I):\n")
+		fmt.Fprintf(b, "  want maps %s to %s, got maps it to %s\n", p.Generator, p.Want, p.Got)
+		if p.Anticommute {
+			fmt.Fprintf(b, "  prepare any state that %s leaves unchanged and measure the observable %s:\n", p.Generator, p.Want)
+			b.WriteString("  +1 with probability 1 after want, 1/2 after got (the two images anticommute)\n")
+		}
+		fmt.Fprintf(b, "  so the distance up to global phase is at least %.4g (half of ‖%s − %s‖)\n", r.Distance, p.Want, p.Got)
+	}
 	if r.Witness != nil {
 		fmt.Fprintf(b, "\nwitness input ψ (kets are %s: qubit 0 is the rightmost bit):\n", ketOrder(n))
-		fmt.Fprintf(b, "  ψ = %s\n", Ket(r.Witness, n))
+		b.WriteString(wrapList("  ψ = ", strings.Fields(Ket(r.Witness, n)), " "))
 		if r.ExactPhase {
 			fmt.Fprintf(b, "  ‖want·ψ − got·ψ‖ = %.4g (a certified lower bound on the distance)\n", r.WitnessGap)
 		} else {
@@ -201,24 +214,35 @@ func (r Result) writeEvidence(b *strings.Builder) {
 		} else if r.Witness != nil && sameState(m.Input, r.Witness) {
 			input = "ψ, the witness above"
 		}
-		fmt.Fprintf(b, "  prepare %s and run the circuit;\n", input)
+		b.WriteString(wrapList("  prepare ", strings.Fields(input+" and run the circuit;"), " "))
 		switch {
 		case !m.Basis:
 			b.WriteString("  then test whether the output is want's output state (a projective measurement):\n")
-			fmt.Fprintf(b, "  want passes with probability %.4g, got with %.4g\n", m.Want, m.Got)
+			fmt.Fprintf(b, "  want passes with probability %s, got with %s\n", prob(m.Want), prob(m.Got))
 		case r.Measured != nil:
-			fmt.Fprintf(b, "  measuring %s gives %s with probability %.4g after want, %.4g after got\n",
-				qubitList(r.Measured), outcomeWords(m.Outcome, r.Measured), m.Want, m.Got)
+			fmt.Fprintf(b, "  measuring %s gives %s with probability %s after want, %s after got\n",
+				qubitList(r.Measured), outcomeWords(m.Outcome, r.Measured), prob(m.Want), prob(m.Got))
 		default:
-			fmt.Fprintf(b, "  measuring every qubit gives %s with probability %.4g after want, %.4g after got\n",
-				basisKet(m.Outcome, n), m.Want, m.Got)
+			fmt.Fprintf(b, "  measuring every qubit gives %s with probability %s after want, %s after got\n",
+				basisKet(m.Outcome, n), prob(m.Want), prob(m.Got))
 		}
 	}
-	if r.Witness != nil || m.Input != nil {
+	if (r.Witness != nil || m.Input != nil) && 2*r.OperatorDistance < 1 {
 		fmt.Fprintf(b, "  no outcome probability can differ by more than 2 × %.4g = %.4g, twice the operator-norm\n",
 			r.OperatorDistance, 2*r.OperatorDistance)
 		b.WriteString("  distance (Nielsen & Chuang §4.5.3)\n")
 	}
+}
+
+// prob writes a probability to four digits, with rounding noise at the ends written as 0 and 1.
+func prob(p float64) string {
+	switch {
+	case p < 1e-12:
+		return "0"
+	case p > 1-1e-12:
+		return "1"
+	}
+	return fmt.Sprintf("%.4g", p)
 }
 
 func sameState(a, c []complex128) bool {
@@ -256,12 +280,12 @@ func outcomeWords(o int, measured []int) string {
 func (f *Failure) Headline() string {
 	in := "input"
 	if f.Input != nil {
-		in = fmt.Sprintf("%d-qubit, %d-op input", f.Input.Qubits(), f.Input.Len())
+		in = fmt.Sprintf("%d-qubit, %d-op circuit", f.Input.Qubits(), f.Input.Len())
 	}
 	switch f.Kind {
 	case NotEquivalent:
 		r := f.Result
-		return fmt.Sprintf("qcheck: the pass changed the meaning of a %s: %s %.4g > tolerance %g", in, r.Measure, r.Distance, r.Tolerance)
+		return fmt.Sprintf("qcheck: the pass changes a %s: %s %.4g > tolerance %g", in, r.Measure, r.Distance, r.Tolerance)
 	case PassError:
 		return fmt.Sprintf("qcheck: the pass returned an error on a valid %s: %v", in, f.Err)
 	case PassPanic:
@@ -281,6 +305,9 @@ func (f *Failure) Report() string {
 	var b strings.Builder
 	b.WriteString(f.Headline())
 	b.WriteString("\n")
+	if f.Kind == NotEquivalent {
+		f.Result.writeSettings(&b)
+	}
 	if f.Input != nil {
 		writeCircuit(&b, "input (as small as rapid could make it)", f.Input)
 		b.WriteString(wrapList("  as Go: ", []string{GoCode(f.Input)}, ""))
@@ -288,13 +315,12 @@ func (f *Failure) Report() string {
 	switch f.Kind {
 	case NotEquivalent:
 		r := f.Result
-		r.writeSettings(&b)
 		writeCircuit(&b, "output of the pass", f.Output)
 		if f.Layout != nil {
 			fmt.Fprintf(&b, "  final layout reported by the pass: %v (logical i on physical layout[i])\n", f.Layout)
 		}
 		writeDiff(&b, "input", f.Input, "output", f.Output)
-		r.writeBlame(&b)
+		r.writeBlame(&b, "input", "output")
 		r.writeEvidence(&b)
 	case ModifiedInput:
 		writeCircuit(&b, "the input after the pass ran", f.Modified)

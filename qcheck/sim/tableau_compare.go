@@ -26,19 +26,9 @@ type CliffordResult struct {
 // which circuit and which op. It cannot decide equality including the global phase: a tableau
 // does not record it.
 func CompareClifford(want, got *circuit.Circuit) (CliffordResult, error) {
-	if want == nil || got == nil {
-		return CliffordResult{}, fmt.Errorf("sim: nil circuit")
-	}
-	if want.Qubits() != got.Qubits() {
-		return CliffordResult{}, fmt.Errorf("sim: circuits have different widths: want %d qubits, got %d", want.Qubits(), got.Qubits())
-	}
-	tw, err := NewTableau(want)
+	tw, tg, err := buildPair(want, got, "want", "got", NewTableau)
 	if err != nil {
-		return CliffordResult{}, fmt.Errorf("sim: want circuit: %w", err)
-	}
-	tg, err := NewTableau(got)
-	if err != nil {
-		return CliffordResult{}, fmt.Errorf("sim: got circuit: %w", err)
+		return CliffordResult{}, err
 	}
 	return tw.Compare(tg), nil
 }
@@ -59,4 +49,22 @@ func (t *Tableau) Compare(u *Tableau) CliffordResult {
 		gen = PauliZ(t.n, r-t.n)
 	}
 	return CliffordResult{Generator: gen, Want: t.row(r), Got: u.row(r)}
+}
+
+// buildPair refuses a pair of circuits that cannot be compared (a missing one, or different
+// widths), then builds each with build; an error names the circuit by its role.
+func buildPair[T any](a, b *circuit.Circuit, roleA, roleB string, build func(*circuit.Circuit) (T, error)) (ta, tb T, err error) {
+	if a == nil || b == nil {
+		return ta, tb, fmt.Errorf("sim: nil circuit")
+	}
+	if a.Qubits() != b.Qubits() {
+		return ta, tb, fmt.Errorf("sim: circuits have different widths: %d and %d qubits", a.Qubits(), b.Qubits())
+	}
+	if ta, err = build(a); err != nil {
+		return ta, tb, fmt.Errorf("sim: %s circuit: %w", roleA, err)
+	}
+	if tb, err = build(b); err != nil {
+		return ta, tb, fmt.Errorf("sim: %s circuit: %w", roleB, err)
+	}
+	return ta, tb, nil
 }

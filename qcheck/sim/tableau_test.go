@@ -462,3 +462,18 @@ func BenchmarkTableauCompare(b *testing.B) {
 		}
 	}
 }
+
+func ExampleNewTableau() {
+	// The Bell circuit conjugates X0 to Z0 and Z0 to X0 X1 (Nielsen & Chuang Fig. 10.7, H then CNOT).
+	bell, err := NewTableau(circuit.New(2).H(0).CX(0, 1))
+	if err != nil {
+		fmt.Println(err)
+		return
+	}
+	fmt.Println(bell.ImageX(0), "|", bell.ImageZ(0), "|", bell.ImageX(1), "|", bell.ImageZ(1))
+	_, err = NewTableau(circuit.New(2).H(0).T(1))
+	fmt.Println(err)
+	// Output:
+	// +Z0 | +X0 X1 | +X1 | +Z0 Z1
+	// circuit: op 1 (t): not a Clifford gate; the tableau engine needs a Clifford circuit
+}
