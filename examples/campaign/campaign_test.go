@@ -32,7 +32,7 @@ func TestRunMatchesGolden(t *testing.T) {
 		t.Fatal(err)
 	}
 	out := b.String()
-	for _, want := range []string{"Scenario:", "Checked ", "qcheck: the pass changed the meaning", "input (as small as rapid could make it)", "replay:"} {
+	for _, want := range []string{"Scenario:", "Checked ", "qcheck: the pass changes", "input (as small as rapid could make it)", "replay:"} {
 		if !strings.Contains(out, want) {
 			t.Errorf("demo output lacks %q:\n%s", want, out)
 		}

@@ -22,7 +22,7 @@ func ExampleRun() {
 	// Scenario: Oxbow Quantum's Fieldfare compiler team reviews a patch to its peephole optimizer.
 	// qcheck checks shortcut.Optimize on random 3-qubit circuits of up to 30 gates (seed 1).
 	//
-	// Checked 2 circuits: 1 kept their meaning, circuit 2 did not. Shrunk report:
+	// Checked 1 circuit: 0 kept their meaning, circuit 1 did not. Shrunk report:
 	//
-	// qcheck: the pass changed the meaning of a 3-qubit, 2-op input: operator norm 0.196 > tolerance 1e-09
+	// qcheck: the pass changes a 3-qubit, 3-op circuit: operator norm 1.414 > tolerance 1e-09
 }

@@ -125,8 +125,8 @@ func TestShortcutsAreCaught(t *testing.T) {
 		report := f.Report()
 		switch target.Name {
 		case "shortcut.ZThroughTarget":
-			if !hasZThroughTarget(f.Input) {
-				t.Errorf("shrunk input has no Z-rotation on both sides of a cx target:\n%s", report)
+			if !hasZOnTarget(f.Input) {
+				t.Errorf("shrunk input has no Z-rotation on a cx target:\n%s", report)
 			}
 			if !strings.Contains(report, "cx q") {
 				t.Errorf("report does not name the cx:\n%s", report)
@@ -144,23 +144,17 @@ func TestShortcutsAreCaught(t *testing.T) {
 
 var zFamily = map[string]bool{"rz": true, "p": true, "z": true, "s": true, "sdg": true, "t": true, "tdg": true}
 
-// hasZThroughTarget reports whether c has a cx with a single-qubit diagonal gate on its target
-// somewhere before it and somewhere after it.
-func hasZThroughTarget(c *circuit.Circuit) bool {
-	for i, op := range c.Ops {
+// hasZOnTarget reports whether c has a cx and a single-qubit diagonal gate on its target: the
+// bug slides one past the other, whichever way (z·cx·z loses the z's; cx·z·cx loses the cx's).
+func hasZOnTarget(c *circuit.Circuit) bool {
+	for _, op := range c.Ops {
 		if op.Gate.Name != "cx" {
 			continue
 		}
-		target := op.Qubits[1]
-		before, after := false, false
-		for j, other := range c.Ops {
-			if zFamily[other.Gate.Name] && other.Qubits[0] == target {
-				before = before || j < i
-				after = after || j > i
+		for _, other := range c.Ops {
+			if zFamily[other.Gate.Name] && other.Qubits[0] == op.Qubits[1] {
+				return true
 			}
-		}
-		if before && after {
-			return true
 		}
 	}
 	return false
