@@ -320,14 +320,23 @@ func TestBlamePrefix(t *testing.T) {
 func TestResultReportFitsTheTerminal(t *testing.T) {
 	r := mustCompare(t, circuit.New(4).H(0).CX(0, 1).CCX(0, 1, 3).RZ(0.1234567, 2), circuit.New(4).H(0).CX(0, 1).CCX(1, 0, 3).RZ(0.1234, 2))
 	rep := r.Report()
-	for i, line := range strings.Split(rep, "\n") {
-		if n := len([]rune(line)); n > circuit.DrawWidth {
-			t.Errorf("line %d has %d columns: %q", i, n, line)
-		}
-	}
 	for _, s := range []string{"differs from want", "rz(0.12346) q2", "witness input", "kets are |q3 q2 q1 q0⟩"} {
 		if !strings.Contains(rep, s) {
 			t.Errorf("report lacks %q:\n%s", s, rep)
+		}
+	}
+	reports := []string{
+		rep,
+		mustCompare(t, circuit.New(2).H(0).CX(0, 1), circuit.New(2).H(0).CX(0, 1).X(0).H(1), Measured(0)).Report(),
+		mustCompare(t, circuit.New(3).CCX(0, 1, 2), circuit.New(4).CCX(0, 1, 3).CX(3, 2), Ancillas([]int{3}, Clean)).Report(),
+		mustCompare(t, circuit.New(1).P(1, 0), circuit.New(1).RZ(1, 0), ExactPhase()).Report(),
+		mustCompare(t, circuit.New(8).H(7), circuit.New(8).H(7).RX(0.3, 0).RY(0.2, 3).CX(3, 5), UseMeasure(AverageFidelity)).Report(),
+	}
+	for k, rep := range reports {
+		for i, line := range strings.Split(rep, "\n") {
+			if n := len([]rune(line)); n > circuit.DrawWidth {
+				t.Errorf("report %d, line %d has %d columns: %q", k, i, n, line)
+			}
 		}
 	}
 }
