@@ -2,6 +2,7 @@ package sim
 
 import (
 	"fmt"
+	"runtime"
 
 	"gonum.org/v1/gonum/mat"
 	"qcheck.dev/qcheck/circuit"
@@ -32,16 +33,49 @@ func UnitaryWithin(c *circuit.Circuit, limit int64) (*mat.CDense, error) {
 	}
 	dim := 1 << n
 	data := make([]complex128, dim*dim)
-	for i := 0; i < dim; i++ {
-		data[i*dim+i] = 1
-	}
-	for _, op := range c.Ops {
-		if op.Gate.Name == "barrier" {
-			continue
-		}
-		applyRows(data, n, dim, op.Gate.Elements(), op.Qubits)
-	}
+	buildUnitary(data, c, n, runtime.GOMAXPROCS(0))
 	return mat.NewCDense(dim, dim, data), nil
+}
+
+// unitaryBlockBytes is the size of the working block of columns each goroutine builds at a time:
+// small enough to stay in a core's L2 cache while every gate of the circuit runs over it.
+const unitaryBlockBytes = 256 << 10
+
+// unitarySweepCost weighs a pass over a block in cache against one complex multiply per amplitude.
+const unitarySweepCost = 1
+
+// buildUnitary writes the row-major 2^n × 2^n matrix of the valid unitary circuit c into data.
+// Columns are independent (column j is U|j⟩), so it builds B = 2^b of them at a time in a small
+// row-major buffer, where qubit q sits at bit q + b, starting from the identity columns and
+// running every fused gate over the buffer before copying it out. Blocks go to workers goroutines.
+func buildUnitary(data []complex128, c *circuit.Circuit, n, workers int) {
+	dim := 1 << n
+	b := uint(0)
+	for b < uint(n) && dim<<(b+1)*16 <= unitaryBlockBytes {
+		b++
+	}
+	for b > 0 && dim>>b < 4*workers { // enough blocks to keep every worker busy
+		b--
+	}
+	width := 1 << b
+	kernels := kernelsOf(fuse(c, unitarySweepCost), b)
+	blocks := dim / width
+	parallel(blocks, workers, func(lo, hi int) {
+		buf := make([]complex128, dim*width) // one per goroutine
+		for blk := lo; blk < hi; blk++ {
+			clear(buf)
+			j0 := blk * width
+			for col := 0; col < width; col++ {
+				buf[(j0+col)*width+col] = 1
+			}
+			for _, kn := range kernels {
+				kn.apply(buf, 0, kn.groups(len(buf)))
+			}
+			for row := 0; row < dim; row++ {
+				copy(data[row*dim+j0:row*dim+j0+width], buf[row*width:row*width+width])
+			}
+		}
+	})
 }
 
 // checkUnitary validates c and refuses ops that have no unitary matrix.
