@@ -8,6 +8,7 @@ import (
 	"time"
 
 	"pgregory.net/rapid"
+	"qcheck.dev/gen"
 )
 
 // BenchmarkPreserves measures the campaign of the speed target: Preserves over 3-qubit,
@@ -20,7 +21,7 @@ import (
 //	go test ./qcheck -run '^$' -bench Preserves -benchtime 20x -cpu 1
 func BenchmarkPreserves(b *testing.B) {
 	checks, _ := strconv.Atoi(flag.Lookup("rapid.checks").Value.String())
-	prop := Property(cancelPairs, circuitsOf(3, 30, 30, testGates...))
+	prop := Property(cancelPairs, thirtyOps)
 	h := &searchTB{name: "BenchmarkPreserves"}
 	b.ReportAllocs()
 	b.ResetTimer()
@@ -38,22 +39,24 @@ func BenchmarkPreserves(b *testing.B) {
 // BenchmarkCompare3Qubits30Ops is the comparison alone on the same circuits: two 8×8 unitaries
 // and the phase-free distance.
 func BenchmarkCompare3Qubits30Ops(b *testing.B) {
-	g := circuitsOf(3, 30, 30, testGates...)
+	g := thirtyOps
 	want := g.Example(1)
 	got, _ := cancelPairs(want)
 	cfg, _ := newConfig(nil)
 	b.ReportAllocs()
 	b.ResetTimer()
+	cpu := cpuTime()
 	for i := 0; i < b.N; i++ {
 		if r, err := compare(cfg, want, got, false); err != nil || !r.Equivalent {
 			b.Fatal(err, r.Distance)
 		}
 	}
+	b.ReportMetric(float64((cpuTime()-cpu).Nanoseconds())/float64(b.N), "cpu-ns/op")
 }
 
 // BenchmarkGenerate3Qubits30Ops is rapid drawing the circuits alone, for comparison.
 func BenchmarkGenerate3Qubits30Ops(b *testing.B) {
-	g := circuitsOf(3, 30, 30, testGates...)
+	g := thirtyOps
 	checks, _ := strconv.Atoi(flag.Lookup("rapid.checks").Value.String())
 	h := &searchTB{name: "BenchmarkGenerate"}
 	b.ResetTimer()
@@ -64,6 +67,10 @@ func BenchmarkGenerate3Qubits30Ops(b *testing.B) {
 	b.ReportMetric(float64(checks*b.N)/time.Since(start).Seconds(), "draws/s")
 	b.ReportMetric(float64(checks*b.N)/(cpuTime()-cpu).Seconds(), "draws/cpu-s")
 }
+
+// thirtyOps draws the benchmark's circuits: 3 qubits, exactly 30 ops, gen's default gate set
+// and motifs.
+var thirtyOps = gen.Circuit(gen.Options{Qubits: 3, MinOps: 30, MaxOps: 30})
 
 // cpuTime is the user and system CPU time the process has used.
 func cpuTime() time.Duration {

@@ -158,7 +158,7 @@ func TestCompareAgreesWithMetricAndSVD(t *testing.T) {
 	})
 }
 
-// svdPhaseDistance is min over φ of σ_max(U − e^{iφ}V), found by a grid of 360 phases and a
+// svdPhaseDistance is min over φ of σ_max(U − e^{iφ}V), found by a grid of 180 phases and a
 // golden-section search around each local minimum of the grid.
 func svdPhaseDistance(u, v *mat.CDense) float64 {
 	n, _ := u.Dims()
@@ -178,7 +178,7 @@ func svdPhaseDistance(u, v *mat.CDense) float64 {
 		svd.Factorize(emb, mat.SVDNone)
 		return svd.Values(nil)[0]
 	}
-	const grid = 360
+	const grid = 180
 	vals := make([]float64, grid)
 	for k := range vals {
 		vals[k] = f(2 * math.Pi * float64(k) / grid)
@@ -195,7 +195,7 @@ func svdPhaseDistance(u, v *mat.CDense) float64 {
 		r := (math.Sqrt(5) - 1) / 2
 		a, b := hi-r*(hi-lo), lo+r*(hi-lo)
 		fa, fb := f(a), f(b)
-		for i := 0; i < 50; i++ {
+		for i := 0; i < 40; i++ {
 			if fa < fb {
 				hi, b, fb = b, a, fa
 				a = hi - r*(hi-lo)
