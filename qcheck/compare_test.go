@@ -340,3 +340,29 @@ func TestResultReportFitsTheTerminal(t *testing.T) {
 		}
 	}
 }
+
+// toffoliFig49 appends the Toffoli of Nielsen & Chuang Fig. 4.9 (controls a, b, target c),
+// whose matrix has rounding noise where the exact one has zeros.
+func toffoliFig49(c *circuit.Circuit, a, b, t int) *circuit.Circuit {
+	return c.H(t).CX(b, t).Tdg(t).CX(a, t).T(t).CX(b, t).Tdg(t).CX(a, t).
+		T(b).T(t).H(t).CX(a, b).T(a).Tdg(b).CX(a, b)
+}
+
+// Clean ancillas at the edge of the tolerance: a decomposition with rounding noise on the
+// ancilla passes, and a rotation of the ancilla by rx(θ), which leaves amplitude sin(θ/2) on
+// |1⟩, gives the distance 2·sin(θ/4) (derived by hand: ‖(cos(θ/2) − 1)|0⟩ − i·sin(θ/2)|1⟩‖),
+// resolved far below 1e-8.
+func TestCleanAncillaNearTolerance(t *testing.T) {
+	want := circuit.New(3).CCX(0, 1, 2)
+	exact := toffoliFig49(toffoliFig49(circuit.New(4), 0, 1, 3).CX(3, 2), 0, 1, 3)
+	if r := mustCompare(t, want, exact, Ancillas([]int{3}, Clean)); !r.Equivalent {
+		t.Errorf("Fig. 4.9 Toffoli into a clean ancilla flagged: %s", r.Headline())
+	}
+	for _, theta := range []float64{2e-7, 4e-9, 1e-3} {
+		got := exact.Clone().RX(theta, 3)
+		r := mustCompare(t, want, got, Ancillas([]int{3}, Clean))
+		if d := 2 * math.Sin(theta/4); math.Abs(r.Distance-d) > 1e-3*d {
+			t.Errorf("rx(%g) on the ancilla: distance %g, want %g", theta, r.Distance, d)
+		}
+	}
+}
