@@ -366,3 +366,20 @@ func TestCleanAncillaNearTolerance(t *testing.T) {
 		}
 	}
 }
+
+func TestReportOfEquivalentCircuitsIsShort(t *testing.T) {
+	rep := mustCompare(t, circuit.New(1).P(0.3, 0), circuit.New(1).RZ(0.3, 0)).Report()
+	if !strings.HasPrefix(rep, "qcheck: got is equivalent to want") || strings.Contains(rep, "witness") {
+		t.Errorf("report of equivalent circuits:\n%s", rep)
+	}
+}
+
+func TestMeasureAndEngineEncodeAsText(t *testing.T) {
+	for v, want := range map[interface{ MarshalText() ([]byte, error) }]string{
+		Diamond: "diamond norm", OperatorNorm: "operator norm", Dense: "dense", Auto: "auto",
+	} {
+		if b, _ := v.MarshalText(); string(b) != want {
+			t.Errorf("%v encodes as %q", v, b)
+		}
+	}
+}

@@ -173,6 +173,9 @@ func (m Measure) String() string {
 	return fmt.Sprintf("Measure(%d)", int(m))
 }
 
+// MarshalText writes the measure's name, so that results encode readably as JSON.
+func (m Measure) MarshalText() ([]byte, error) { return []byte(m.String()), nil }
+
 // UseMeasure chooses the measure that decides the verdict (OperatorNorm by default). The tolerance
 // is read in the units of that measure.
 func UseMeasure(m Measure) Option {
@@ -205,6 +208,9 @@ func (e Engine) String() string {
 	}
 	return fmt.Sprintf("Engine(%d)", int(e))
 }
+
+// MarshalText writes the engine's name, so that results encode readably as JSON.
+func (e Engine) MarshalText() ([]byte, error) { return []byte(e.String()), nil }
 
 // UseEngine overrides the automatic choice of engine.
 func UseEngine(e Engine) Option {

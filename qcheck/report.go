@@ -22,8 +22,8 @@ func (r Result) Headline() string {
 
 // Report writes the result for a person, in lines of at most 100 columns (drawings are wrapped by
 // the circuit package at the same width): the verdict, both circuits drawn and listed, their
-// difference as op lists, the ops to blame, the witness input state, and a measurement whose
-// probabilities tell the circuits apart.
+// difference as op lists and, when they are not equivalent, the ops to blame, the witness input
+// state, and a measurement whose probabilities tell the circuits apart.
 func (r Result) Report() string {
 	var b strings.Builder
 	b.WriteString(r.Headline())
@@ -36,8 +36,8 @@ func (r Result) Report() string {
 	}
 	if !r.Equivalent {
 		r.writeBlame(&b, "want", "got")
+		r.writeEvidence(&b)
 	}
-	r.writeEvidence(&b)
 	return b.String()
 }
 
