@@ -196,13 +196,13 @@ const simpleWitnessDim = 32
 
 // simplerWitness looks for a witness a person can read, a basis state |x⟩ or an equal
 // superposition (|x⟩ + c|y⟩)/√2 with c ∈ {1, i, −1, −i}, that exposes the difference as well as
-// psi does (to 1e-9 relative); it returns psi when there is none. Eigenvectors of degenerate
+// psi does (to 1e-12 relative); it returns psi when there is none. Eigenvectors of degenerate
 // eigenspaces are otherwise arbitrary mixtures.
 func (p *densePair) simplerWitness(psi []complex128) []complex128 {
 	if psi == nil || p.dim > simpleWitnessDim {
 		return psi
 	}
-	target := p.deviation(psi) * (1 - 1e-9)
+	target := p.deviation(psi) * (1 - 1e-12)
 	if target <= 0 {
 		return psi
 	}
