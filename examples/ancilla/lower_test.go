@@ -11,13 +11,6 @@ import (
 	"qcheck.dev/qcheck/circuit"
 )
 
-// cleanTolerance is the tolerance of the clean-ancilla checks here. qcheck's clean-ancilla
-// distance is found as sqrt(2 − 2λ) after a search over the global phase that stops at 1e-6, so
-// it reports up to a few 1e-8 for identical circuits (measured: 3.9e-8 for h·t·h·t against
-// itself); the default 1e-9 would flag correct lowerings. Every planted or real bug here moves
-// the unitary by order one, so 1e-6 loses nothing.
-var cleanTolerance = qcheck.Tolerance(1e-6)
-
 // circuitsWithMCX draws circuits on n qubits mixing ordinary gates with X gates of three and
 // four controls.
 func circuitsWithMCX(t *testing.T, n int) gen.Options {
@@ -49,7 +42,7 @@ func TestLoweringsPreserveWithTheirAncillas(t *testing.T) {
 	}
 	for _, tc := range cases {
 		t.Run(tc.name, func(t *testing.T) {
-			qcheck.Preserves(t, tc.pass, gen.Circuit(circuitsWithMCX(t, n)), qcheck.Ancillas(tc.ancillas, tc.state), cleanTolerance)
+			qcheck.Preserves(t, tc.pass, gen.Circuit(circuitsWithMCX(t, n)), qcheck.Ancillas(tc.ancillas, tc.state))
 		})
 	}
 }
@@ -72,7 +65,7 @@ func TestCleanLoweringIsNotDirtySafe(t *testing.T) {
 	if r.Equivalent {
 		t.Errorf("Lower's output passed as dirty-safe:\n%v", got)
 	}
-	qcheck.Equivalent(t, c, got, qcheck.Ancillas([]int{4}, qcheck.Clean), cleanTolerance)
+	qcheck.Equivalent(t, c, got, qcheck.Ancillas([]int{4}, qcheck.Clean))
 }
 
 // The leaky chain of package leak is caught by the clean-ancilla check, and the report points at

@@ -24,30 +24,28 @@ var (
 
 const golden = "../../testdata/examples/demo-seed1.txt"
 
-// The demo's output for seed 1 is kept in testdata so that a change to what a newcomer sees is a
-// visible diff; rerun with -update after an intended change.
+// The demo's output for seed 1 is kept in testdata as a sample of what a newcomer sees
+// (rewrite it with -update). The test holds the parts that belong to this package to it: the
+// scenario, the count of circuits, and the shrunk circuit (its "as Go:" line); the wording of the
+// report belongs to package qcheck and may change. Two runs must print the same.
 func TestRunMatchesGolden(t *testing.T) {
 	var b bytes.Buffer
 	if err := campaign.Run(&b, 1); err != nil {
 		t.Fatal(err)
 	}
 	out := b.String()
-	for _, want := range []string{"Scenario:", "Checked ", "qcheck: the pass changes", "input (as small as rapid could make it)", "replay:"} {
-		if !strings.Contains(out, want) {
-			t.Errorf("demo output lacks %q:\n%s", want, out)
-		}
-	}
 	if *update {
 		if err := os.WriteFile(filepath.FromSlash(golden), []byte(out), 0o644); err != nil {
 			t.Fatal(err)
 		}
 	}
-	want, err := os.ReadFile(filepath.FromSlash(golden))
+	data, err := os.ReadFile(filepath.FromSlash(golden))
 	if err != nil {
 		t.Fatal(err)
 	}
-	if out != string(want) {
-		t.Errorf("demo output for seed 1 differs from %s (rerun with -update if intended):\n%s", golden, out)
+	want := stableLines(string(data))
+	if got := stableLines(out); got != want {
+		t.Errorf("demo output for seed 1 has\n%s\nwhere %s has\n%s\n(rerun with -update if intended); whole output:\n%s", got, golden, want, out)
 	}
 	var again bytes.Buffer
 	if err := campaign.Run(&again, 1); err != nil {
@@ -56,6 +54,18 @@ func TestRunMatchesGolden(t *testing.T) {
 	if again.String() != out {
 		t.Error("two runs with seed 1 printed different output")
 	}
+}
+
+// stableLines returns the first four lines of the demo's output and its "as Go:" line.
+func stableLines(out string) string {
+	lines := strings.Split(out, "\n")
+	keep := lines[:min(4, len(lines))]
+	for _, l := range lines {
+		if strings.HasPrefix(strings.TrimSpace(l), "as Go:") {
+			keep = append(keep, l)
+		}
+	}
+	return strings.Join(keep, "\n")
 }
 
 func TestHuntBadInput(t *testing.T) {

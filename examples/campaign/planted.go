@@ -82,9 +82,6 @@ func Leak() Target {
 		Pass: leak.Lower,
 		Circuits: gen.Circuit(gen.Options{Qubits: leakQubits, MaxOps: 12,
 			GateSet: []string{"h", "x", "t", "cx"}, Custom: []circuit.Gate{c3x, c4x}}),
-		// The tolerance is 1e-6 because qcheck's clean-ancilla distance reports a few 1e-8 for
-		// identical circuits (its phase search stops at 1e-6); the leak moves the unitary by
-		// order one.
-		Options: []qcheck.Option{qcheck.Ancillas(anc, qcheck.Clean), qcheck.Tolerance(1e-6)},
+		Options: []qcheck.Option{qcheck.Ancillas(anc, qcheck.Clean)},
 	}
 }
