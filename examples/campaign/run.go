@@ -11,6 +11,9 @@ import (
 // only on the seed (and on the qcheck version). It returns an error when the campaign could not
 // run, or when it found no bug, which would itself be a bug of qcheck.
 func Run(w io.Writer, seed uint64) error {
+	if seed == 0 {
+		return fmt.Errorf("campaign: seed 0 asks rapid for a random seed; give a nonzero seed")
+	}
 	t := Peephole()
 	fmt.Fprintf(w, "Scenario: Oxbow Quantum's Fieldfare compiler team reviews a patch to its peephole optimizer.\n")
 	fmt.Fprintf(w, "qcheck checks %s on random 3-qubit circuits of up to 30 gates (seed %d).\n\n", t.Name, seed)

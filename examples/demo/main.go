@@ -5,6 +5,7 @@
 package main
 
 import (
+	"errors"
 	"flag"
 	"fmt"
 	"os"
@@ -16,6 +17,9 @@ func main() {
 	fs := flag.NewFlagSet("demo", flag.ContinueOnError)
 	seed := fs.Uint64("seed", 1, "rapid seed of the campaign (nonzero); the output depends only on it")
 	if err := fs.Parse(os.Args[1:]); err != nil {
+		if errors.Is(err, flag.ErrHelp) {
+			os.Exit(0)
+		}
 		os.Exit(2)
 	}
 	if err := campaign.Run(os.Stdout, *seed); err != nil {
