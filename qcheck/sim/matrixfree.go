@@ -399,36 +399,54 @@ func (a *arnoldi) bestPhase() (phi, dev float64) {
 	return math.Atan2(math.Sin(phi), math.Cos(phi)), dev // φ mapped to (−π, π]
 }
 
-// witness builds the candidate states from the space at phase φ, runs both circuits on each to
-// measure its phase-free deviation, and returns the best. The candidates are the equal-weight
-// sum of the Ritz vectors at the two extremes of sin(θ − φ) (the two ends of the arc) and the
-// vector of largest deviation at φ.
+// witness builds candidate states from the space at phase φ, picks the one whose deviation the
+// small matrix H predicts to be largest, and runs both circuits on it to measure that deviation
+// directly. The candidates are the equal-weight sum of the Ritz vectors at the two extremes of
+// sin(θ − φ) (the two ends of the arc) and the vector of largest deviation at φ.
 func (a *arnoldi) witness(phi float64, check *witnessCheck) ([]complex128, float64) {
 	m := len(a.h)
-	var cands [][]complex128
 	lo, hi := skewExtremes(a.h, m, phi)
 	sum := make([]complex128, m)
 	for i := range sum {
 		sum[i] = lo[i] + hi[i]
 	}
-	cands = append(cands, sum)
 	mat, rows, cols := a.shifted(phi)
 	_, top := largestSingular(mat, rows, cols, true)
-	cands = append(cands, top)
-	var best []complex128
-	bestLow := -1.0
-	for _, y := range cands {
-		psi := a.lift(y)
-		if nrm := norm(psi); nrm > 0 {
-			scale(psi, 1/nrm)
-		} else {
-			continue
-		}
-		if low := check.measure(psi); low > bestLow {
-			best, bestLow = psi, low
+	best, bestDev := sum, a.predictedDeviation(sum)
+	if d := a.predictedDeviation(top); d > bestDev || bestDev != bestDev {
+		best = top
+	}
+	psi := a.lift(best)
+	if nrm := norm(psi); nrm > 0 {
+		scale(psi, 1/nrm)
+	} else {
+		psi[0] = 1
+	}
+	return psi, check.measure(psi)
+}
+
+// predictedDeviation returns min over α of ‖(W − e^{iα})Qy‖/‖y‖ from the Arnoldi relation
+// WQy = Q₊H̄y, without applying W.
+func (a *arnoldi) predictedDeviation(y []complex128) float64 {
+	m := len(a.h)
+	z := make([]complex128, m+1)
+	for j, col := range a.h {
+		for i, h := range col {
+			z[i] += h * y[j]
 		}
 	}
-	return best, bestLow
+	yy := append(append([]complex128(nil), y...), 0)
+	ny := norm(yy)
+	if ny == 0 {
+		return 0
+	}
+	c := dot(yy, z)
+	rot := complex(1, 0)
+	if cmplx.Abs(c) > 0 {
+		rot = c / complex(cmplx.Abs(c), 0)
+	}
+	axpy(-rot, yy, z)
+	return norm(z) / ny
 }
 
 // lift returns Q y.
