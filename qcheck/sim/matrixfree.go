@@ -5,6 +5,7 @@ import (
 	"math"
 	"math/cmplx"
 	"math/rand/v2"
+	"runtime"
 
 	"qcheck.dev/qcheck/circuit"
 )
@@ -314,11 +315,7 @@ func (a *arnoldi) step(stop float64) error {
 	col := make([]complex128, j+2)
 	before := norm(x)
 	for pass := 0; pass < 3; pass++ {
-		for i, q := range a.basis {
-			c := dot(q, x)
-			col[i] += c
-			axpy(-c, q, x)
-		}
+		project(a.basis, x, col)
 		if norm(x) > 0.7*before {
 			break
 		}
@@ -458,6 +455,45 @@ func (a *arnoldi) lift(y []complex128) []complex128 {
 		}
 	}
 	return out
+}
+
+// project removes from x its components along the orthonormal basis and adds them to coef:
+// classical Gram–Schmidt, run over cache-sized chunks of x so that each basis vector is read once
+// for the inner products and once for the update, with the chunks shared among the cores.
+func project(basis [][]complex128, x []complex128, coef []complex128) {
+	const chunk = 1 << 11 // 32 KiB of x, at home in a core's cache
+	chunks := (len(x) + chunk - 1) / chunk
+	workers := min(runtime.GOMAXPROCS(0), chunks)
+	partial := make([][]complex128, workers)
+	parallel(workers, workers, func(w0, w1 int) {
+		for w := w0; w < w1; w++ {
+			c := make([]complex128, len(basis))
+			for k := chunks * w / workers; k < chunks*(w+1)/workers; k++ {
+				lo, hi := k*chunk, min((k+1)*chunk, len(x))
+				for i, q := range basis {
+					c[i] += dot(q[lo:hi], x[lo:hi])
+				}
+			}
+			partial[w] = c
+		}
+	})
+	c := make([]complex128, len(basis))
+	for _, p := range partial {
+		for i := range c {
+			c[i] += p[i]
+		}
+	}
+	parallel(chunks, workers, func(k0, k1 int) {
+		for k := k0; k < k1; k++ {
+			lo, hi := k*chunk, min((k+1)*chunk, len(x))
+			for i, q := range basis {
+				axpy(-c[i], q[lo:hi], x[lo:hi])
+			}
+		}
+	})
+	for i := range c {
+		coef[i] += c[i]
+	}
 }
 
 // dot returns ⟨a|b⟩ = Σ conj(a_i) b_i.
