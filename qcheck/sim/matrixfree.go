@@ -42,7 +42,8 @@ type MatrixFreeResult struct {
 	// it never exceeds D, and it equals D once the spaces hold the eigenvectors of W = V†U at
 	// the two ends of the shortest arc holding its eigenphases.
 	Distance float64
-	// Phase is the φ of the estimate, in (−π, π]: U ≈ e^{iφ}V.
+	// Phase is the φ found by the exploration, in (−π, π]: U ≈ e^{iφ}V. Upper refers to it; it
+	// is also the estimate's own phase unless the certifying space saw more than the exploring one.
 	Phase float64
 	// Witness is a unit input state on which the circuits differ the most among those found.
 	Witness []complex128
@@ -252,9 +253,9 @@ func (o MatrixFreeOptions) settle(n int) (MatrixFreeOptions, error) {
 		return o, fmt.Errorf("sim: bad matrix-free options: ExploreSteps %d, Failure %g, Tolerance %g, MemoryLimit %d", o.ExploreSteps, o.Failure, o.Tolerance, o.MemoryLimit)
 	}
 	vector := int64(16) << n
-	fit := int(o.MemoryLimit/vector) - 2 // the basis plus one working vector
+	fit := int(o.MemoryLimit/vector) - 4 // the basis, the vector being built, the witness and its two images
 	if fit < 2 {
-		return o, fmt.Errorf("sim: a %d-qubit matrix-free distance needs at least 4 statevectors (%s), over the limit of %s", n, bytesString(4*vector), bytesString(o.MemoryLimit))
+		return o, fmt.Errorf("sim: a %d-qubit matrix-free distance needs at least 6 statevectors (%s), over the limit of %s", n, bytesString(6*vector), bytesString(o.MemoryLimit))
 	}
 	o.ExploreSteps = min(o.ExploreSteps, fit)
 	o.CertifySteps = min(o.CertifySteps, fit)

@@ -272,7 +272,7 @@ func TestMatrixFreeRefusesBadInput(t *testing.T) {
 		{circuit.New(2), circuit.New(3), MatrixFreeOptions{}, "different widths"},
 		{circuit.New(2).H(0), circuit.New(2).Measure(0, 0), MatrixFreeOptions{}, "second circuit: circuit: op 0 (measure)"},
 		{circuit.New(2).CX(0, 5), circuit.New(2), MatrixFreeOptions{}, "first circuit: circuit: op 0 (cx)"},
-		{circuit.New(10), circuit.New(10), MatrixFreeOptions{MemoryLimit: 1 << 14}, "needs at least 4 statevectors"},
+		{circuit.New(10), circuit.New(10), MatrixFreeOptions{MemoryLimit: 1 << 14}, "needs at least 6 statevectors"},
 		{circuit.New(1), circuit.New(1), MatrixFreeOptions{Failure: 2}, "bad matrix-free options"},
 	}
 	for _, tc := range cases {
