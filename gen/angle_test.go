@@ -9,10 +9,10 @@ import (
 // angleKind classifies an angle drawn by Angle: special (exactly one of
 // specialAngles), tiny (0 or ±2π plus ±10^−e, 5 ≤ e ≤ 15) or continuous.
 func angleKind(theta float64) int {
-	if slices.Contains(specialAngles, theta) {
+	if slices.Contains(specialMagnitudes, math.Abs(theta)) {
 		return angleSpecial
 	}
-	for _, base := range []float64{0, 2 * math.Pi, -2 * math.Pi} {
+	for _, base := range tinyBases {
 		delta := math.Abs(theta - base)
 		if delta == 0 || delta > 1.5e-5 {
 			continue
@@ -59,10 +59,10 @@ func TestAngleMixture(t *testing.T) {
 		if crit := -2 * math.Log(alpha); chi2 > crit {
 			t.Errorf("via %s: kinds %v against weights %v: chi-square %.2f > %.2f", name, counts, angleWeights, chi2, crit)
 		}
-		if len(seen) != len(specialAngles) {
-			// each special angle has probability 1/26 per draw: missing one in
-			// 4000 draws has probability below 1e-60
-			t.Errorf("via %s: only %d of the %d special angles appeared", name, len(seen), len(specialAngles))
+		if len(seen) != 2*len(specialMagnitudes)-1 {
+			// each special angle has probability at least 1/28 per draw:
+			// missing one in 4000 draws has probability below 1e-60
+			t.Errorf("via %s: only %d of the %d special angles appeared", name, len(seen), 2*len(specialMagnitudes)-1)
 		}
 		uniform := func(x float64) float64 { return math.Min(1, math.Max(0, (x+2*math.Pi)/(4*math.Pi))) }
 		if d, eps := ksDistance(continuous, uniform), ksCritical(len(continuous), alpha); d > eps {
@@ -82,12 +82,14 @@ func TestAngleShrinks(t *testing.T) {
 	if got := shrunk(t, Angle(), func(theta float64) bool { return theta < -3 }); got != -math.Pi {
 		t.Errorf("an angle < −3 shrinks to %v, want −π", got)
 	}
-	// A property only a continuous angle breaks ends on one of the smallest
-	// continuous steps (rapid's shrinker lowers bits one block at a time, so
-	// it may stop at 2 or 3 steps rather than 1).
+	// A property only a continuous angle breaks ends on the smallest
+	// continuous step.
 	fails := func(theta float64) bool { return angleKind(theta) == angleContinuous && theta != 0 }
-	step := 2 * math.Pi / (1 << continuousBits)
-	if got := shrunk(t, Angle(), fails); got <= 0 || got > 4*step {
-		t.Errorf("a continuous angle shrinks to %v, want a positive multiple of 2π/2^32 up to 4 steps", got)
+	if got, want := shrunk(t, Angle(), fails), 2*math.Pi/angleSteps; math.Abs(got-want) > 1e-15*want {
+		t.Errorf("a continuous angle shrinks to %v, want the step 2π/%d = %v", got, angleSteps, want)
+	}
+	// A tiny angle shrinks to 0 + 10^−5.
+	if got := shrunk(t, Angle(), func(theta float64) bool { return angleKind(theta) == angleTiny }); got != 1e-5 {
+		t.Errorf("a tiny angle shrinks to %v, want 1e-5", got)
 	}
 }

@@ -7,7 +7,7 @@ import (
 	"strings"
 	"testing"
 
-	"pgregory.net/rapid"
+	"qcheck.dev/qcheck/circuit"
 )
 
 // Dense check of Clifford circuits, independent of the generator: gate
@@ -95,7 +95,10 @@ func pauliMatrix(s string) []complex128 {
 
 // pauliCache holds the matrices of Pauli strings already built (tests in this
 // package do not run in parallel).
-var pauliCache = map[string][]complex128{}
+var (
+	pauliCache   = map[string][]complex128{}
+	stringsCache = map[int][]string{}
+)
 
 // pauliStrings lists all 4^n Pauli strings on n qubits.
 func pauliStrings(n int) []string {
@@ -167,7 +170,10 @@ func conjugateDense(u, p []complex128, d int) []complex128 {
 // exactly when one coefficient is ±1.
 func asPauli(m []complex128, n int) (string, error) {
 	d := 1 << n
-	for _, s := range pauliStrings(n) {
+	if stringsCache[n] == nil {
+		stringsCache[n] = pauliStrings(n)
+	}
+	for _, s := range stringsCache[n] {
 		p := pauliCache[s]
 		if p == nil {
 			p = pauliMatrix(s)
@@ -194,27 +200,126 @@ func asPauli(m []complex128, n int) (string, error) {
 	return "", fmt.Errorf("is zero")
 }
 
-func opsOf(c cliffordOps) []denseOp {
-	out := make([]denseOp, len(c))
-	for i, op := range c {
-		out[i] = denseOp{op.name, op.qubits}
+// cliffordClassOf checks that c is written with h, s, cx and Paulis only,
+// and returns its class modulo phase (see cliffordClass).
+func cliffordClassOf(c *circuit.Circuit) (string, error) {
+	if err := c.Validate(); err != nil {
+		return "", err
 	}
-	return out
+	ops := make([]denseOp, len(c.Ops))
+	for i, op := range c.Ops {
+		if len(op.Gate.Params) != 0 || op.Gate.IsCustom() {
+			return "", fmt.Errorf("op %d is %v, not h, s, cx or a Pauli", i, op)
+		}
+		ops[i] = denseOp{op.Gate.Name, op.Qubits}
+	}
+	u, err := denseOf(c.Qubits(), ops)
+	if err != nil {
+		return "", err
+	}
+	return cliffordClass(c.Qubits(), u)
 }
 
-func TestCliffordGeneratorInternal(t *testing.T) {
-	g := rapid.Custom(func(t *rapid.T) cliffordOps { return drawClifford(t, 2) })
-	seen := map[string]int{}
-	for seed := range 20000 {
-		u, err := denseOf(2, opsOf(g.Example(seed)))
-		if err != nil {
-			t.Fatal(err)
-		}
-		class, err := cliffordClass(2, u)
-		if err != nil {
-			t.Fatal(err)
-		}
-		seen[class]++
+// cliffordGroupSize is the order of the n-qubit Clifford group modulo phase,
+// 4^n·|Sp(2n, F_2)| = 2^{n²+2n} ∏_{j=1}^{n} (4^j − 1) (Koenig & Smolin 2014,
+// §2; 24 for n = 1, 11520 for n = 2).
+func cliffordGroupSize(n int) int {
+	size := 1 << (n*n + 2*n)
+	for j := 1; j <= n; j++ {
+		size *= 1<<(2*j) - 1
 	}
-	t.Logf("%d classes", len(seen))
+	return size
+}
+
+func TestCliffordIsClifford(t *testing.T) {
+	// Every drawn circuit conjugates each X_k and Z_k to ± a Pauli string
+	// (the definition of the Clifford group, Nielsen & Chuang §10.5.2),
+	// checked on its dense matrix built from textbook gate matrices.
+	for _, c := range []struct{ qubits, draws int }{{1, 100}, {2, 200}, {3, 100}, {4, 10}} {
+		for seed := range c.draws {
+			circ := Clifford(c.qubits).Example(seed)
+			if circ.Qubits() != c.qubits {
+				t.Fatalf("Clifford(%d) drew a circuit on %d qubits", c.qubits, circ.Qubits())
+			}
+			if _, err := cliffordClassOf(circ); err != nil {
+				t.Fatalf("Clifford(%d), seed %d: %v\n%v", c.qubits, seed, err, circ)
+			}
+		}
+	}
+}
+
+// chiSquareUniform returns Pearson's statistic of the class counts against
+// the uniform law on k classes, and the number of distinct classes seen.
+func chiSquareUniform(counts map[string]int, k int) (float64, int) {
+	n := 0
+	for _, c := range counts {
+		n += c
+	}
+	want := float64(n) / float64(k)
+	chi2 := float64(k-len(counts)) * want // classes never seen
+	for _, c := range counts {
+		chi2 += (float64(c) - want) * (float64(c) - want) / want
+	}
+	return chi2, len(counts)
+}
+
+func TestCliffordUniformOneQubit(t *testing.T) {
+	// All 24 one-qubit Cliffords modulo phase equally likely: chi-square with
+	// 23 degrees of freedom, critical value chi2.isf(5e-7, 23) = 72.4834 from
+	// SciPy (testdata/gen/reference.txt). Two checks (Example, rapid.Check)
+	// at 5e-7 each: false failure ≤ 1e-6 per run.
+	const crit = 72.4833615612303
+	example, checked := drawAll(t, Clifford(1), 24*400, 1)
+	for name, sample := range map[string][]*circuit.Circuit{"Example": example, "rapid.Check": checked} {
+		counts := map[string]int{}
+		for _, c := range sample {
+			class, err := cliffordClassOf(c)
+			if err != nil {
+				t.Fatal(err)
+			}
+			counts[class]++
+		}
+		chi2, seen := chiSquareUniform(counts, cliffordGroupSize(1))
+		if seen > 24 || chi2 > crit {
+			t.Errorf("via %s: %d classes, chi-square %.1f > %.1f", name, seen, chi2, crit)
+		}
+	}
+}
+
+func TestCliffordUniformTwoQubits(t *testing.T) {
+	// All 11520 two-qubit Cliffords modulo phase equally likely: chi-square
+	// with 11519 degrees of freedom, critical value chi2.isf(1e-6, 11519) =
+	// 12254.94 from SciPy (testdata/gen/reference.txt); one check, false
+	// failure ≤ 1e-6 per run. Six draws per class on average (30 with -gen.long): Pearson's
+	// statistic for equal cell probabilities has mean k−1 and variance
+	// 2(k−1)(1−1/N) whatever the counts (Cochran, Ann. Math. Stat. 23 (1952)
+	// 315–345, from memory), and with k = 11520 cells its law is close to the
+	// chi-square law (skewness ≈ 0.03). Drawn with Example only, to keep the
+	// run short.
+	const crit = 12254.93801260624
+	k := cliffordGroupSize(2)
+	counts := map[string]int{}
+	for seed := range sampleSize(6, 5) * k {
+		class, err := cliffordClassOf(Clifford(2).Example(seed))
+		if err != nil {
+			t.Fatal(err)
+		}
+		counts[class]++
+	}
+	chi2, seen := chiSquareUniform(counts, k)
+	if seen > k || chi2 > crit {
+		t.Errorf("%d classes (of %d), chi-square %.1f > %.1f", seen, k, chi2, crit)
+	}
+}
+
+func TestCliffordShrinksTowardIdentity(t *testing.T) {
+	got := shrunk(t, Clifford(3), func(c *circuit.Circuit) bool { return c.Len() > 0 })
+	// The shrinker lowers bits one at a time, so it may stop at a one-qubit
+	// Clifford written with up to three gates (h·s·h).
+	if got.Len() < 1 || got.Len() > 3 {
+		t.Errorf("a nonempty Clifford shrinks to %d ops, want 1 to 3:\n%v", got.Len(), got)
+	}
+	if c := Clifford(3).Example(0); c.Len() == 0 {
+		t.Errorf("seed 0 drew the identity; draws should be generic")
+	}
 }

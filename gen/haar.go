@@ -33,10 +33,12 @@ const MaxStateQubits = 24
 // any other.
 //
 // Row and column indices follow qcheck's convention (qubit 0 is the least
-// significant bit of the index). Unitary panics if qubits is outside
-// [0, MaxUnitaryQubits].
+// significant bit of the index). If qubits is outside [0, MaxUnitaryQubits],
+// every draw fails the test with an error saying so.
 func Unitary(qubits int) *rapid.Generator[*mat.CDense] {
-	checkQubits("Unitary", qubits, MaxUnitaryQubits)
+	if err := checkQubits("Unitary", qubits, MaxUnitaryQubits); err != nil {
+		return failing[*mat.CDense](err)
+	}
 	d := 1 << qubits
 	return rapid.Custom(func(t *rapid.T) *mat.CDense {
 		return haarUnitary(drawSource(t), d)
@@ -73,9 +75,12 @@ func haarUnitary(rng *rand.Rand, d int) *mat.CDense {
 // by its norm; Mezzadri 2007, §2). As with Unitary, the Gaussians come from a
 // private generator seeded through rapid, so drawn states follow the law
 // exactly. Index i holds the amplitude of the basis state whose bit q is
-// qubit q. State panics if qubits is outside [0, MaxStateQubits].
+// qubit q. If qubits is outside [0, MaxStateQubits], every draw fails the
+// test with an error saying so.
 func State(qubits int) *rapid.Generator[[]complex128] {
-	checkQubits("State", qubits, MaxStateQubits)
+	if err := checkQubits("State", qubits, MaxStateQubits); err != nil {
+		return failing[[]complex128](err)
+	}
 	d := 1 << qubits
 	return rapid.Custom(func(t *rapid.T) []complex128 {
 		return haarState(drawSource(t), d)
@@ -103,11 +108,11 @@ func haarState(rng *rand.Rand, d int) []complex128 {
 	}
 }
 
-// checkQubits panics with a message naming the generator when qubits is out
-// of [0, max]; a generator built with an impossible size is a mistake in the
-// test that builds it, reported where it is made rather than at the first draw.
-func checkQubits(name string, qubits, max int) {
+// checkQubits returns an error naming the generator when qubits is out of
+// [0, max].
+func checkQubits(name string, qubits, max int) error {
 	if qubits < 0 || qubits > max {
-		panic(fmt.Sprintf("gen.%s: qubits = %d, want 0 ≤ qubits ≤ %d", name, qubits, max))
+		return fmt.Errorf("gen.%s: qubits = %d, want 0 ≤ qubits ≤ %d", name, qubits, max)
 	}
+	return nil
 }

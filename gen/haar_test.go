@@ -86,7 +86,7 @@ func TestUnitaryEntryLaw(t *testing.T) {
 	// per matrix keeps the sample independent; the entry's position cycles so
 	// every position is used. Six KS checks (d = 2, 4, 8; drawn with Example
 	// and inside rapid.Check), each at 1e-6/6: false failure ≤ 1e-6 per run.
-	const n = 4000
+	n := sampleSize(4000, 25)
 	alpha := falseFailure / 6
 	for _, qubits := range []int{1, 2, 3} {
 		d := 1 << qubits
@@ -145,14 +145,17 @@ func traceMomentsCheck(us []*mat.CDense, alpha float64) string {
 }
 
 func TestUnitaryTraceMoments(t *testing.T) {
-	// Three dimensions × two moments; traceMomentsCheck runs both moments at
-	// alpha each, so alpha = 1e-6/6 keeps the run's false failure ≤ 1e-6.
-	const n = 20000
-	alpha := falseFailure / 6
+	// Three dimensions × two sources (Example, rapid.Check) × two moments;
+	// traceMomentsCheck runs both moments at alpha each, so alpha = 1e-6/12
+	// keeps the run's false failure ≤ 1e-6.
+	n := sampleSize(20000, 10)
+	alpha := falseFailure / 12
 	for _, qubits := range []int{1, 2, 3} {
-		us, _ := drawAll(t, Unitary(qubits), n, 50000*qubits)
-		if msg := traceMomentsCheck(us, alpha); msg != "" {
-			t.Errorf("d=%d: %s", 1<<qubits, msg)
+		example, checked := drawAll(t, Unitary(qubits), n, 50000*qubits)
+		for name, us := range map[string][]*mat.CDense{"Example": example, "rapid.Check": checked} {
+			if msg := traceMomentsCheck(us, alpha); msg != "" {
+				t.Errorf("d=%d via %s: %s", 1<<qubits, name, msg)
+			}
 		}
 	}
 }
@@ -238,10 +241,7 @@ func TestUnitarySpacingLaw(t *testing.T) {
 	// spacing law exactly. Two KS checks (Example, rapid.Check) at 1e-6/2
 	// each: false failure ≤ 1e-6 per run.
 	const surmiseGap = 0.002
-	n := 200
-	if !testing.Short() {
-		n = 400
-	}
+	n := sampleSize(150, 20)
 	alpha := falseFailure / 2
 	pick := rand.New(rand.NewPCG(11, 11))
 	example, checked := drawAll(t, Unitary(6), n, 900000)
@@ -268,7 +268,7 @@ func TestStateEntryLaw(t *testing.T) {
 	// |ψ_i|² of a Haar-random state of dimension d follows Beta(1, d−1)
 	// (uniform unit vector in C^d; Mezzadri 2007 §2). One coordinate per
 	// state, position cycling. Six KS checks at 1e-6/6: false failure ≤ 1e-6.
-	const n = 4000
+	n := sampleSize(4000, 25)
 	alpha := falseFailure / 6
 	for _, qubits := range []int{1, 2, 3} {
 		d := 1 << qubits
@@ -337,4 +337,20 @@ func TestDrawsDoNotRepeat(t *testing.T) {
 		t.Fatalf("seeds from rapid.Uint64 repeated only %d times in %d draws; the rationale in bits.go is stale", repeats, n)
 	}
 	t.Logf("seeds from rapid.Uint64: %d repeats in %d draws", repeats, n)
+}
+
+func TestUnitaryShrinksToSeedZero(t *testing.T) {
+	// A failing Haar draw shrinks to the unitary of seed 0, still generic.
+	got := shrunk(t, Unitary(1), func(*mat.CDense) bool { return true })
+	want := haarUnitary(rand.New(rand.NewPCG(0, sourceStream)), 2)
+	for i := range 2 {
+		for j := range 2 {
+			if got.At(i, j) != want.At(i, j) {
+				t.Fatalf("shrunk unitary %v, want seed 0's %v", got, want)
+			}
+		}
+	}
+	if cmplx.Abs(want.At(0, 0)) < 1e-3 || cmplx.Abs(want.At(0, 1)) < 1e-3 {
+		t.Errorf("seed 0 gives a special-looking unitary %v", want)
+	}
 }

@@ -13,10 +13,10 @@ import (
 // logical qubit l. Every permutation is equally likely (rapid.Permutation's
 // Fisher–Yates shuffle draws each swap unbiased), and a failure shrinks
 // toward the identity placement, through placements with fewer and shorter
-// swaps. Layout panics if qubits is negative.
+// swaps. With qubits < 0 every draw fails the test with an error saying so.
 func Layout(qubits int) *rapid.Generator[[]int] {
 	if qubits < 0 {
-		panic(fmt.Sprintf("gen.Layout: qubits = %d, want ≥ 0", qubits))
+		return failing[[]int](fmt.Errorf("gen.Layout: qubits = %d, want ≥ 0", qubits))
 	}
 	identity := make([]int, qubits)
 	for i := range identity {
@@ -55,11 +55,11 @@ func (s Shape) String() string {
 }
 
 // Graph returns the shape's coupling graph on the given number of qubits,
-// labelled in reading order as described on each shape. It panics if qubits
+// labelled in reading order as described on each shape. It fails if qubits
 // is negative or the shape unknown.
-func (s Shape) Graph(qubits int) *Graph {
+func (s Shape) Graph(qubits int) (*Graph, error) {
 	if qubits < 0 {
-		panic(fmt.Sprintf("gen: %v graph with %d qubits, want ≥ 0", s, qubits))
+		return nil, fmt.Errorf("gen: %v graph with %d qubits, want ≥ 0", s, qubits)
 	}
 	g := &Graph{Qubits: qubits}
 	switch s {
@@ -85,19 +85,23 @@ func (s Shape) Graph(qubits int) *Graph {
 			}
 		}
 	default:
-		panic(fmt.Sprintf("gen: unknown shape %v", s))
+		return nil, fmt.Errorf("gen: unknown shape %v", s)
 	}
 	g.normalize()
-	return g
+	return g, nil
 }
 
 // Coupling returns a generator of coupling graphs of the given shape and
 // size whose physical qubits are numbered at random (a Layout applied to the
 // shape's reading-order labels), so that a router under test cannot rely on
 // neighbours having consecutive numbers. It shrinks toward the reading-order
-// labels. It panics if qubits is negative or the shape unknown.
+// labels. If qubits is negative or the shape unknown, every draw fails the
+// test with an error saying so.
 func Coupling(shape Shape, qubits int) *rapid.Generator[*Graph] {
-	base := shape.Graph(qubits)
+	base, err := shape.Graph(qubits)
+	if err != nil {
+		return failing[*Graph](fmt.Errorf("gen.Coupling: %w", err))
+	}
 	return rapid.Map(Layout(qubits), func(relabel []int) *Graph {
 		g := &Graph{Qubits: qubits, Edges: make([][2]int, len(base.Edges))}
 		for i, e := range base.Edges {

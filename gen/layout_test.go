@@ -3,6 +3,7 @@ package gen
 import (
 	"fmt"
 	"slices"
+	"strings"
 	"testing"
 )
 
@@ -50,7 +51,7 @@ func TestShapeGraphs(t *testing.T) {
 	// a full r×c grid has r(c−1)+c(r−1) edges and Manhattan distances.
 	abs := func(x int) int { return max(x, -x) }
 	for _, n := range []int{1, 2, 3, 7} {
-		line, ring := Line.Graph(n), Ring.Graph(n)
+		line, ring := mustGraph(t, Line, n), mustGraph(t, Ring, n)
 		if len(line.Edges) != max(n-1, 0) {
 			t.Errorf("line of %d has %d edges", n, len(line.Edges))
 		}
@@ -72,7 +73,7 @@ func TestShapeGraphs(t *testing.T) {
 			}
 		}
 	}
-	grid := Grid.Graph(9) // 3×3
+	grid := mustGraph(t, Grid, 9) // 3×3
 	if len(grid.Edges) != 12 {
 		t.Errorf("3×3 grid has %d edges, want 12", len(grid.Edges))
 	}
@@ -85,12 +86,30 @@ func TestShapeGraphs(t *testing.T) {
 	}
 	// 7 qubits: a 3-wide grid with rows 0-1-2, 3-4-5 and 6: four horizontal
 	// and four vertical edges; qubit 6 is coupled only to qubit 3 above it.
-	g7 := Grid.Graph(7)
+	g7 := mustGraph(t, Grid, 7)
 	if !g7.Coupled(3, 6) || g7.Coupled(5, 6) || len(g7.Edges) != 4+4 {
 		t.Errorf("7-qubit grid edges %v", g7.Edges)
 	}
-	if d := Line.Graph(4).Distance(0, 9); d != -1 {
+	if d := mustGraph(t, Line, 4).Distance(0, 9); d != -1 {
 		t.Errorf("distance to a qubit outside the graph = %d, want −1", d)
+	}
+}
+
+func mustGraph(t *testing.T, s Shape, n int) *Graph {
+	t.Helper()
+	g, err := s.Graph(n)
+	if err != nil {
+		t.Fatal(err)
+	}
+	return g
+}
+
+func TestShapeGraphErrors(t *testing.T) {
+	if _, err := Line.Graph(-1); err == nil || !strings.Contains(err.Error(), "-1") {
+		t.Errorf("Line.Graph(-1) error = %v, want one naming -1", err)
+	}
+	if _, err := Shape(7).Graph(3); err == nil || !strings.Contains(err.Error(), "Shape(7)") {
+		t.Errorf("Shape(7).Graph error = %v, want one naming the shape", err)
 	}
 }
 
@@ -111,7 +130,7 @@ func distanceProfile(g *Graph) string {
 
 func TestCouplingRelabels(t *testing.T) {
 	for _, shape := range []Shape{Line, Ring, Grid} {
-		base := shape.Graph(8)
+		base := mustGraph(t, shape, 8)
 		relabelled := 0
 		for seed := range 20 {
 			g := Coupling(shape, 8).Example(seed)

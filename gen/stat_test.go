@@ -22,6 +22,19 @@ import (
 // falseFailure is the false-failure probability allowed per test function.
 const falseFailure = 1e-6
 
+// long selects larger samples for the statistical tests, for a thorough run:
+//
+//	go test ./gen/ -run 'Law|Moments|Uniform' -gen.long
+var long = flag.Bool("gen.long", false, "run the statistical tests of package gen on larger samples")
+
+// sampleSize returns n, or n times factor with -gen.long.
+func sampleSize(n, factor int) int {
+	if *long {
+		return n * factor
+	}
+	return n
+}
+
 // ksDistance returns the Kolmogorov–Smirnov statistic
 // D = sup_x |F_N(x) − F(x)| of the sample against the continuous CDF cdf.
 // It sorts sample in place.
@@ -71,15 +84,7 @@ func normalCritical(alpha float64) float64 {
 // values drawn, and a statistical verdict on them, repeat from run to run.
 func checkSeeded(t *testing.T, seed uint64, prop func(*rapid.T)) {
 	t.Helper()
-	f := flag.Lookup("rapid.seed")
-	if f == nil {
-		t.Fatal("rapid registers no -rapid.seed flag; cannot fix the seed")
-	}
-	old := f.Value.String()
-	if err := f.Value.Set(strconv.FormatUint(seed, 10)); err != nil {
-		t.Fatal(err)
-	}
-	defer f.Value.Set(old)
+	defer setFlag(t, "rapid.seed", strconv.FormatUint(seed, 10))()
 	rapid.Check(t, prop)
 }
 

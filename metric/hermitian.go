@@ -2,6 +2,8 @@ package metric
 
 import (
 	"math"
+	"runtime"
+	"sync"
 
 	"gonum.org/v1/gonum/lapack"
 	lapackgonum "gonum.org/v1/gonum/lapack/gonum"
@@ -17,38 +19,192 @@ type tridiagonal struct {
 	diag []float64    // diagonal of T
 	off  []float64    // sub-diagonal of T, length n−1
 	tau  []complex128 // reflector k is I − tau[k]·v·vᴴ, v = (1, a[k+2:n, k])
+	wbuf []complex128 // the vector w of the current rank-2 update
+	work []complex128 // n·(maxWorkers+2) elements for reduce, or nil to allocate
 }
 
+// maxWorkers caps the goroutines one reduction or product uses.
+const maxWorkers = 8
+
 // reduce overwrites t.a (n×n, column-major, Hermitian: only the lower triangle
-// is read) with the reflectors and fills diag, off and tau. work needs length n.
-func (t *tridiagonal) reduce(work []complex128) {
+// is read) with the reflectors and fills diag, off and tau.
+//
+// Each step k applies reflector k to the trailing block as the rank-2 update
+// A −= v·wᴴ + w·vᴴ and, in the same pass over memory, multiplies the updated
+// block by reflector k+1 (which needs only the block's first column, updated
+// beforehand). One sweep of the block per step instead of two; for large
+// blocks the columns are shared out over the cores.
+func (t *tridiagonal) reduce() {
 	n, a := t.n, t.a
+	t.diag[0] = real(a[0])
+	if n == 1 {
+		return
+	}
+	workers := 1
+	if n >= parallelTridiagonal {
+		workers = max(1, min(runtime.GOMAXPROCS(0), maxWorkers))
+	}
+	if len(t.work) < n*(workers+1) {
+		t.work = make([]complex128, n*(workers+1))
+	}
+	x := t.work[:n]
+	var yarr [maxWorkers][]complex128
+	ys := yarr[:workers]
+	for w := range ys {
+		ys[w] = t.work[n*(w+1) : n*(w+2)]
+	}
+	t.wbuf = x
+
+	// Reflector 0 and its product with the trailing block.
+	t.off[0], t.tau[0] = reflector(a[1:n])
+	if t.tau[0] != 0 {
+		a[1] = 1
+		hemvLower(n-1, t.tau[0], a[n+1:], n, a[1:n], x[:n-1])
+	}
 	for k := 0; k < n-1; k++ {
 		m := n - k - 1
-		col := a[k*n+k+1 : k*n+n]
-		beta, tau := reflector(col)
-		t.diag[k] = real(a[k*n+k])
-		t.off[k] = beta
-		t.tau[k] = tau
-		if tau == 0 {
+		v := a[k*n+k+1 : k*n+n]
+		trail := a[(k+1)*n+k+1:]
+		tau := t.tau[k]
+		first := trail[:m]
+		if tau != 0 {
+			// w = x − ½·τ·(xᴴv)·v, then update the trailing block's first column.
+			w := x[:m]
+			var dot complex128
+			for i, xi := range w {
+				dot += conj(xi) * v[i]
+			}
+			s := -0.5 * tau * dot
+			for i, vi := range v {
+				w[i] += s * vi
+			}
+			v0, w0 := conj(v[0]), conj(w[0])
+			for i := range first {
+				first[i] -= v[i]*w0 + w[i]*v0
+			}
+		}
+		t.diag[k+1] = real(first[0])
+		if m == 1 {
+			v[0] = complex(t.off[k], 0)
+			break
+		}
+		next := first[1:m]
+		t.off[k+1], t.tau[k+1] = reflector(next)
+		if t.tau[k+1] != 0 {
+			next[0] = 1
+		}
+		t.sweep(k, workers, ys)
+		if t.tau[k+1] != 0 {
+			xs := x[:m-1]
+			for i := range xs {
+				var s complex128
+				for _, y := range ys {
+					s += y[i]
+				}
+				xs[i] = t.tau[k+1] * s
+			}
+		}
+		v[0] = complex(t.off[k], 0)
+	}
+}
+
+// parallelTridiagonal is the order from which reduce shares its sweeps out
+// over goroutines.
+const parallelTridiagonal = 256
+
+// sweep applies step k's rank-2 update to columns 1… of the trailing block
+// and accumulates, into ys (one buffer per worker, summed by the caller), the
+// product of the next trailing block with reflector k+1.
+func (t *tridiagonal) sweep(k, workers int, ys [][]complex128) {
+	n := t.n
+	m := n - k - 1
+	if workers == 1 || m < parallelTridiagonal/2 {
+		t.sweepColumns(k, 1, m, ys[0])
+		for _, y := range ys[1:] {
+			clear(y[:m-1])
+		}
+		return
+	}
+	// Column j holds m − j entries: cut where the remaining area is shared
+	// equally.
+	var wg sync.WaitGroup
+	lo := 1
+	for w := 0; w < workers; w++ {
+		hi := m
+		if w < workers-1 {
+			hi = max(lo, int(float64(m)*(1-math.Sqrt(1-float64(w+1)/float64(workers)))))
+		}
+		wg.Add(1)
+		go func(lo, hi int, y []complex128) {
+			defer wg.Done()
+			t.sweepColumns(k, lo, hi, y)
+		}(lo, hi, ys[w])
+		lo = hi
+	}
+	wg.Wait()
+}
+
+// sweepColumns does sweep's work for columns [lo, hi) of the trailing block
+// of step k, writing its share of the next product into y (length m−1,
+// cleared here).
+func (t *tridiagonal) sweepColumns(k, lo, hi int, y []complex128) {
+	n, a := t.n, t.a
+	m := n - k - 1
+	y = y[:m-1]
+	clear(y)
+	v := a[k*n+k+1 : k*n+n]
+	trail := a[(k+1)*n+k+1:]
+	tau := t.tau[k]
+	next := trail[1:m] // reflector k+1, indexed by the rows of the next block
+	product := t.tau[k+1] != 0
+	w := v // with tau = 0 the update has zero coefficients and w is not used
+	if tau != 0 {
+		w = t.wbuf[:m]
+	}
+	for j := lo; j < hi; j++ {
+		col := trail[j*n+j : j*n+m]
+		var vj, wj complex128
+		if tau != 0 {
+			vj, wj = conj(v[j]), conj(w[j])
+			col[0] -= v[j]*wj + w[j]*vj
+		}
+		col[0] = complex(real(col[0]), 0)
+		if !product {
+			if tau != 0 {
+				sweepUpdate(col[1:], v[j+1:m], w[j+1:m], -wj, -vj)
+			}
 			continue
 		}
-		col[0] = 1
-		trail := a[(k+1)*n+k+1:]
-		x := work[:m]
-		hemvLower(m, tau, trail, n, col, x)
-		var dot complex128
-		for i, xi := range x {
-			dot += conj(xi) * col[i]
-		}
-		s := -0.5 * tau * dot
-		for i, vi := range col {
-			x[i] += s * vi
-		}
-		her2Lower(m, col, x, trail, n)
-		col[0] = complex(beta, 0)
+		// Column j of this block is column j−1 of the next one.
+		xj := next[j-1]
+		s := sweepKernel(col[1:], v[j+1:m], w[j+1:m], y[j:m-1], next[j:m-1], -wj, -vj, xj)
+		y[j-1] += complex(real(col[0]), 0)*xj + s
 	}
-	t.diag[n-1] = real(a[(n-1)*n+n-1])
+}
+
+// sweepUpdate does col[i] += v[i]·p + w[i]·q for every i of col.
+func sweepUpdate(col, v, w []complex128, p, q complex128) {
+	v = v[:len(col)]
+	w = w[:len(col)]
+	for i := range col {
+		col[i] += v[i]*p + w[i]*q
+	}
+}
+
+// sweepKernelGo is the portable form of sweepKernel.
+func sweepKernelGo(col, v, w, y, x []complex128, p, q, r complex128) complex128 {
+	v = v[:len(col)]
+	w = w[:len(col)]
+	y = y[:len(col)]
+	x = x[:len(col)]
+	var s complex128
+	for i := range col {
+		c := col[i] + v[i]*p + w[i]*q
+		col[i] = c
+		y[i] += c * r
+		s += conj(c) * x[i]
+	}
+	return s
 }
 
 // reflector turns x into the vector v of a Householder reflector
@@ -58,15 +214,26 @@ func (t *tridiagonal) reduce(work []complex128) {
 // package do not need.
 func reflector(x []complex128) (beta float64, tau complex128) {
 	alpha := x[0]
+	ar, ai := real(alpha), imag(alpha)
+	// The norm is summed scaled by the largest part, so that tiny entries (a rounding error
+	// beside a 1e-98 term, say) do not square to zero and leave beta = 0 to divide by.
+	scale := math.Max(math.Abs(ar), math.Abs(ai))
+	for _, z := range x[1:] {
+		scale = math.Max(scale, math.Max(math.Abs(real(z)), math.Abs(imag(z))))
+	}
+	if scale == 0 {
+		return 0, 0
+	}
 	var ss float64
 	for _, z := range x[1:] {
-		ss += real(z)*real(z) + imag(z)*imag(z)
+		zr, zi := real(z)/scale, imag(z)/scale
+		ss += zr*zr + zi*zi
 	}
-	ar, ai := real(alpha), imag(alpha)
 	if ss == 0 && ai == 0 {
 		return ar, 0
 	}
-	beta = -math.Copysign(math.Sqrt(ar*ar+ai*ai+ss), ar)
+	sr, si := ar/scale, ai/scale
+	beta = -math.Copysign(scale*math.Sqrt(sr*sr+si*si+ss), ar)
 	tau = complex((beta-ar)/beta, -ai/beta)
 	s := 1 / (alpha - complex(beta, 0))
 	for i := range x[1:] {
@@ -100,23 +267,6 @@ func hemvLower(m int, alpha complex128, a []complex128, lda int, x, y []complex1
 	}
 }
 
-// her2Lower sets A = A − v·wᴴ − w·vᴴ on the lower triangle of the m×m
-// Hermitian A stored column-major in a, keeping the diagonal real.
-func her2Lower(m int, v, w, a []complex128, lda int) {
-	for j := 0; j < m; j++ {
-		wj, vj := conj(w[j]), conj(v[j])
-		cj := a[j*lda+j : j*lda+m]
-		vs := v[j:m]
-		ws := w[j:m]
-		vs = vs[:len(cj)]
-		ws = ws[:len(cj)]
-		for i := range cj {
-			cj[i] -= vs[i]*wj + ws[i]*vj
-		}
-		cj[0] = complex(real(cj[0]), 0)
-	}
-}
-
 // values returns the eigenvalues of T in ascending order, overwriting diag
 // and off. It reports false if the QR iteration did not converge.
 func (t *tridiagonal) values() ([]float64, bool) {
@@ -124,15 +274,12 @@ func (t *tridiagonal) values() ([]float64, bool) {
 	return t.diag, ok
 }
 
-// vectors returns the eigenvalues of T in ascending order and the
-// eigenvectors of T as the columns of a row-major n×n real matrix, overwriting
-// diag and off.
-func (t *tridiagonal) vectors() ([]float64, []float64, bool) {
-	n := t.n
-	z := make([]float64, n*n)
-	work := make([]float64, max(1, 2*n-2))
-	ok := lapackgonum.Implementation{}.Dsteqr(lapack.EVTridiag, n, t.diag, t.off, z, n, work)
-	return t.diag, z, ok
+// vectors returns the eigenvalues of T in ascending order, overwriting diag
+// and off, and puts the eigenvectors of T into the columns of z (row-major
+// n×n). work needs length max(1, 2n−2).
+func (t *tridiagonal) vectors(z, work []float64) ([]float64, bool) {
+	ok := lapackgonum.Implementation{}.Dsteqr(lapack.EVTridiag, t.n, t.diag, t.off, z, t.n, work)
+	return t.diag, ok
 }
 
 // backTransform turns an eigenvector of T, given as column j of the

@@ -67,7 +67,7 @@ func operatorNorm(a []complex128, r, c int) float64 {
 // matrix whose lower triangle is stored column-major in g (g is overwritten).
 func hermitianValues(g []complex128, k int) []float64 {
 	t := tridiagonal{n: k, a: g, diag: make([]float64, k), off: make([]float64, max(k-1, 0)), tau: make([]complex128, k)}
-	t.reduce(make([]complex128, k))
+	t.reduce()
 	vals, ok := t.values()
 	if !ok {
 		// Dsterf gives up only after 30·k QR sweeps, which a Hermitian

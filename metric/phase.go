@@ -13,7 +13,11 @@ import (
 // each phase is within a small multiple of n·1e-16 of the truth.
 func Eigenphases(w mat.CMatrix) []float64 {
 	n := squareSize("Eigenphases", "matrix", w)
-	return newSpectrum(rowMajor(w, nil), nil, n, false).phases
+	mem := spectrumScratch(n, false)
+	defer mem.release()
+	var s spectrum
+	s.compute(rowMajor(w, mem.complexes(n*n)), nil, n, false, mem)
+	return append([]float64(nil), s.phases...)
 }
 
 // PhaseDistance returns min over φ of ‖u − e^{iφ}v‖ for two n×n unitaries: the
@@ -34,7 +38,7 @@ func PhaseDistance(u, v mat.CMatrix) float64 {
 // optimal and one of them is returned.
 func PhaseAlign(u, v mat.CMatrix) (dist, phase float64) {
 	n := pairSize("PhaseAlign", u, v)
-	a := shortestArc(newSpectrum(rowMajor(u, nil), rowMajor(v, nil), n, false).phases)
+	a := pairArc(u, v, n)
 	return 2 * math.Sin(a.length/4), a.middle()
 }
 
@@ -47,7 +51,7 @@ func PhaseAlign(u, v mat.CMatrix) (dist, phase float64) {
 // It ignores global phase, as channels do.
 func Diamond(u, v mat.CMatrix) float64 {
 	n := pairSize("Diamond", u, v)
-	a := shortestArc(newSpectrum(rowMajor(u, nil), rowMajor(v, nil), n, false).phases)
+	a := pairArc(u, v, n)
 	if a.length >= math.Pi {
 		return 2
 	}

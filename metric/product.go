@@ -61,16 +61,7 @@ func mulAddSerial(m, n, k int, alpha complex128, a []complex128, lda int, b []co
 				for ; p+1 < p1; p += 2 {
 					b00, b10 := alpha*b[j*ldb+p], alpha*b[j*ldb+p+1]
 					b01, b11 := alpha*b[(j+1)*ldb+p], alpha*b[(j+1)*ldb+p+1]
-					a0 := a[p*lda+i0 : p*lda+i1]
-					a1 := a[(p+1)*lda+i0 : (p+1)*lda+i1]
-					a1 = a1[:len(a0)]
-					c0 := c0[:len(a0)]
-					c1 := c1[:len(a0)]
-					for i, x0 := range a0 {
-						x1 := a1[i]
-						c0[i] += x0*b00 + x1*b10
-						c1[i] += x0*b01 + x1*b11
-					}
+					mulAdd2x2(c0, c1, a[p*lda+i0:p*lda+i1], a[(p+1)*lda+i0:(p+1)*lda+i1], b00, b10, b01, b11)
 				}
 				if p < p1 {
 					b00, b01 := alpha*b[j*ldb+p], alpha*b[(j+1)*ldb+p]
@@ -95,5 +86,17 @@ func mulAddSerial(m, n, k int, alpha complex128, a []complex128, lda int, b []co
 				}
 			}
 		}
+	}
+}
+
+// mulAdd2x2Go is the portable form of mulAdd2x2.
+func mulAdd2x2Go(c0, c1, a0, a1 []complex128, b00, b10, b01, b11 complex128) {
+	a1 = a1[:len(a0)]
+	c0 = c0[:len(a0)]
+	c1 = c1[:len(a0)]
+	for i, x0 := range a0 {
+		x1 := a1[i]
+		c0[i] += x0*b00 + x1*b10
+		c1[i] += x0*b01 + x1*b11
 	}
 }

@@ -3,7 +3,8 @@ package metric
 import (
 	"math"
 	"math/cmplx"
-	"sort"
+
+	"gonum.org/v1/gonum/mat"
 )
 
 // spectrum holds the eigenphases of a unitary W = V†U (or of W = U alone),
@@ -23,6 +24,7 @@ type spectrum struct {
 
 	withVectors bool      // whether to compute eigenvectors too
 	z           []float64 // eigenvectors of the tridiagonal form, row-major
+	mem         *scratch
 }
 
 // poleLimit bounds |x| for an accepted transform: beyond it the pole is
@@ -31,20 +33,28 @@ type spectrum struct {
 // is built again with the pole in the widest gap of the spectrum found.
 const poleLimit = 1e4
 
-// newSpectrum computes the eigenphases of V†U (V = nil: of U) for n×n
-// row-major unitaries.
-// With vectors set, eigenvectors are kept for vector.
-func newSpectrum(u, v []complex128, n int, vectors bool) *spectrum {
-	s := &spectrum{n: n, u: u, v: v, withVectors: vectors}
+// spectrumScratch returns scratch big enough for a spectrum of order n,
+// including room for copies of the two inputs.
+func spectrumScratch(n int, vectors bool) *scratch {
+	nf := 3 * n
+	if vectors {
+		nf += n*n + 2*n
+	}
+	return getScratch(4*n*n+n*(maxWorkers+3), nf, 2*n)
+}
+
+// compute finds the eigenphases of V†U (V = nil: of U) for n×n row-major
+// unitaries, taking its memory from mem. With vectors set, eigenvectors are
+// kept for vector.
+func (s *spectrum) compute(u, v []complex128, n int, vectors bool, mem *scratch) {
+	*s = spectrum{n: n, u: u, v: v, withVectors: vectors, mem: mem}
 	var trace complex128
 	if v == nil {
 		for i := 0; i < n; i++ {
 			trace += u[i*n+i]
 		}
 	} else {
-		for i, x := range u {
-			trace += conj(v[i]) * x
-		}
+		trace = traceInner(v, u)
 	}
 	// Put the pole opposite the mean eigenvalue when the spectrum leans to
 	// one side (the usual case when U and V nearly agree), nudged off the
@@ -55,16 +65,28 @@ func newSpectrum(u, v []complex128, n int, vectors bool) *spectrum {
 	if cmplx.Abs(trace) > float64(n)/4 {
 		alpha = cmplx.Phase(trace) + math.Pi + nudge
 	}
-	work := make([]complex128, 2*n*n+2*n)
-	piv := make([]int, n)
+	m, p := mem.complexes(n*n), mem.complexes(n*n)
+	s.tri = tridiagonal{
+		n:    n,
+		a:    p,
+		diag: mem.floats(n),
+		off:  mem.floats(n)[:max(n-1, 0)],
+		tau:  mem.complexes(n),
+		work: mem.complexes(n * (maxWorkers + 2)),
+	}
+	s.phases = mem.floats(n)
+	s.order = mem.ints(n)
+	piv := mem.ints(n)
+	if vectors {
+		s.z = mem.floats(n * n)
+	}
 	for attempt := 0; ; attempt++ {
-		ok := s.transform(alpha, work, piv)
+		ok := s.transform(alpha, m, p, piv)
 		if ok && (math.Abs(s.trans[0]) <= poleLimit && math.Abs(s.trans[n-1]) <= poleLimit || attempt >= 3) {
-			return s
+			return
 		}
 		if ok {
-			widest := shortestArc(s.phases)
-			alpha = widest.middle() + math.Pi
+			alpha = shortestArc(s.phases).middle() + math.Pi // the middle of the widest gap
 		} else {
 			alpha += 2.399963229728653 // the golden angle: never repeats a direction
 		}
@@ -72,14 +94,12 @@ func newSpectrum(u, v []complex128, n int, vectors bool) *spectrum {
 }
 
 // transform builds and diagonalises the Cayley transform with its pole at
-// e^{iα}. It reports false if I − cW was singular to working precision or the
-// eigenvalue iteration failed.
-func (s *spectrum) transform(alpha float64, work []complex128, piv []int) bool {
+// e^{iα}, using m and p (n² each) and piv. It reports false if I − cW was
+// singular to working precision or the eigenvalue iteration failed.
+func (s *spectrum) transform(alpha float64, m, p []complex128, piv []int) bool {
 	n := s.n
 	s.alpha = alpha
 	c := cmplx.Exp(complex(0, -alpha))
-	m := work[:n*n]
-	p := work[n*n : 2*n*n]
 	// M = V − cU and P = V + cU, row-major; read column-major the buffers are
 	// Mᵀ and Pᵀ, and X = i·P·M⁻¹ means Mᵀ·(X/i)ᵀ = Pᵀ.
 	for i, x := range s.u {
@@ -109,27 +129,18 @@ func (s *spectrum) transform(alpha float64, work []complex128, piv []int) bool {
 	for j := 0; j < n; j++ {
 		for i := j; i < n; i++ {
 			lo, up := p[i+j*n], p[j+i*n]
-			p[i+j*n] = complex(0, 0.5) * (lo - conj(up))
+			x := complex(0, 0.5) * (lo - conj(up))
+			if math.IsNaN(real(x)) || math.IsInf(real(x), 0) || math.IsNaN(imag(x)) || math.IsInf(imag(x), 0) {
+				return false
+			}
+			p[i+j*n] = x
 		}
 	}
-	for _, x := range p {
-		if math.IsNaN(real(x)) || math.IsInf(real(x), 0) || math.IsNaN(imag(x)) || math.IsInf(imag(x), 0) {
-			return false
-		}
-	}
-	s.tri = tridiagonal{
-		n:    n,
-		a:    p,
-		diag: make([]float64, n),
-		off:  make([]float64, n),
-		tau:  make([]complex128, n),
-	}
-	s.tri.off = s.tri.off[:max(n-1, 0)]
-	s.tri.reduce(work[2*n*n : 2*n*n+n])
+	s.tri.reduce()
 	var vals []float64
 	var ok bool
 	if s.withVectors {
-		vals, s.z, ok = s.tri.vectors()
+		vals, ok = s.tri.vectors(s.z, s.mem.floats(max(1, 2*n-2)))
 	} else {
 		vals, ok = s.tri.values()
 	}
@@ -137,19 +148,47 @@ func (s *spectrum) transform(alpha float64, work []complex128, piv []int) bool {
 		return false
 	}
 	s.trans = vals
-	s.phases = make([]float64, n)
-	s.order = make([]int, n)
+	// θ = α + π + 2·atan(x) increases with x over an interval of length 2π,
+	// so wrapped into (−π, π] the phases form two ascending runs: rotate the
+	// second run to the front instead of sorting.
+	start := 0
 	for k, x := range vals {
 		s.phases[k] = wrapPhase(alpha + math.Pi + 2*math.Atan(x))
-		s.order[k] = k
+		if k > 0 && s.phases[k] < s.phases[k-1] {
+			start = k
+		}
 	}
-	sort.Sort(byPhase{s.phases, s.order})
+	rotate(s.phases, start)
+	for k := range s.order {
+		s.order[k] = (k + start) % n
+	}
+	// Rounding cannot break the order in exact arithmetic's place, but check
+	// rather than trust it; an insertion sort repairs any stray pair.
+	for k := 1; k < n; k++ {
+		for j := k; j > 0 && s.phases[j] < s.phases[j-1]; j-- {
+			s.phases[j], s.phases[j-1] = s.phases[j-1], s.phases[j]
+			s.order[j], s.order[j-1] = s.order[j-1], s.order[j]
+		}
+	}
 	return true
 }
 
+// rotate moves a[start:] to the front of a, in place.
+func rotate(a []float64, start int) {
+	reverse(a[:start])
+	reverse(a[start:])
+	reverse(a)
+}
+
+func reverse(a []float64) {
+	for i, j := 0, len(a)-1; i < j; i, j = i+1, j-1 {
+		a[i], a[j] = a[j], a[i]
+	}
+}
+
 // vector returns a unit eigenvector of W for phases[i]. Eigenvectors for
-// different i are orthonormal.
-// The spectrum must have been made with vectors.
+// different i are orthonormal. The spectrum must have been computed with
+// vectors.
 func (s *spectrum) vector(i int) []complex128 {
 	n := s.n
 	q := s.tri.backTransform(s.z, s.order[i], make([]complex128, n))
@@ -172,6 +211,17 @@ func (s *spectrum) vector(i int) []complex128 {
 	return out
 }
 
+// pairArc returns the shortest arc holding the eigenphases of v†u for two
+// n×n matrices.
+func pairArc(u, v mat.CMatrix, n int) circleArc {
+	mem := spectrumScratch(n, false)
+	defer mem.release()
+	ur, vr := rowMajor(u, mem.complexes(n*n)), rowMajor(v, mem.complexes(n*n))
+	var s spectrum
+	s.compute(ur, vr, n, false, mem)
+	return shortestArc(s.phases)
+}
+
 // wrapPhase maps an angle to (−π, π].
 func wrapPhase(x float64) float64 {
 	x = math.Remainder(x, 2*math.Pi)
@@ -179,16 +229,4 @@ func wrapPhase(x float64) float64 {
 		x += 2 * math.Pi
 	}
 	return x
-}
-
-type byPhase struct {
-	phases []float64
-	order  []int
-}
-
-func (b byPhase) Len() int           { return len(b.phases) }
-func (b byPhase) Less(i, j int) bool { return b.phases[i] < b.phases[j] }
-func (b byPhase) Swap(i, j int) {
-	b.phases[i], b.phases[j] = b.phases[j], b.phases[i]
-	b.order[i], b.order[j] = b.order[j], b.order[i]
 }

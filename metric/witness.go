@@ -23,8 +23,11 @@ import (
 // psi reaches 2 by making ⟨ψ|v†u|ψ⟩ vanish.
 func Witness(u, v mat.CMatrix) (psi []complex128, dist float64) {
 	n := pairSize("Witness", u, v)
-	ur, vr := rowMajor(u, nil), rowMajor(v, nil)
-	s := newSpectrum(ur, vr, n, true)
+	mem := spectrumScratch(n, true)
+	defer mem.release()
+	ur, vr := rowMajor(u, mem.complexes(n*n)), rowMajor(v, mem.complexes(n*n))
+	var s spectrum
+	s.compute(ur, vr, n, true, mem)
 	a := shortestArc(s.phases)
 	psi = make([]complex128, n)
 	if a.length <= math.Pi || n < 3 {

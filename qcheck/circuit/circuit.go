@@ -212,9 +212,21 @@ func (c *Circuit) validateOp(op Op) string {
 	if g.Name == "barrier" && len(op.Qubits) == 0 {
 		return "barrier on no qubits"
 	}
+	// Wide ops (a barrier over a large register) use a set: comparing every pair is quadratic.
+	var seen map[int]bool
+	if len(op.Qubits) > 16 {
+		seen = make(map[int]bool, len(op.Qubits))
+	}
 	for k, q := range op.Qubits {
 		if q < 0 || q >= c.qubits {
 			return fmt.Sprintf("qubit %d out of range [0, %d)", q, c.qubits)
+		}
+		if seen != nil {
+			if seen[q] {
+				return fmt.Sprintf("qubit %d repeated in operands %v", q, op.Qubits)
+			}
+			seen[q] = true
+			continue
 		}
 		for _, r := range op.Qubits[:k] {
 			if r == q {

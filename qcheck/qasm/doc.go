@@ -41,9 +41,19 @@
 //     built from cp, cx, ccx and h (Barenco et al., Phys. Rev. A 52 (1995), Lemma 7.1).
 //   - not supported (an error naming them): the relative-phase Toffolis rccx and rc3x.
 //
+// # Entry points
+//
+// Parse returns the circuit; ParseProgram also returns the registers (Program.Qregs and Cregs,
+// each with the flat index of its element 0, and the lookups Program.Qubit and Program.Clbit) and
+// the source line of every op (Program.Lines), so that a report about op k can point into the
+// file. Options: DropBarriers, and MaxOps, which bounds how many ops a source may expand to
+// (DefaultMaxOps; gate definitions can double the count at each level of nesting). Qelib1 lists
+// the gate names the include provides.
+//
 // # Writing
 //
-// Format and FormatProgram write valid OpenQASM 2.0 that Parse reads back to an equal circuit:
+// Format (one register q, one register c) and FormatProgram (the program's own registers) write
+// valid OpenQASM 2.0 that Parse reads back to an equal circuit:
 // angles are printed in the shortest form that round-trips exactly, and gates qelib1.inc lacks
 // (iswap, iswapdg, ccz, ryy) are written as exact definitions that Parse recognises. See Format
 // for custom gates.

@@ -28,8 +28,15 @@ func Format(c *circuit.Circuit) ([]byte, error) {
 	if c.Qubits() > 0 {
 		q = []Register{{Name: "q", Size: c.Qubits()}}
 	}
-	if c.Clbits() > 0 {
-		cr = []Register{{Name: "c", Size: c.Clbits()}}
+	// Ops may be set directly, so a measure can write past Clbits(); size c to hold every bit.
+	nc := c.Clbits()
+	for _, op := range c.Ops {
+		for _, b := range op.Clbits {
+			nc = max(nc, b+1)
+		}
+	}
+	if nc > 0 {
+		cr = []Register{{Name: "c", Size: nc}}
 	}
 	return write(c, q, cr)
 }
@@ -75,9 +82,20 @@ func write(c *circuit.Circuit, qregs, cregs []Register) ([]byte, error) {
 	if err != nil {
 		return nil, err
 	}
-	cn, err := flat(cregs, c.Clbits(), "classical bit")
+	nc := 0
+	for _, r := range cregs {
+		nc = max(nc, r.Start+r.Size)
+	}
+	cn, err := flat(cregs, max(nc, c.Clbits()), "classical bit")
 	if err != nil {
 		return nil, err
+	}
+	for i, op := range c.Ops {
+		for _, b := range op.Clbits {
+			if b >= len(cn) {
+				return nil, fmt.Errorf("qasm: op %d (%s) writes classical bit %d, outside the classical registers", i, op.Gate.Name, b)
+			}
+		}
 	}
 	var defs bytes.Buffer
 	defined := map[string]circuit.Gate{}

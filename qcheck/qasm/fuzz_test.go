@@ -45,16 +45,11 @@ func FuzzParse(f *testing.F) {
 			}
 			return
 		}
-		out, err := Format(c)
-		if err != nil {
-			t.Fatalf("parsed circuit cannot be written: %v", err)
+		if c.Qubits() > 1<<12 {
+			// Writing and re-reading a register this wide (a barrier over it is megabytes) is too
+			// slow for the fuzzer's hang detector; TestWideBarrierRoundTrip covers it.
+			return
 		}
-		back, err := Parse(out)
-		if err != nil {
-			t.Fatalf("written source does not parse: %v\n%s", err, out)
-		}
-		if !back.Equal(c) {
-			t.Fatalf("round trip changed the circuit:\nparsed  %v\nwritten %s\nread back %v", c.Ops, out, back.Ops)
-		}
+		roundTrip(t, c)
 	})
 }

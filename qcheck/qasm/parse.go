@@ -443,7 +443,7 @@ func (p *parser) barrier() error {
 	if p.cfg.dropBarriers {
 		return nil
 	}
-	seen := map[int]bool{}
+	seen := make([]bool, p.nq)
 	var qubits []int
 	for _, a := range qs {
 		lo, hi := a.index, a.index+1
@@ -510,6 +510,9 @@ func (p *parser) call() error {
 }
 
 func (p *parser) unknownGate(t token) error {
+	if s := string(t.text); s == "rccx" || s == "rc3x" {
+		return p.errorf(t.off, "%s (a relative-phase Toffoli of some qelib1.inc versions) is not supported; define it with gate", s)
+	}
 	if _, ok := builtins()[string(t.text)]; ok && !builtins()[string(t.text)].hidden {
 		return p.errorf(t.off, "unknown gate %s (it is in qelib1.inc: add include \"qelib1.inc\";)", t.text)
 	}

@@ -194,7 +194,7 @@ func TestParseErrors(t *testing.T) {
 		{head + "gate g(x) a { rz(y) a; }", 3, 18, "unknown parameter y"},
 		{head + "gate U a { h a; }", 3, 6, "reserved"},
 		{head + "qreg q[1];\nmcp2(1) q[0];", 4, 1, "unknown gate"},
-		{head + "qreg q[1];\nrccx q[0];", 4, 1, "unknown gate"},
+		{head + "qreg q[3];\nrccx q[0],q[1],q[2];", 4, 1, "rccx (a relative-phase Toffoli of some qelib1.inc versions) is not supported"},
 		{head + "OPENQASM 2.0;", 3, 1, "only once"},
 		{head + "qreg q[1];\nrz(" + strings.Repeat("(", 300) + "1" + strings.Repeat(")", 300) + ") q[0];", 4, 205, "nested"},
 	}
@@ -227,3 +227,22 @@ func TestParseExpansionLimit(t *testing.T) {
 }
 
 func itoa(i int) string { return string(rune('0'+i/10)) + string(rune('0'+i%10)) }
+
+// A barrier over a register of 200,000 qubits survives a round trip in well under a second: no
+// step may be quadratic in the number of operands (the fuzzer found one in Validate).
+func TestWideBarrierRoundTrip(t *testing.T) {
+	c := mustParse(t, "OPENQASM 2;qreg q[200000];barrier q;").Circuit
+	if len(c.Ops) != 1 || len(c.Ops[0].Qubits) != 200000 {
+		t.Fatalf("got %d ops", len(c.Ops))
+	}
+	roundTrip(t, c)
+}
+
+// The gates a source may call after the include: the qelib1.inc of the OpenQASM 2.0 paper
+// (arXiv:1707.03429, appendix) and the later additions listed in the package documentation.
+func TestQelib1Names(t *testing.T) {
+	want := "c3sqrtx c3x c4x ccx ch cp crx cry crz cswap csx cu cu1 cu3 cx cy cz h id p rx rxx ry rz rzz s sdg swap sx sxdg t tdg u u0 u1 u2 u3 x y z"
+	if got := strings.Join(Qelib1(), " "); got != want {
+		t.Errorf("Qelib1() = %s\nwant       %s", got, want)
+	}
+}

@@ -8,6 +8,7 @@ import (
 
 	"gonum.org/v1/gonum/mat"
 	"pgregory.net/rapid"
+	"qcheck.dev/gen"
 	"qcheck.dev/qcheck/circuit"
 	"qcheck.dev/qcheck/sim"
 )
@@ -59,6 +60,21 @@ func anyCircuit() *rapid.Generator[*circuit.Circuit] {
 	})
 }
 
+// roundTrip fails unless Parse(Format(c)) equals c op for op, with the same classical register.
+func roundTrip(t interface{ Fatalf(string, ...any) }, c *circuit.Circuit) {
+	src, err := Format(c)
+	if err != nil {
+		t.Fatalf("Format: %v", err)
+	}
+	back, err := Parse(src)
+	if err != nil {
+		t.Fatalf("Parse: %v\n%s", err, src)
+	}
+	if !back.Equal(c) || back.Clbits() != c.Clbits() {
+		t.Fatalf("round trip changed the circuit\nbefore: %v\nwrote:\n%s\nread back: %v", c.Ops, src, back.Ops)
+	}
+}
+
 func seq(n int) []int {
 	out := make([]int, n)
 	for i := range out {
@@ -72,17 +88,7 @@ func seq(n int) []int {
 func TestFormatRoundTrip(t *testing.T) {
 	rapid.Check(t, func(t *rapid.T) {
 		c := anyCircuit().Draw(t, "circuit")
-		src, err := Format(c)
-		if err != nil {
-			t.Fatalf("Format: %v", err)
-		}
-		back, err := Parse(src)
-		if err != nil {
-			t.Fatalf("Parse: %v\n%s", err, src)
-		}
-		if !back.Equal(c) || back.Clbits() != c.Clbits() {
-			t.Fatalf("round trip changed the circuit\nwrote:\n%s\ngot %v", src, back.Ops)
-		}
+		roundTrip(t, c)
 	})
 }
 
@@ -176,6 +182,10 @@ func TestFormatErrors(t *testing.T) {
 	}
 	for _, tc := range cases {
 		_, err := Format(tc.c)
+		if err == nil {
+			t.Errorf("Format accepted %v", tc.c.Ops)
+			continue
+		}
 		if err == nil || !strings.Contains(err.Error(), tc.words) {
 			t.Errorf("Format: error %v, want …%s…", err, tc.words)
 		}
@@ -193,5 +203,36 @@ func TestAppendAngle(t *testing.T) {
 		if got := string(appendAngle(nil, v)); got != want {
 			t.Errorf("appendAngle(%v) = %s, want %s", v, got, want)
 		}
+	}
+}
+
+// The same round trip over the gen package's circuits, which add motifs (runs, inverse pairs,
+// repeated blocks) and its own mix of special angles.
+func TestFormatRoundTripGen(t *testing.T) {
+	var set []string
+	for _, s := range circuit.Standard() {
+		if g, err := circuit.NewGate(s.Name, make([]float64, s.Params)...); err == nil && g.Unitary() && s.Qubits <= 4 {
+			set = append(set, s.Name)
+		}
+	}
+	circuits := gen.Circuit(gen.Options{Qubits: 4, MaxOps: 40, GateSet: set})
+	rapid.Check(t, func(t *rapid.T) {
+		c := circuits.Draw(t, "circuit")
+		roundTrip(t, c)
+	})
+}
+
+// A measure set into Ops directly may write past Clbits(); Format sizes the classical register to
+// hold it, and FormatProgram refuses a bit outside the registers it is given.
+func TestFormatClassicalBits(t *testing.T) {
+	c := circuit.New(1)
+	c.Ops = append(c.Ops, circuit.Op{Gate: circuit.Gate{Name: "measure"}, Qubits: []int{0}, Clbits: []int{3}})
+	src, err := Format(c)
+	if err != nil || !strings.Contains(string(src), "creg c[4];\nmeasure q[0] -> c[3];") {
+		t.Errorf("Format: %v\n%s", err, src)
+	}
+	p := &Program{Circuit: c, Qregs: []Register{{"q", 1, 0}}, Cregs: []Register{{"c", 2, 0}}}
+	if _, err := FormatProgram(p); err == nil || !strings.Contains(err.Error(), "op 0 (measure) writes classical bit 3") {
+		t.Errorf("FormatProgram: %v", err)
 	}
 }

@@ -1,6 +1,10 @@
 package sim
 
-import "qcheck.dev/qcheck/circuit"
+import (
+	"slices"
+
+	"qcheck.dev/qcheck/circuit"
+)
 
 // Fusion multiplies consecutive gates on the same qubits into one matrix before any amplitude is
 // touched, so that a run of one-qubit gates on a qubit costs one sweep, and one-qubit gates beside
@@ -62,7 +66,7 @@ func fuse(c *circuit.Circuit, sweepCost float64) []*block {
 func mergeInto(g *block, last []*block, sweepCost float64) *block {
 	var prev []*block
 	for _, q := range g.qubits {
-		if b := last[q]; b != nil && !contains(prev, b) {
+		if b := last[q]; b != nil && !slices.Contains(prev, b) {
 			prev = append(prev, b)
 		}
 	}
@@ -71,7 +75,7 @@ func mergeInto(g *block, last []*block, sweepCost float64) *block {
 	}
 	if len(prev) == 1 && subset(g.qubits, prev[0].qubits) && len(prev[0].qubits) <= maxFusedQubits {
 		b := prev[0]
-		m := mul(embed(g.m, g.qubits, b.qubits), b.m)
+		m := mul(embed(g.m, g.qubits, b.qubits), b.m, 1<<len(b.qubits))
 		if cost(m, len(b.qubits), sweepCost) <= cost(b.m, len(b.qubits), sweepCost)+cost(g.m, len(g.qubits), sweepCost) {
 			b.m = m
 			return b
@@ -93,7 +97,7 @@ func mergeInto(g *block, last []*block, sweepCost float64) *block {
 			}
 		}
 		parts += cost(b.m, len(b.qubits), sweepCost)
-		m = mul(m, embed(b.m, b.qubits, g.qubits))
+		m = mul(m, embed(b.m, b.qubits, g.qubits), 1<<len(g.qubits))
 	}
 	if cost(m, len(g.qubits), sweepCost) > parts {
 		return nil
@@ -105,46 +109,20 @@ func mergeInto(g *block, last []*block, sweepCost float64) *block {
 	return g
 }
 
-// cost estimates the time of applying a k-qubit matrix per amplitude of the register: the share
-// of amplitudes it moves times sweepCost, plus one unit per complex multiply.
+// cost estimates the time of applying the k-qubit matrix m per amplitude of the register, with
+// the inner loop the kernels would choose for it.
 func cost(m []complex128, k int, sweepCost float64) float64 {
-	d := 1 << k
-	moved, mults := 0, 0
-	for a := 0; a < d; a++ {
-		nz, identity := 0, true
-		for b, v := range m[a*d : a*d+d] {
-			if v != 0 {
-				nz++
-			}
-			if (b == a && v != 1) || (b != a && v != 0) {
-				identity = false
-			}
-		}
-		if !identity {
-			moved++
-			if !(nz == 1 && (m[a*d+a] == 1 || offDiagonalOne(m[a*d:a*d+d], a))) {
-				mults += nz
-			}
-		}
+	bits := make([]uint, k)
+	for i := range bits {
+		bits[i] = uint(k - 1 - i)
 	}
-	return (float64(moved)*sweepCost + float64(mults)) / float64(d)
-}
-
-// offDiagonalOne reports whether the row's only nonzero entry is a 1 off the diagonal (a plain
-// exchange, no multiply).
-func offDiagonalOne(row []complex128, a int) bool {
-	for b, v := range row {
-		if v != 0 {
-			return b != a && v == 1
-		}
-	}
-	return false
+	return newKernel(m, bits).cost(sweepCost)
 }
 
 // embed writes the matrix m on qubits sub as a matrix on qubits all (sub ⊆ all), identity on the
 // others, both in textbook operand order.
 func embed(m []complex128, sub, all []int) []complex128 {
-	if equalOrder(sub, all) {
+	if slices.Equal(sub, all) {
 		return m
 	}
 	k, ks := len(all), len(sub)
@@ -179,9 +157,8 @@ func embed(m []complex128, sub, all []int) []complex128 {
 	return out
 }
 
-// mul returns the product a·b of two square row-major matrices of the same size.
-func mul(a, b []complex128) []complex128 {
-	d := isqrt(len(a))
+// mul returns the product a·b of two row-major d × d matrices.
+func mul(a, b []complex128, d int) []complex128 {
 	out := make([]complex128, d*d)
 	for i := 0; i < d; i++ {
 		for l := 0; l < d; l++ {
@@ -197,42 +174,10 @@ func mul(a, b []complex128) []complex128 {
 	return out
 }
 
-func isqrt(n int) int {
-	d := 1
-	for d*d < n {
-		d++
-	}
-	return d
-}
-
-func contains(bs []*block, b *block) bool {
-	for _, x := range bs {
-		if x == b {
-			return true
-		}
-	}
-	return false
-}
-
+// subset reports whether every element of a is in b.
 func subset(a, b []int) bool {
 	for _, x := range a {
-		found := false
-		for _, y := range b {
-			found = found || x == y
-		}
-		if !found {
-			return false
-		}
-	}
-	return true
-}
-
-func equalOrder(a, b []int) bool {
-	if len(a) != len(b) {
-		return false
-	}
-	for i := range a {
-		if a[i] != b[i] {
+		if !slices.Contains(b, x) {
 			return false
 		}
 	}

@@ -39,7 +39,7 @@ type kernel struct {
 	offs   []int        // offs[a] is the index offset of local state a within a group
 	m      []complex128 // the gate's matrix, row-major 2^k × 2^k in local order
 
-	// pairKind: the two local states and the 2×2 block.
+	// pairKind: the index offsets of the two local states it moves, and the 2×2 block.
 	p0, p1             int
 	m00, m01, m10, m11 complex128
 	// diagonalKind and swapKind: local states multiplied by a phase in place.
@@ -53,17 +53,21 @@ type kernel struct {
 	scratchLen int
 }
 
+// scaled multiplies the amplitude at index offset off of each group by v.
 type scaled struct {
 	off int
 	v   complex128
 }
 
-// swapped exchanges local states a and b: new[a] = va·old[b], new[b] = vb·old[a].
+// swapped exchanges the amplitudes at index offsets a and b of each group:
+// new[a] = va·old[b], new[b] = vb·old[a].
 type swapped struct {
 	a, b   int
 	va, vb complex128
 }
 
+// sparseRow writes the amplitude at index offset a of each group as Σ vals[t]·old[cols[t]], with
+// cols in local states.
 type sparseRow struct {
 	a    int
 	cols []int
@@ -90,14 +94,10 @@ func newKernel(m []complex128, bits []uint) *kernel {
 
 	// Active rows are the local states the gate moves: rows other than e_a.
 	var active []int
-	nnz := 0
 	for a := 0; a < d; a++ {
 		row := m[a*d : a*d+d]
 		identity := true
 		for b, v := range row {
-			if v != 0 {
-				nnz++
-			}
 			if (b == a && v != 1) || (b != a && v != 0) {
 				identity = false
 			}
@@ -161,8 +161,8 @@ func newKernel(m []complex128, bits []uint) *kernel {
 		a, b := active[0], active[1]
 		kn.p0, kn.p1 = kn.offs[a], kn.offs[b]
 		kn.m00, kn.m01, kn.m10, kn.m11 = m[a*d+a], m[a*d+b], m[b*d+a], m[b*d+b]
-	case k == 2 && len(active) == 4 && nnz == 16:
-		kn.kind = dense2Kind
+	case k == 2:
+		kn.kind = dense2Kind // zeros cost less than the sparse kernel's indirection
 	default:
 		kn.kind = sparseKind
 		read := make([]bool, d)
@@ -185,6 +185,35 @@ func newKernel(m []complex128, bits []uint) *kernel {
 		kn.scratchLen = d
 	}
 	return kn
+}
+
+// cost estimates the time of the kernel per amplitude of the register, in units of one complex
+// multiply-add: the share of amplitudes it moves times sweepCost (the price of streaming them
+// through memory), plus the arithmetic of its inner loop.
+func (kn *kernel) cost(sweepCost float64) float64 {
+	d := float64(int(1) << kn.qubits)
+	switch kn.kind {
+	case pairKind:
+		return (2*sweepCost + 4) / d
+	case diagonalKind:
+		return float64(len(kn.scale)) * (sweepCost + 1) / d
+	case swapKind:
+		c := float64(len(kn.scale)) * (sweepCost + 1)
+		for _, s := range kn.swaps {
+			c += 2 * sweepCost
+			if s.va != 1 || s.vb != 1 {
+				c += 2
+			}
+		}
+		return c / d
+	case dense2Kind:
+		return (4*sweepCost + 16) / d
+	}
+	c := 0.0
+	for _, r := range kn.rows {
+		c += sweepCost + 1.5*float64(len(r.cols)) // the sparse loop's indirection costs extra
+	}
+	return c / d
 }
 
 // pairOnly reports whether rows a and b of m have their nonzero entries in columns a and b only.
@@ -217,12 +246,16 @@ func (kn *kernel) apply(data []complex128, g0, g1 int) {
 			scratch = make([]complex128, kn.scratchLen) // once per call, not per group
 		}
 	}
+	// The base of group g0 has zeros inserted at the gate's bits; each later run starts at the
+	// next index with zeros there, found without redoing the insertion.
+	base := g0
+	mask := 0
+	for _, b := range kn.sorted {
+		base = (base>>b)<<(b+1) | base&(1<<b-1)
+		mask |= 1 << b
+	}
 	run := 1 << kn.sorted[0]
 	for g := g0; g < g1; {
-		base := g
-		for _, b := range kn.sorted {
-			base = (base>>b)<<(b+1) | base&(1<<b-1)
-		}
 		r := min(run-g&(run-1), g1-g)
 		switch kn.kind {
 		case pairKind:
@@ -238,6 +271,7 @@ func (kn *kernel) apply(data []complex128, g0, g1 int) {
 			kn.sparseRun(data, base, r, scratch)
 		}
 		g += r
+		base = (((base + r - 1) | mask) + 1) &^ mask
 	}
 }
 

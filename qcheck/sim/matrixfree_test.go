@@ -17,33 +17,6 @@ import (
 
 var matrixFreeWide = flag.Bool("matrixfree.wide", false, "also check the matrix-free distance against the dense engine at 10 and 12 qubits (minutes)")
 
-// randomCircuit builds a random circuit of continuous-angle rotations and entangling gates.
-func randomCircuit(rng *rand.Rand, n, ops int) *circuit.Circuit {
-	c := circuit.New(n)
-	for c.Len() < ops {
-		a, b := rng.IntN(n), rng.IntN(n)
-		theta := (rng.Float64()*2 - 1) * math.Pi
-		switch k := rng.IntN(8); {
-		case k == 0:
-			c.H(a)
-		case k == 1:
-			c.T(a)
-		case k == 2:
-			c.RX(theta, a)
-		case k == 3:
-			c.U(theta, rng.Float64(), -rng.Float64(), a)
-		case n == 1 || a == b:
-		case k == 4:
-			c.CP(theta, a, b)
-		case k == 5:
-			c.CZ(a, b)
-		default:
-			c.CX(a, b)
-		}
-	}
-	return c
-}
-
 // perturb returns a copy of c with the angle of `count` of its rotations shifted by delta.
 func perturb(rng *rand.Rand, c *circuit.Circuit, count int, delta float64) *circuit.Circuit {
 	d := c.Clone()

@@ -5,8 +5,9 @@ Run: /usr/bin/python3 testdata/gen/reference.py > testdata/gen/reference.txt
 The Go tests read nothing from here at run time; the values they use are
 copied into gen/*_test.go with a comment pointing to this file.
 
-1. Chi-square upper critical values chi2.isf(alpha, df) for the Clifford
-   uniformity tests (24 and 11520 classes).
+1. Chi-square upper critical values chi2.isf(alpha, df) for the uniformity
+   tests: circuit lengths (10 classes), embeddings (12), layouts and one-qubit
+   Cliffords (24), two-qubit Cliffords (11520).
 2. The nearest-neighbour spacing law of the circular unitary ensemble for
    N = 64, computed exactly as a Fredholm determinant (Gaudin; Mehta, Random
    Matrices, 3rd ed., ch. 11; quadrature method of Bornemann, Markov Processes
@@ -48,7 +49,7 @@ def surmise_cdf(s):
 
 print("# numpy", np.__version__, "scipy", scipy.__version__)
 print("# chi-square upper critical values: df alpha chi2.isf(alpha, df)")
-for df in (23, 11519):
+for df in (9, 11, 23, 11519):
     for alpha in (1e-6, 5e-7, 2.5e-7):
         print("chi2", df, alpha, repr(float(stats.chi2.isf(alpha, df))))
 
@@ -61,5 +62,10 @@ for s in grid:
     diffs.append(abs(f - g))
 for s in (0.25, 0.5, 0.75, 1.0, 1.5, 2.0, 3.0):
     print("cdf", s, repr(float(spacing_cdf(s))), repr(float(surmise_cdf(s))))
+# Self-check: the spacing law has mean 1 (unit mean spacing), i.e. the
+# integral of 1 - F over [0, inf) is 1; the tail beyond s = 4 is below 1e-9.
+xs = np.linspace(0, 4.0, 801)
+tail = np.array([1 - spacing_cdf(x) if x > 0 else 1.0 for x in xs])
+print("mean spacing (want 1)", repr(float(np.trapz(tail, xs))))
 i = int(np.argmax(diffs))
 print("maxdiff", repr(float(diffs[i])), "at s =", repr(float(grid[i])))
