@@ -1,20 +1,14 @@
 package metric
 
 import (
+	"encoding/binary"
 	"fmt"
-	"syscall"
+	"math"
+	"os"
 	"testing"
-)
 
-// processCPU returns the user and system CPU seconds used so far by this
-// process, all threads together.
-func processCPU() float64 {
-	var r syscall.Rusage
-	if err := syscall.Getrusage(syscall.RUSAGE_SELF, &r); err != nil {
-		return 0
-	}
-	return float64(r.Utime.Sec+r.Stime.Sec) + float64(r.Utime.Usec+r.Stime.Usec)/1e6
-}
+	"gonum.org/v1/gonum/mat"
+)
 
 // BenchmarkPhaseDistance times PhaseDistance of two Haar-random unitaries.
 // Issue 3 asks that 10 qubits (1024×1024) not be slower than NumPy's eigvals
@@ -67,4 +61,39 @@ func BenchmarkDistance(b *testing.B) {
 			}
 		})
 	}
+}
+
+// BenchmarkPhaseDistanceFile times PhaseDistance on the pair that
+// testdata/metric/bench_numpy.py wrote to the file named by the environment
+// variable METRIC_BENCH_PAIR (raw little-endian complex128, U then V,
+// row-major, 1024×1024 each), so that NumPy and this package time the very
+// same matrices. Without the variable it is skipped.
+func BenchmarkPhaseDistanceFile(b *testing.B) {
+	path := os.Getenv("METRIC_BENCH_PAIR")
+	if path == "" {
+		b.Skip("METRIC_BENCH_PAIR not set")
+	}
+	raw, err := os.ReadFile(path)
+	if err != nil {
+		b.Fatal(err)
+	}
+	const n = 1024
+	if len(raw) != 2*n*n*16 {
+		b.Fatalf("%s holds %d bytes, want %d", path, len(raw), 2*n*n*16)
+	}
+	read := func(off int) *mat.CDense {
+		data := make([]complex128, n*n)
+		for i := range data {
+			re := math.Float64frombits(binary.LittleEndian.Uint64(raw[off+16*i:]))
+			im := math.Float64frombits(binary.LittleEndian.Uint64(raw[off+16*i+8:]))
+			data[i] = complex(re, im)
+		}
+		return mat.NewCDense(n, n, data)
+	}
+	u, v := read(0), read(n*n*16)
+	cpu := processCPU()
+	for b.Loop() {
+		PhaseDistance(u, v)
+	}
+	b.ReportMetric((processCPU()-cpu)/float64(b.N), "cpu-s/op")
 }

@@ -24,16 +24,22 @@
 // # Numerics
 //
 // gonum has no complex LAPACK, so the package carries its own small complex
-// kernels (products, LU factorisation with partial pivoting, Householder
-// reduction of a Hermitian matrix to real tridiagonal form) and hands the
-// real tridiagonal eigenproblem to gonum's LAPACK (Dsterf, Dsteqr).
-// Eigenphases of a unitary W are found from the Hermitian matrix
+// kernels (a blocked product, LU factorisation with partial pivoting,
+// triangular solves, Householder reduction of a Hermitian matrix to real
+// tridiagonal form) and hands the real tridiagonal eigenproblem to gonum's
+// LAPACK (Dsterf, Dsteqr). On amd64 the innermost loops use AVX2 with FMA
+// when the processor has them; large products and reductions are shared out
+// over the available cores.
+//
+// Eigenphases of a unitary W come from the Hermitian matrix
 // C = i(I + cW)(I − cW)⁻¹, |c| = 1 (a Cayley transform), whose eigenvalue
 // x = −cot(φ/2) determines each eigenphase φ of cW one to one. Hermitian
-// eigensolvers are accurate for degenerate and clustered spectra; the point
-// c̄ is placed away from the spectrum (opposite the mean eigenvalue, and again
-// in the widest gap if the first choice fell too close to an eigenvalue), so
-// the eigenphases come out within a few units of rounding of 1e-16·n.
-// For a pair (U, V) the transform is built from V ± cU directly, so V†U is
-// never formed.
+// eigensolvers are backward stable and keep degenerate and clustered spectra
+// accurate; the pole c̄ is placed away from the spectrum (opposite the mean
+// eigenvalue, and again in the widest gap if the first choice fell within
+// 2e-4 of an eigenvalue), so each eigenphase is accurate to a small multiple
+// of 1e-16·n (1e-14 observed against NumPy up to 64×64). For a pair (U, V)
+// the transform is built from V ± cU directly, so V†U is never formed. The
+// cost is about 2n³ complex multiply-adds: LU (n³/3), the solve (n³) and the
+// reduction (2n³/3).
 package metric

@@ -8,9 +8,12 @@ import (
 
 // Eigenphases returns the eigenphases θ_k of the n×n unitary w, the angles of
 // its eigenvalues e^{iθ_k}, in ascending order in (−π, π], each repeated as
-// often as it occurs. They come from a Hermitian eigenproblem (see the package
-// comment), so degenerate and tightly clustered spectra keep their accuracy:
-// each phase is within a small multiple of n·1e-16 of the truth.
+// often as it occurs. They come from a Hermitian eigenproblem, the Cayley
+// transform described in the package comment, so degenerate and tightly
+// clustered spectra (the identity, −identity, eigenvalues within 1e-10 of
+// each other) keep their accuracy: each phase is within a small multiple of
+// n·1e-16 of the truth. w is trusted to be unitary; for other matrices the
+// result has no meaning.
 func Eigenphases(w mat.CMatrix) []float64 {
 	n := squareSize("Eigenphases", "matrix", w)
 	mem := spectrumScratch(n, false)

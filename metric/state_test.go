@@ -73,3 +73,42 @@ func TestInputErrors(t *testing.T) {
 		}()
 	}
 }
+
+// emptyMatrix is a 0×0 mat.CMatrix, which gonum's CDense cannot be.
+type emptyMatrix struct{}
+
+func (emptyMatrix) Dims() (int, int)                 { return 0, 0 }
+func (emptyMatrix) At(int, int) complex128           { panic("empty") }
+func (e emptyMatrix) H() mat.CMatrix                 { return e }
+func (e emptyMatrix) T() mat.CMatrix                 { return e }
+func (emptyMatrix) Conj(mat.CMatrix)                 {}
+func (emptyMatrix) IsEmpty() bool                    { return true }
+func (emptyMatrix) Slice(_, _, _, _ int) mat.CMatrix { return emptyMatrix{} }
+
+func TestEmptyInputs(t *testing.T) {
+	for name, f := range map[string]func(){
+		"OperatorNorm":  func() { OperatorNorm(emptyMatrix{}) },
+		"PhaseDistance": func() { PhaseDistance(emptyMatrix{}, emptyMatrix{}) },
+		"StateDistance": func() { StateDistance(nil, nil) },
+	} {
+		func() {
+			defer func() {
+				if _, ok := recover().(*InputError); !ok {
+					t.Errorf("%s on empty input did not panic with an *InputError", name)
+				}
+			}()
+			f()
+		}()
+	}
+}
+
+// Any mat.CMatrix serves, not only *mat.CDense: an adjoint view gives the
+// same distances as an explicit adjoint (a unitary and its adjoint have
+// conjugate spectra, so distances between adjoints are unchanged).
+func TestMatrixViews(t *testing.T) {
+	rng := newRand(21)
+	u, v := haar(rng, 8), haar(rng, 8)
+	near(t, "PhaseDistance of views", PhaseDistance(u.H(), v.H()), PhaseDistance(adjoint(u), adjoint(v)), 1e-15)
+	near(t, "Distance of views", Distance(u.H(), v.H()), Distance(u, v), 1e-14)
+	near(t, "PhaseDistance of adjoints", PhaseDistance(u.H(), v.H()), PhaseDistance(u, v), 1e-14)
+}
