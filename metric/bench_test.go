@@ -35,7 +35,7 @@ func BenchmarkPhaseDistance(b *testing.B) {
 // BenchmarkWitness times Witness on the small sizes a property test checks
 // thousands of times.
 func BenchmarkWitness(b *testing.B) {
-	for _, q := range []int{1, 2, 3, 4, 6} {
+	for _, q := range []int{1, 2, 3, 4, 6, 8, 10} {
 		n := 1 << q
 		b.Run(fmt.Sprintf("qubits=%d", q), func(b *testing.B) {
 			rng := newRand(uint64(q))

@@ -22,8 +22,9 @@ type spectrum struct {
 	tri    tridiagonal  // the reduced transform, kept for eigenvectors
 	trans  []float64    // eigenvalues of X in ascending order
 
-	withVectors bool      // whether to compute eigenvectors too
-	z           []float64 // eigenvectors of the tridiagonal form, row-major
+	withVectors bool        // whether to keep what eigenvectors need
+	diag, off   []float64   // copies of the tridiagonal form, for eigenvectors
+	found       [][]float64 // eigenvectors of the tridiagonal form made so far
 	mem         *scratch
 }
 
@@ -38,7 +39,7 @@ const poleLimit = 1e4
 func spectrumScratch(n int, vectors bool) *scratch {
 	nf := 3 * n
 	if vectors {
-		nf += n*n + 2*n
+		nf += 2 * n
 	}
 	return getScratch(4*n*n+n*(maxWorkers+3), nf, 2*n)
 }
@@ -78,7 +79,7 @@ func (s *spectrum) compute(u, v []complex128, n int, vectors bool, mem *scratch)
 	s.order = mem.ints(n)
 	piv := mem.ints(n)
 	if vectors {
-		s.z = mem.floats(n * n)
+		s.diag, s.off = mem.floats(n), mem.floats(max(n-1, 0))
 	}
 	for attempt := 0; ; attempt++ {
 		ok := s.transform(alpha, m, p, piv)
@@ -137,13 +138,11 @@ func (s *spectrum) transform(alpha float64, m, p []complex128, piv []int) bool {
 		}
 	}
 	s.tri.reduce()
-	var vals []float64
-	var ok bool
 	if s.withVectors {
-		vals, ok = s.tri.vectors(s.z, s.mem.floats(max(1, 2*n-2)))
-	} else {
-		vals, ok = s.tri.values()
+		copy(s.diag, s.tri.diag)
+		copy(s.off, s.tri.off)
 	}
+	vals, ok := s.tri.values()
 	if !ok {
 		return false
 	}
@@ -186,12 +185,15 @@ func reverse(a []float64) {
 	}
 }
 
-// vector returns a unit eigenvector of W for phases[i]. Eigenvectors for
-// different i are orthonormal. The spectrum must have been computed with
-// vectors.
+// vector returns a unit eigenvector of W for phases[i], by inverse
+// iteration on the tridiagonal form. Vectors returned by successive calls are
+// orthonormal, also for equal phases. The spectrum must have been computed
+// with vectors.
 func (s *spectrum) vector(i int) []complex128 {
 	n := s.n
-	q := s.tri.backTransform(s.z, s.order[i], make([]complex128, n))
+	y := inverseIteration(s.diag, s.off, s.trans[s.order[i]], s.found)
+	s.found = append(s.found, y)
+	q := s.tri.backTransform(y, make([]complex128, n))
 	// q is an eigenvector of conj(X); conj(q) one of X = V·C·V†, so V†·conj(q)
 	// is one of C and hence of W.
 	for k := range q {

@@ -23,6 +23,8 @@ func TestWitnessDeviation(t *testing.T) {
 		{"beyond half", []float64{0, 2, 4}},
 		{"antipodal pair", []float64{0, math.Pi, 0, math.Pi}},
 		{"identity", []float64{0.4, 0.4, 0.4, 0.4}},
+		{"clusters 1e-10 at both ends", []float64{0.1, 0.1 + 1e-10, 0.1 - 1e-10, 0.5, 0.9, 0.9 + 1e-10, 0.9 + 2e-10, 0.3}},
+		{"clusters 1e-10 beyond half", []float64{0, 1e-10, 2, 2 + 1e-10, 4, 4 - 1e-10}},
 	} {
 		q := haar(rng, len(c.phases))
 		u := diagonal(q, c.phases...)
