@@ -2,6 +2,7 @@ package metric
 
 import (
 	"math"
+	"math/cmplx"
 	"sort"
 	"testing"
 
@@ -108,6 +109,13 @@ func TestEigenphasesHardSpectra(t *testing.T) {
 		"wide":           {-3, -2, -1, 0, 1, 2, 3, 3.1},
 		"around -1":      {math.Pi - 1e-11, -math.Pi + 1e-11, math.Pi, math.Pi - 3e-11},
 		"pauli":          {1, -1, 1, -1},
+		// Traceless, so the first pole is the fixed angle 2.1, which here is
+		// an eigenphase: the transform is singular and must be rebuilt.
+		"on the first pole": {2.1, 2.1 - math.Pi},
+		// A pole 1e-6 from an eigenphase: accepted by the singularity check
+		// but beyond the |x| limit, so it is moved into the widest gap.
+		"near the first pole": {2.1 + 1e-6, 2.1 - math.Pi, 2.1 + math.Pi/2, 2.1 - math.Pi/2},
+		"trace pole":          tracePoleSpectrum(),
 	}
 	for name, ph := range cases {
 		for _, q := range []*mat.CDense{nil, haar(rng, len(ph))} {
@@ -120,4 +128,15 @@ func TestEigenphasesHardSpectra(t *testing.T) {
 			}
 		}
 	}
+}
+
+// tracePoleSpectrum returns eigenphases (0, 0, 0, x) where x is exactly the
+// first pole chosen from the trace, arg(3 + e^{ix}) + π + 0.3, found by
+// fixed-point iteration (the map is a contraction here).
+func tracePoleSpectrum() []float64 {
+	x := 3.0
+	for i := 0; i < 200; i++ {
+		x = wrapPhase(cmplx.Phase(complex(3, 0)+cmplx.Exp(complex(0, x))) + math.Pi + 0.3)
+	}
+	return []float64{0, 0, 0, x}
 }

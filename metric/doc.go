@@ -20,6 +20,7 @@
 // that names the function, the argument and the sizes or values it saw. Every function
 // in the package follows this rule. Inputs said to be unitary or unit vectors
 // are trusted to be so up to rounding; the package does not check it.
+// Entries that are NaN or infinite make the results NaN.
 //
 // # Numerics
 //

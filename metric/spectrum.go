@@ -81,12 +81,25 @@ func (s *spectrum) compute(u, v []complex128, n int, vectors bool, mem *scratch)
 	if vectors {
 		s.diag, s.off = mem.floats(n), mem.floats(max(n-1, 0))
 	}
-	for attempt := 0; ; attempt++ {
-		ok := s.transform(alpha, m, p, piv)
-		if ok && (math.Abs(s.trans[0]) <= poleLimit && math.Abs(s.trans[n-1]) <= poleLimit || attempt >= 3) {
+	const attempts = 6
+	for attempt := 1; ; attempt++ {
+		status := s.transform(alpha, m, p, piv)
+		if status == transformDone && (math.Abs(s.trans[0]) <= poleLimit && math.Abs(s.trans[n-1]) <= poleLimit) ||
+			status != transformFailed && attempt >= attempts {
 			return
 		}
-		if ok {
+		if attempt >= attempts {
+			// Only input that is not unitary (non-finite entries, or a
+			// singular I − cW at six well-spread poles) gets here: say so
+			// with NaN.
+			for k := range s.phases {
+				s.phases[k] = math.NaN()
+				s.order[k] = k
+			}
+			s.trans = s.phases
+			return
+		}
+		if status == transformDone {
 			alpha = shortestArc(s.phases).middle() + math.Pi // the middle of the widest gap
 		} else {
 			alpha += 2.399963229728653 // the golden angle: never repeats a direction
@@ -94,10 +107,16 @@ func (s *spectrum) compute(u, v []complex128, n int, vectors bool, mem *scratch)
 	}
 }
 
+// The outcomes of one Cayley transform.
+const (
+	transformDone    = iota // eigenvalues found; the caller checks them against poleLimit
+	transformTooNear        // the pole is so near an eigenvalue that X is not usable
+	transformFailed         // I − cW singular, non-finite entries, or no convergence
+)
+
 // transform builds and diagonalises the Cayley transform with its pole at
-// e^{iα}, using m and p (n² each) and piv. It reports false if I − cW was
-// singular to working precision or the eigenvalue iteration failed.
-func (s *spectrum) transform(alpha float64, m, p []complex128, piv []int) bool {
+// e^{iα}, using m and p (n² each) and piv, and says how it went.
+func (s *spectrum) transform(alpha float64, m, p []complex128, piv []int) int {
 	n := s.n
 	s.alpha = alpha
 	c := cmplx.Exp(complex(0, -alpha))
@@ -119,23 +138,31 @@ func (s *spectrum) transform(alpha float64, m, p []complex128, piv []int) bool {
 		}
 	}
 	if !luFactor(n, n, m, n, piv) {
-		return false
+		return transformFailed
 	}
 	swapRows(p, n, n, piv, 0)
 	solveLowerUnit(n, n, m, n, p, n)
 	solveUpper(n, n, m, n, p, n)
 	// p now holds (X/i)ᵀ column-major, which is X/i row-major; read
 	// column-major, i·p is Xᵀ = conj(X), Hermitian. Symmetrise its lower
-	// triangle to remove the rounding in the anti-Hermitian part.
+	// triangle to remove the rounding in the anti-Hermitian part. An entry
+	// above poleLimit means ‖X‖ > poleLimit: the pole is too near an
+	// eigenvalue, and so near that rounding may have put that eigenvalue's
+	// part of X into the anti-Hermitian half, where symmetrising would lose
+	// it. Such a transform is rejected before its eigenvalues are taken.
+	largest := 0.0
 	for j := 0; j < n; j++ {
 		for i := j; i < n; i++ {
 			lo, up := p[i+j*n], p[j+i*n]
-			x := complex(0, 0.5) * (lo - conj(up))
-			if math.IsNaN(real(x)) || math.IsInf(real(x), 0) || math.IsNaN(imag(x)) || math.IsInf(imag(x), 0) {
-				return false
-			}
-			p[i+j*n] = x
+			largest = math.Max(largest, math.Max(abs1(lo), abs1(up)))
+			p[i+j*n] = complex(0, 0.5) * (lo - conj(up))
 		}
+	}
+	if math.IsNaN(largest) || math.IsInf(largest, 0) {
+		return transformFailed
+	}
+	if largest > poleLimit {
+		return transformTooNear
 	}
 	s.tri.reduce()
 	if s.withVectors {
@@ -144,7 +171,7 @@ func (s *spectrum) transform(alpha float64, m, p []complex128, piv []int) bool {
 	}
 	vals, ok := s.tri.values()
 	if !ok {
-		return false
+		return transformFailed
 	}
 	s.trans = vals
 	// θ = α + π + 2·atan(x) increases with x over an interval of length 2π,
@@ -169,7 +196,7 @@ func (s *spectrum) transform(alpha float64, m, p []complex128, piv []int) bool {
 			s.order[j], s.order[j-1] = s.order[j-1], s.order[j]
 		}
 	}
-	return true
+	return transformDone
 }
 
 // rotate moves a[start:] to the front of a, in place.

@@ -112,3 +112,21 @@ func TestMatrixViews(t *testing.T) {
 	near(t, "Distance of views", Distance(u.H(), v.H()), Distance(u, v), 1e-14)
 	near(t, "PhaseDistance of adjoints", PhaseDistance(u.H(), v.H()), PhaseDistance(u, v), 1e-14)
 }
+
+// Non-finite entries give NaN, not a hang or a plausible number.
+func TestNonFinite(t *testing.T) {
+	bad := identity(4)
+	bad.Set(1, 2, complex(math.NaN(), 0))
+	for name, got := range map[string]float64{
+		"PhaseDistance": PhaseDistance(bad, identity(4)),
+		"Diamond":       Diamond(identity(4), bad),
+		"Distance":      Distance(bad, identity(4)),
+	} {
+		if !math.IsNaN(got) {
+			t.Errorf("%s with a NaN entry = %v, want NaN", name, got)
+		}
+	}
+	if _, d := Witness(bad, identity(4)); !math.IsNaN(d) {
+		t.Errorf("Witness with a NaN entry gives deviation %v, want NaN", d)
+	}
+}
