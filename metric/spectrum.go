@@ -28,11 +28,18 @@ type spectrum struct {
 	mem         *scratch
 }
 
-// poleLimit bounds |x| for an accepted transform: beyond it the pole is
-// within 2e-4 of an eigenvalue and the Hermitian solver's absolute error
-// ε·‖X‖ would exceed about 1e-11 in the other eigenphases, so the transform
-// is built again with the pole in the widest gap of the spectrum found.
-const poleLimit = 1e4
+// poleLimit bounds |x| for a transform accepted at once. The error of the
+// computed X grows like ε·‖(I − cW)⁻¹‖·‖X‖, about ε·‖X‖²; with ‖X‖ ≤ 1e3
+// (the pole at least 2e-3 from every eigenvalue) the eigenphases stay within
+// about 1e-12. Beyond it the transform is built again with the pole in the
+// middle of the widest gap of the spectrum found, which is as far from the
+// spectrum as a pole can be, and that second result is kept.
+const poleLimit = 1e3
+
+// entryLimit bounds the entries of X before symmetrising. Beyond it the pole
+// is within about 1e-6 of an eigenvalue, close enough for rounding to have
+// moved part of X into its anti-Hermitian half, so the transform is not used.
+const entryLimit = 1e6
 
 // spectrumScratch returns scratch big enough for a spectrum of order n,
 // including room for copies of the two inputs.
@@ -82,13 +89,14 @@ func (s *spectrum) compute(u, v []complex128, n int, vectors bool, mem *scratch)
 		s.diag, s.off = mem.floats(n), mem.floats(max(n-1, 0))
 	}
 	const attempts = 6
+	inGap := false // whether the pole sits in the middle of the widest gap
 	for attempt := 1; ; attempt++ {
 		status := s.transform(alpha, m, p, piv)
-		if status == transformDone && (math.Abs(s.trans[0]) <= poleLimit && math.Abs(s.trans[n-1]) <= poleLimit) ||
-			status != transformFailed && attempt >= attempts {
+		clear := status == transformDone && math.Abs(s.trans[0]) <= poleLimit && math.Abs(s.trans[n-1]) <= poleLimit
+		if clear || status == transformDone && (inGap || attempt == attempts) {
 			return
 		}
-		if attempt >= attempts {
+		if attempt == attempts {
 			// Only input that is not unitary (non-finite entries, or a
 			// singular I − cW at six well-spread poles) gets here: say so
 			// with NaN.
@@ -100,9 +108,11 @@ func (s *spectrum) compute(u, v []complex128, n int, vectors bool, mem *scratch)
 			return
 		}
 		if status == transformDone {
-			alpha = shortestArc(s.phases).middle() + math.Pi // the middle of the widest gap
+			alpha = shortestArc(s.phases).middle() + math.Pi
+			inGap = true
 		} else {
 			alpha += 2.399963229728653 // the golden angle: never repeats a direction
+			inGap = false
 		}
 	}
 }
@@ -146,10 +156,10 @@ func (s *spectrum) transform(alpha float64, m, p []complex128, piv []int) int {
 	// p now holds (X/i)ᵀ column-major, which is X/i row-major; read
 	// column-major, i·p is Xᵀ = conj(X), Hermitian. Symmetrise its lower
 	// triangle to remove the rounding in the anti-Hermitian part. An entry
-	// above poleLimit means ‖X‖ > poleLimit: the pole is too near an
-	// eigenvalue, and so near that rounding may have put that eigenvalue's
-	// part of X into the anti-Hermitian half, where symmetrising would lose
-	// it. Such a transform is rejected before its eigenvalues are taken.
+	// above entryLimit means the pole is so near an eigenvalue that rounding
+	// may have put that eigenvalue's part of X into the anti-Hermitian half,
+	// where symmetrising would lose it: such a transform is rejected before
+	// its eigenvalues are taken.
 	largest := 0.0
 	for j := 0; j < n; j++ {
 		for i := j; i < n; i++ {
@@ -161,7 +171,7 @@ func (s *spectrum) transform(alpha float64, m, p []complex128, piv []int) int {
 	if math.IsNaN(largest) || math.IsInf(largest, 0) {
 		return transformFailed
 	}
-	if largest > poleLimit {
+	if largest > entryLimit {
 		return transformTooNear
 	}
 	s.tri.reduce()
