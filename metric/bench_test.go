@@ -20,17 +20,8 @@ func BenchmarkPhaseDistance(b *testing.B) {
 		n := 1 << q
 		b.Run(fmt.Sprintf("qubits=%d", q), func(b *testing.B) {
 			rng := newRand(uint64(q))
-			us, v := rephased(haar(rng, n)), haar(rng, n)
-			b.ReportAllocs()
-			cpu := processCPU()
-			i := 0
-			for b.Loop() {
-				PhaseDistance(us[i%len(us)], v)
-				i++
-			}
-			// The machine is shared: CPU time per op, summed over threads,
-			// is steadier than wall time when other work competes.
-			b.ReportMetric((processCPU()-cpu)/float64(b.N), "cpu-s/op")
+			u, v := haar(rng, n), haar(rng, n)
+			timePhaseDistance(b, u, v)
 		})
 	}
 }
@@ -49,31 +40,25 @@ func rephased(u *mat.CDense) []*mat.CDense {
 }
 
 // BenchmarkWitness times Witness on the small sizes a property test checks
-// thousands of times.
+// thousands of times, and on larger ones.
 func BenchmarkWitness(b *testing.B) {
-	for _, q := range []int{1, 2, 3, 4, 6, 8, 10} {
-		n := 1 << q
-		b.Run(fmt.Sprintf("qubits=%d", q), func(b *testing.B) {
-			rng := newRand(uint64(q))
-			u, v := haar(rng, n), haar(rng, n)
-			b.ReportAllocs()
-			for b.Loop() {
-				Witness(u, v)
-			}
-		})
-	}
+	benchPairs(b, []int{1, 2, 3, 4, 6, 8, 10}, func(u, v *mat.CDense) { Witness(u, v) })
 }
 
 // BenchmarkDistance times the operator norm of a difference.
 func BenchmarkDistance(b *testing.B) {
-	for _, q := range []int{1, 3, 4, 6, 10} {
-		n := 1 << q
+	benchPairs(b, []int{1, 3, 4, 6, 10}, func(u, v *mat.CDense) { Distance(u, v) })
+}
+
+// benchPairs runs f on a Haar-random pair for each number of qubits.
+func benchPairs(b *testing.B, qubits []int, f func(u, v *mat.CDense)) {
+	for _, q := range qubits {
 		b.Run(fmt.Sprintf("qubits=%d", q), func(b *testing.B) {
 			rng := newRand(uint64(q))
-			u, v := haar(rng, n), haar(rng, n)
+			u, v := haar(rng, 1<<q), haar(rng, 1<<q)
 			b.ReportAllocs()
 			for b.Loop() {
-				Distance(u, v)
+				f(u, v)
 			}
 		})
 	}
@@ -106,7 +91,16 @@ func BenchmarkPhaseDistanceFile(b *testing.B) {
 		}
 		return mat.NewCDense(n, n, data)
 	}
-	us, v := rephased(read(0)), read(n*n*16)
+	timePhaseDistance(b, read(0), read(n*n*16))
+}
+
+// timePhaseDistance is the timing loop of the PhaseDistance benchmarks: it
+// cycles through the rephased copies of u and reports, besides wall time,
+// the CPU seconds per call summed over threads, which are steadier than wall
+// time when other work shares the machine.
+func timePhaseDistance(b *testing.B, u, v *mat.CDense) {
+	us := rephased(u)
+	b.ReportAllocs()
 	cpu := processCPU()
 	i := 0
 	for b.Loop() {

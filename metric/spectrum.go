@@ -62,7 +62,7 @@ func (s *spectrum) compute(u, v []complex128, n int, vectors bool, mem *scratch)
 			trace += u[i*n+i]
 		}
 	} else {
-		trace = traceInner(v, u)
+		trace = inner(v, u) // tr(v†u) = Σ conj(v_ij)·u_ij
 	}
 	// Put the pole opposite the mean eigenvalue when the spectrum leans to
 	// one side (the usual case when U and V nearly agree), nudged off the

@@ -43,11 +43,7 @@ func StateFidelity(a, b []complex128) float64 {
 // before its eigenvalues are taken.
 func TraceDistance(rho, sigma mat.CMatrix) float64 {
 	n := pairSize("TraceDistance", rho, sigma)
-	d := rowMajor(rho, nil)
-	s := rowMajor(sigma, nil)
-	for i, x := range s {
-		d[i] -= x
-	}
+	d := difference(rho, sigma)
 	// Read column-major the buffer is (ρ − σ)ᵀ, Hermitian with the same
 	// eigenvalues; average it with its adjoint on the lower triangle.
 	for j := 0; j < n; j++ {
@@ -62,7 +58,8 @@ func TraceDistance(rho, sigma mat.CMatrix) float64 {
 	return sum / 2
 }
 
-// inner returns ⟨a|b⟩ = Σ conj(a_i)·b_i.
+// inner returns ⟨a|b⟩ = Σ conj(a_i)·b_i; for two matrices stored the same
+// way it is tr(a†b).
 func inner(a, b []complex128) complex128 {
 	var s complex128
 	b = b[:len(a)]
