@@ -213,15 +213,26 @@ func sweepKernelGo(col, v, w, y, x []complex128, p, q, r complex128) complex128 
 // package do not need.
 func reflector(x []complex128) (beta float64, tau complex128) {
 	alpha := x[0]
+	ar, ai := real(alpha), imag(alpha)
+	// The norm is summed scaled by the largest part, so that tiny entries (a rounding error
+	// beside a 1e-98 term, say) do not square to zero and leave beta = 0 to divide by.
+	scale := math.Max(math.Abs(ar), math.Abs(ai))
+	for _, z := range x[1:] {
+		scale = math.Max(scale, math.Max(math.Abs(real(z)), math.Abs(imag(z))))
+	}
+	if scale == 0 {
+		return 0, 0
+	}
 	var ss float64
 	for _, z := range x[1:] {
-		ss += real(z)*real(z) + imag(z)*imag(z)
+		zr, zi := real(z)/scale, imag(z)/scale
+		ss += zr*zr + zi*zi
 	}
-	ar, ai := real(alpha), imag(alpha)
 	if ss == 0 && ai == 0 {
 		return ar, 0
 	}
-	beta = -math.Copysign(math.Sqrt(ar*ar+ai*ai+ss), ar)
+	sr, si := ar/scale, ai/scale
+	beta = -math.Copysign(scale*math.Sqrt(sr*sr+si*si+ss), ar)
 	tau = complex((beta-ar)/beta, -ai/beta)
 	s := 1 / (alpha - complex(beta, 0))
 	for i := range x[1:] {

@@ -1,0 +1,86 @@
+package campaign
+
+import (
+	"flag"
+	"fmt"
+	"strconv"
+	"testing"
+
+	"pgregory.net/rapid"
+	"qcheck.dev/qcheck"
+	"qcheck.dev/qcheck/circuit"
+)
+
+// A Target is a pass with a planted bug and the circuits it is checked on.
+type Target struct {
+	// Name says which bug, such as "shortcut.ZThroughTarget".
+	Name string
+	// Bug says in a line what is wrong with the pass.
+	Bug string
+	// Pass is the pass under test.
+	Pass qcheck.Pass
+	// Circuits generates its inputs.
+	Circuits *rapid.Generator[*circuit.Circuit]
+	// Options are the comparison options the pass must satisfy.
+	Options []qcheck.Option
+}
+
+// DefaultChecks is rapid's default number of checks per campaign.
+const DefaultChecks = 100
+
+// Hunt runs qcheck.Search on the target with rapid's seed and number of checks set as given, and
+// without fail files (so that nothing is written to, or replayed from, testdata/rapid/). It
+// returns the shrunk failure, or nil when all checks passed. Hunt sets rapid's command-line
+// settings for the duration of the call and restores them; like Search, calls must not overlap.
+//
+// rapid reads testing.Short, which panics in a program that is not a test unless the testing
+// flags are registered and parsed; Hunt registers them (testing.Init) and, when the program has
+// not parsed its command line, parses an empty one.
+func Hunt(t Target, seed uint64, checks int) (*qcheck.Failure, error) {
+	if seed == 0 {
+		return nil, fmt.Errorf("campaign: seed 0 asks rapid for a random seed; give a nonzero seed")
+	}
+	if checks < 1 {
+		return nil, fmt.Errorf("campaign: %d checks; want at least 1", checks)
+	}
+	testing.Init()
+	if !flag.Parsed() {
+		if err := flag.CommandLine.Parse(nil); err != nil {
+			return nil, fmt.Errorf("campaign: %v", err)
+		}
+	}
+	restore, err := setFlags(map[string]string{
+		"rapid.seed":       strconv.FormatUint(seed, 10),
+		"rapid.checks":     strconv.Itoa(checks),
+		"rapid.nofailfile": "true",
+		"rapid.failfile":   "",
+	})
+	if err != nil {
+		return nil, err
+	}
+	defer restore()
+	return qcheck.Search(t.Pass, t.Circuits, t.Options...)
+}
+
+// setFlags sets rapid's flags and returns a function that puts back their old values.
+func setFlags(values map[string]string) (restore func(), err error) {
+	old := map[string]string{}
+	restore = func() {
+		for name, v := range old {
+			flag.Set(name, v)
+		}
+	}
+	for name, v := range values {
+		f := flag.Lookup(name)
+		if f == nil {
+			restore()
+			return nil, fmt.Errorf("campaign: rapid's flag -%s is not registered", name)
+		}
+		old[name] = f.Value.String()
+		if err := flag.Set(name, v); err != nil {
+			restore()
+			return nil, fmt.Errorf("campaign: setting -%s: %v", name, err)
+		}
+	}
+	return restore, nil
+}

@@ -1,0 +1,261 @@
+package circuit
+
+import (
+	"fmt"
+	"math"
+)
+
+// Op is one operation of a circuit: a gate and the qubits it acts on, in the gate's operand order.
+// Clbits is used only by measure, which records the classical bit it writes.
+type Op struct {
+	Gate   Gate
+	Qubits []int
+	Clbits []int
+}
+
+// Clone returns a deep copy of the op.
+func (o Op) Clone() Op {
+	o.Gate = o.Gate.Clone()
+	o.Qubits = append([]int(nil), o.Qubits...)
+	if o.Clbits != nil {
+		o.Clbits = append([]int(nil), o.Clbits...)
+	}
+	return o
+}
+
+// Equal reports whether two ops are the same gate on the same qubits and bits.
+func (o Op) Equal(p Op) bool {
+	return o.Gate.Equal(p.Gate) && equalInts(o.Qubits, p.Qubits) && equalInts(o.Clbits, p.Clbits)
+}
+
+// String writes the op as in a gate list: "cx q0,q1", "rz(π/4) q2", "measure q0 -> c0".
+func (o Op) String() string {
+	s := o.Gate.String()
+	for i, q := range o.Qubits {
+		if i == 0 {
+			s += " "
+		} else {
+			s += ","
+		}
+		s += fmt.Sprintf("q%d", q)
+	}
+	for i, b := range o.Clbits {
+		if i == 0 {
+			s += " -> "
+		} else {
+			s += ","
+		}
+		s += fmt.Sprintf("c%d", b)
+	}
+	return s
+}
+
+// Circuit is a register of qubits and the ops that act on it, first op first. Passes may read and
+// rewrite Ops directly; Validate tells whether the result is well formed.
+type Circuit struct {
+	qubits int
+	clbits int
+	// Ops are the circuit's operations in the order they are applied.
+	Ops []Op
+}
+
+// New returns an empty circuit on the given number of qubits. A negative width is reported by
+// Validate.
+func New(qubits int) *Circuit { return &Circuit{qubits: qubits} }
+
+// Qubits returns the width of the circuit's register.
+func (c *Circuit) Qubits() int { return c.qubits }
+
+// Clbits returns the number of classical bits: one more than the highest bit a measure writes, or
+// the number set by SetClbits, whichever is larger.
+func (c *Circuit) Clbits() int { return c.clbits }
+
+// SetClbits declares the size of the classical register.
+func (c *Circuit) SetClbits(n int) *Circuit {
+	if n > c.clbits {
+		c.clbits = n
+	}
+	return c
+}
+
+// Len returns the number of ops.
+func (c *Circuit) Len() int { return len(c.Ops) }
+
+// Append adds the gate on the given qubits and returns the circuit for chaining. Bad operands are
+// recorded as given and reported by Validate.
+func (c *Circuit) Append(g Gate, qubits ...int) *Circuit {
+	c.Ops = append(c.Ops, Op{Gate: g.Clone(), Qubits: append([]int(nil), qubits...)})
+	return c
+}
+
+// AppendOp adds a copy of op.
+func (c *Circuit) AppendOp(op Op) *Circuit {
+	op = op.Clone()
+	for _, b := range op.Clbits {
+		if b >= c.clbits {
+			c.clbits = b + 1
+		}
+	}
+	c.Ops = append(c.Ops, op)
+	return c
+}
+
+// Compose appends every op of d, whose width must not exceed c's (Validate reports out-of-range
+// qubits otherwise).
+func (c *Circuit) Compose(d *Circuit) *Circuit {
+	for _, op := range d.Ops {
+		c.AppendOp(op)
+	}
+	c.SetClbits(d.clbits)
+	return c
+}
+
+// Clone returns a deep copy of the circuit.
+func (c *Circuit) Clone() *Circuit {
+	d := &Circuit{qubits: c.qubits, clbits: c.clbits, Ops: make([]Op, len(c.Ops))}
+	for i, op := range c.Ops {
+		d.Ops[i] = op.Clone()
+	}
+	return d
+}
+
+// Equal reports whether two circuits have the same width and the same ops in the same order.
+func (c *Circuit) Equal(d *Circuit) bool {
+	if c.qubits != d.qubits || len(c.Ops) != len(d.Ops) {
+		return false
+	}
+	for i := range c.Ops {
+		if !c.Ops[i].Equal(d.Ops[i]) {
+			return false
+		}
+	}
+	return true
+}
+
+// Inverse returns the circuit that undoes c: the ops in reverse order, each replaced by its exact
+// inverse. Barriers are kept in place; a circuit with measure or reset has no inverse and those
+// ops are kept as they are, so Validate still accepts it but unitary engines refuse it.
+func (c *Circuit) Inverse() *Circuit {
+	d := &Circuit{qubits: c.qubits, clbits: c.clbits, Ops: make([]Op, 0, len(c.Ops))}
+	for i := len(c.Ops) - 1; i >= 0; i-- {
+		op := c.Ops[i].Clone()
+		if op.Gate.Unitary() {
+			op.Gate = op.Gate.Inverse()
+		}
+		d.Ops = append(d.Ops, op)
+	}
+	return d
+}
+
+// Unitary reports whether every op is a unitary gate or a barrier, so that the circuit has a
+// unitary matrix.
+func (c *Circuit) Unitary() bool {
+	for _, op := range c.Ops {
+		if !op.Gate.Unitary() && op.Gate.Name != "barrier" {
+			return false
+		}
+	}
+	return true
+}
+
+// OpError is the error Validate returns for a bad op: which op, which gate, and what is wrong.
+type OpError struct {
+	Index int    // the op's position in Ops
+	Gate  string // the gate's name
+	Err   string // what is wrong
+}
+
+func (e *OpError) Error() string {
+	return fmt.Sprintf("circuit: op %d (%s): %s", e.Index, e.Gate, e.Err)
+}
+
+// Validate reports the first problem that makes the circuit ill formed: a negative width, an
+// unknown gate, the wrong number of angles or operands, a qubit out of range or repeated, a NaN or
+// infinite angle, or a bad classical bit. It returns nil for a well-formed circuit.
+func (c *Circuit) Validate() error {
+	if c == nil {
+		return fmt.Errorf("circuit: nil circuit")
+	}
+	if c.qubits < 0 {
+		return fmt.Errorf("circuit: negative width %d", c.qubits)
+	}
+	for i, op := range c.Ops {
+		if err := c.validateOp(op); err != "" {
+			return &OpError{Index: i, Gate: op.Gate.Name, Err: err}
+		}
+	}
+	return nil
+}
+
+func (c *Circuit) validateOp(op Op) string {
+	g := op.Gate
+	if g.custom == nil {
+		d, ok := library[g.Name]
+		if !ok {
+			if g.Name == "" {
+				return "gate has no name"
+			}
+			return "unknown gate"
+		}
+		if len(g.Params) != d.spec.Params {
+			return fmt.Sprintf("takes %d angle(s), got %d", d.spec.Params, len(g.Params))
+		}
+	}
+	for k, p := range g.Params {
+		if math.IsNaN(p) || math.IsInf(p, 0) {
+			return fmt.Sprintf("angle %d is %v; angles must be finite", k, p)
+		}
+	}
+	if want := g.Qubits(); g.Name != "barrier" && len(op.Qubits) != want {
+		return fmt.Sprintf("acts on %d qubit(s), got %d operand(s) %v", want, len(op.Qubits), op.Qubits)
+	}
+	if g.Name == "barrier" && len(op.Qubits) == 0 {
+		return "barrier on no qubits"
+	}
+	// Wide ops (a barrier over a large register) use a set: comparing every pair is quadratic.
+	var seen map[int]bool
+	if len(op.Qubits) > 16 {
+		seen = make(map[int]bool, len(op.Qubits))
+	}
+	for k, q := range op.Qubits {
+		if q < 0 || q >= c.qubits {
+			return fmt.Sprintf("qubit %d out of range [0, %d)", q, c.qubits)
+		}
+		if seen != nil {
+			if seen[q] {
+				return fmt.Sprintf("qubit %d repeated in operands %v", q, op.Qubits)
+			}
+			seen[q] = true
+			continue
+		}
+		for _, r := range op.Qubits[:k] {
+			if r == q {
+				return fmt.Sprintf("qubit %d repeated in operands %v", q, op.Qubits)
+			}
+		}
+	}
+	switch {
+	case g.Name == "measure" && len(op.Clbits) != 1:
+		return fmt.Sprintf("measure writes one classical bit, got %d", len(op.Clbits))
+	case g.Name != "measure" && len(op.Clbits) != 0:
+		return "only measure writes classical bits"
+	}
+	for _, b := range op.Clbits {
+		if b < 0 {
+			return fmt.Sprintf("classical bit %d out of range", b)
+		}
+	}
+	return ""
+}
+
+func equalInts(a, b []int) bool {
+	if len(a) != len(b) {
+		return false
+	}
+	for i := range a {
+		if a[i] != b[i] {
+			return false
+		}
+	}
+	return true
+}

@@ -1,0 +1,95 @@
+package circuit
+
+import (
+	"fmt"
+	"math"
+	"math/cmplx"
+
+	"gonum.org/v1/gonum/mat"
+)
+
+// UnitaryTolerance is how far ‖M†M − I‖ (the largest absolute row sum, an upper bound on the
+// operator norm) may be from zero for Custom to accept M as unitary.
+const UnitaryTolerance = 1e-10
+
+type customGate struct {
+	qubits int
+	data   []complex128 // row-major, textbook operand order
+}
+
+// Custom returns a gate with the user's own 2^k × 2^k matrix, k ≥ 1, given in the textbook order
+// of its operands (the first operand is the most significant bit). The matrix is copied. It fails
+// when the matrix is not square, its size is not a power of two, an entry is not finite, or it is
+// not unitary within UnitaryTolerance; the error gives the measured deviation ‖M†M − I‖.
+func Custom(name string, m mat.CMatrix) (Gate, error) {
+	if name == "" {
+		return Gate{}, fmt.Errorf("circuit: custom gate needs a name")
+	}
+	if _, ok := library[name]; ok {
+		return Gate{}, fmt.Errorf("circuit: custom gate name %q is taken by the standard library", name)
+	}
+	if m == nil {
+		return Gate{}, fmt.Errorf("circuit: custom gate %s: nil matrix", name)
+	}
+	r, c := m.Dims()
+	if r != c {
+		return Gate{}, fmt.Errorf("circuit: custom gate %s: matrix is %d×%d, not square", name, r, c)
+	}
+	k := 0
+	for 1<<k < r {
+		k++
+	}
+	if r < 2 || 1<<k != r {
+		return Gate{}, fmt.Errorf("circuit: custom gate %s: size %d is not 2^k for k ≥ 1", name, r)
+	}
+	data := make([]complex128, r*r)
+	for i := 0; i < r; i++ {
+		for j := 0; j < r; j++ {
+			v := m.At(i, j)
+			if cmplx.IsNaN(v) || cmplx.IsInf(v) {
+				return Gate{}, fmt.Errorf("circuit: custom gate %s: entry (%d,%d) is %v", name, i, j, v)
+			}
+			data[i*r+j] = v
+		}
+	}
+	if dev := unitaryDeviation(data, r); !(dev <= UnitaryTolerance) {
+		return Gate{}, fmt.Errorf("circuit: custom gate %s is not unitary: ‖M†M − I‖ = %.3g > %g", name, dev, UnitaryTolerance)
+	}
+	return Gate{Name: name, custom: &customGate{qubits: k, data: data}}, nil
+}
+
+// unitaryDeviation returns the largest absolute row sum of M†M − I, which bounds ‖M†M − I‖ from
+// above for a Hermitian matrix (the operator norm is at most the induced ∞-norm).
+func unitaryDeviation(m []complex128, d int) float64 {
+	worst := 0.0
+	for i := 0; i < d; i++ {
+		row := 0.0
+		for j := 0; j < d; j++ {
+			var s complex128
+			for k := 0; k < d; k++ {
+				s += cmplx.Conj(m[k*d+i]) * m[k*d+j]
+			}
+			if i == j {
+				s--
+			}
+			row += cmplx.Abs(s)
+		}
+		worst = math.Max(worst, row)
+	}
+	return worst
+}
+
+func (c *customGate) inverse(name string) Gate {
+	d := 1 << c.qubits
+	data := make([]complex128, d*d)
+	for i := 0; i < d; i++ {
+		for j := 0; j < d; j++ {
+			data[j*d+i] = cmplx.Conj(c.data[i*d+j])
+		}
+	}
+	inv := name + "dg"
+	if len(name) > 2 && name[len(name)-2:] == "dg" {
+		inv = name[:len(name)-2]
+	}
+	return Gate{Name: inv, custom: &customGate{qubits: c.qubits, data: data}}
+}

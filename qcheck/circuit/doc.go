@@ -1,0 +1,22 @@
+// Package circuit is qcheck's circuit representation: a register of qubits, a list of operations,
+// and the standard gate library with the textbook matrix of every gate.
+//
+// # Conventions
+//
+// Qubit 0 is the least-significant bit of a basis-state index: index = Σ_q b_q·2^q. A gate's own
+// matrix is written in the textbook order of its operands: the first operand is the most
+// significant bit of the gate's local index. So CX(0, 1) (control 0, target 1) has the textbook
+// 4×4 matrix on (control, target), and on a two-qubit register it maps basis index 1 (q0=1, q1=0)
+// to index 3 and back, leaving 0 and 2 alone.
+//
+// Angles are radians. Gate names are the lower-case names of the OpenQASM standard library; the
+// builder methods are their upper-case forms with angles first and qubits after, so
+// `rz(θ) q[2];` is c.RZ(θ, 2).
+//
+// # Errors
+//
+// Builder methods never panic and never fail on the spot: they record what they are given, and
+// Validate reports the first bad operation (qubit out of range, repeated operand, wrong arity,
+// non-finite angle) with its index. Every engine validates before it computes, so a bad builder
+// call surfaces as an error there too.
+package circuit

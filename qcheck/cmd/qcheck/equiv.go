@@ -1,0 +1,202 @@
+package main
+
+import (
+	"encoding/json"
+	"flag"
+	"fmt"
+	"io"
+	"strconv"
+	"strings"
+
+	"qcheck.dev/qcheck"
+	"qcheck.dev/qcheck/qasm"
+)
+
+// compareFlags are the flags that set how two circuits are compared, shared by equiv and pairs.
+type compareFlags struct {
+	tol        float64
+	exactPhase bool
+	perm       string
+	measured   bool
+	ancillas   string
+	dirty      bool
+	measure    string
+}
+
+func (f *compareFlags) register(fs *flag.FlagSet) {
+	fs.Float64Var(&f.tol, "tol", qcheck.DefaultTolerance, "largest distance `EPS` that still counts as equivalent")
+	fs.BoolVar(&f.exactPhase, "exact-phase", false, "count a global phase as a difference")
+	fs.StringVar(&f.perm, "perm", "", "output permutation `P0,P1,...`: logical qubit i of A ends on qubit Pi of B")
+	fs.BoolVar(&f.measured, "measured", false, "compare only the measured distributions of A's final measurements (all qubits if A measures none)")
+	fs.StringVar(&f.ancillas, "ancillas", "", "qubits `Q,...` of B borrowed as ancillas (clean: start and end in |0⟩); A may omit them")
+	fs.BoolVar(&f.dirty, "dirty", false, "the -ancillas start in any state and must be restored")
+	fs.StringVar(&f.measure, "measure", "operator", "`MEASURE` that decides: operator (norm), diamond, or fidelity (average infidelity)")
+}
+
+// options turns the flags into qcheck options.
+func (f *compareFlags) options() ([]qcheck.Option, error) {
+	opts := []qcheck.Option{qcheck.Tolerance(f.tol)}
+	if f.exactPhase {
+		opts = append(opts, qcheck.ExactPhase())
+	}
+	if f.perm != "" {
+		perm, err := intList(f.perm)
+		if err != nil {
+			return nil, fmt.Errorf("-perm: %v", err)
+		}
+		opts = append(opts, qcheck.OutputPermutation(perm))
+	}
+	if f.ancillas != "" {
+		qs, err := intList(f.ancillas)
+		if err != nil {
+			return nil, fmt.Errorf("-ancillas: %v", err)
+		}
+		state := qcheck.Clean
+		if f.dirty {
+			state = qcheck.Dirty
+		}
+		opts = append(opts, qcheck.Ancillas(qs, state))
+	} else if f.dirty {
+		return nil, fmt.Errorf("-dirty needs -ancillas")
+	}
+	if f.measured {
+		opts = append(opts, qcheck.Measured())
+	}
+	switch f.measure {
+	case "operator":
+	case "diamond":
+		opts = append(opts, qcheck.UseMeasure(qcheck.Diamond))
+	case "fidelity":
+		opts = append(opts, qcheck.UseMeasure(qcheck.AverageFidelity))
+	default:
+		return nil, fmt.Errorf("-measure %q: choose operator, diamond or fidelity", f.measure)
+	}
+	return opts, nil
+}
+
+// intList reads "2,0,1".
+func intList(s string) ([]int, error) {
+	var out []int
+	for _, part := range strings.Split(s, ",") {
+		v, err := strconv.Atoi(strings.TrimSpace(part))
+		if err != nil {
+			return nil, fmt.Errorf("%q is not a comma-separated list of qubit indices", s)
+		}
+		out = append(out, v)
+	}
+	return out, nil
+}
+
+// compareFiles parses both files and compares them; errors name the file and line at fault.
+func (f *compareFlags) compareFiles(a, b string) (qcheck.Result, error) {
+	opts, err := f.options()
+	if err != nil {
+		return qcheck.Result{}, err
+	}
+	pa, err := load(a)
+	if err != nil {
+		return qcheck.Result{}, err
+	}
+	pb, err := load(b)
+	if err != nil {
+		return qcheck.Result{}, err
+	}
+	if !f.measured {
+		for _, x := range []struct {
+			path string
+			prog *qasm.Program
+		}{{a, pa}, {b, pb}} {
+			if err := refuseDirectives(x.path, x.prog, "use -measured to compare measured distributions"); err != nil {
+				return qcheck.Result{}, err
+			}
+		}
+	}
+	r, err := qcheck.Compare(pa.Circuit, pb.Circuit, opts...)
+	if err != nil {
+		return qcheck.Result{}, fmt.Errorf("%s vs %s: %v", a, b, err)
+	}
+	return r, nil
+}
+
+const equivAbout = `
+Compares the circuit of B.qasm with that of A.qasm (the reference) and exits 0 when they are
+equivalent within the tolerance, 1 when they are not, 2 on bad input or usage. By default the
+distance is the operator norm of the difference of the two unitaries, minimised over a global
+phase. Human output: the verdict and the distance, and on a difference a report with the input
+state that exposes it and a measurement whose probabilities differ. With -json, one JSON object:
+equivalent, distance, measure, tolerance, exact_phase, phase (want ≈ e^{i·phase}·got),
+operator_distance, witness (the input state, as [re, im] pairs, basis index Σ b_q·2^q),
+witness_gap (a certified lower bound on the distance), engine, certifies, measurement.`
+
+func equiv(args []string, stdout, stderr io.Writer) int {
+	c := newCommand("equiv", "equiv [flags] A.qasm B.qasm", equivAbout, stdout, stderr)
+	var f compareFlags
+	f.register(c.fs)
+	asJSON := c.fs.Bool("json", false, "write the result as one JSON object")
+	files, code, ok := c.parse(args, 2)
+	if !ok {
+		return code
+	}
+	r, err := f.compareFiles(files[0], files[1])
+	if err != nil {
+		return c.fail("%v", err)
+	}
+	if *asJSON {
+		out, err := json.MarshalIndent(resultJSON(r), "", "  ")
+		if err != nil {
+			return c.fail("%v", err)
+		}
+		fmt.Fprintf(stdout, "%s\n", out)
+	} else if r.Equivalent {
+		fmt.Fprintln(stdout, r.Headline())
+	} else {
+		fmt.Fprint(stdout, r.Report())
+	}
+	if !r.Equivalent {
+		return exitDiffer
+	}
+	return exitOK
+}
+
+// verdict is the JSON form of a comparison.
+type verdict struct {
+	Equivalent       bool         `json:"equivalent"`
+	Distance         float64      `json:"distance"`
+	Measure          string       `json:"measure"`
+	Tolerance        float64      `json:"tolerance"`
+	ExactPhase       bool         `json:"exact_phase"`
+	Phase            float64      `json:"phase"`
+	OperatorDistance float64      `json:"operator_distance"`
+	Witness          [][2]float64 `json:"witness"`
+	WitnessGap       float64      `json:"witness_gap"`
+	Engine           string       `json:"engine"`
+	Certifies        string       `json:"certifies"`
+	Measurement      *measurement `json:"measurement,omitempty"`
+}
+
+// measurement is the JSON form of qcheck.Measurement: prepare input (input_basis when it is a
+// basis state, else −1), run, measure; basis tells a computational-basis measurement with outcome
+// seen with probability want and got, otherwise a projection onto want's output.
+type measurement struct {
+	InputBasis int     `json:"input_basis"`
+	Basis      bool    `json:"basis"`
+	Outcome    int     `json:"outcome"`
+	Want       float64 `json:"want"`
+	Got        float64 `json:"got"`
+}
+
+func resultJSON(r qcheck.Result) verdict {
+	v := verdict{
+		Equivalent: r.Equivalent, Distance: r.Distance, Measure: r.Measure.String(),
+		Tolerance: r.Tolerance, ExactPhase: r.ExactPhase, Phase: r.Phase,
+		OperatorDistance: r.OperatorDistance, WitnessGap: r.WitnessGap,
+		Engine: r.Engine.String(), Certifies: r.Certifies, Witness: [][2]float64{},
+	}
+	for _, a := range r.Witness {
+		v.Witness = append(v.Witness, [2]float64{real(a), imag(a)})
+	}
+	if m := r.Measurement; m.Input != nil {
+		v.Measurement = &measurement{InputBasis: m.InputBasis, Basis: m.Basis, Outcome: m.Outcome, Want: m.Want, Got: m.Got}
+	}
+	return v
+}

@@ -1,0 +1,348 @@
+package main
+
+import (
+	"bufio"
+	"bytes"
+	"encoding/json"
+	"errors"
+	"math"
+	"os"
+	"os/exec"
+	"path/filepath"
+	"strconv"
+	"strings"
+	"testing"
+
+	"qcheck.dev/qcheck/qasm"
+)
+
+const corpus = "../../../testdata/identities"
+
+// runCmd runs one command line through run and returns the exit code, stdout and stderr.
+func runCmd(args ...string) (int, string, string) {
+	var out, errOut bytes.Buffer
+	code := run(args, &out, &errOut)
+	return code, out.String(), errOut.String()
+}
+
+type entry struct {
+	name       string
+	equivalent bool
+	distance   float64
+}
+
+// manifest reads testdata/identities/manifest.txt, whose distances NumPy computed
+// (testdata/identities/distances.py).
+func manifest(t *testing.T) []entry {
+	t.Helper()
+	f, err := os.Open(filepath.Join(corpus, "manifest.txt"))
+	if err != nil {
+		t.Fatal(err)
+	}
+	defer f.Close()
+	var out []entry
+	s := bufio.NewScanner(f)
+	for s.Scan() {
+		fields := strings.Fields(s.Text())
+		if len(fields) != 3 || strings.HasPrefix(fields[0], "#") {
+			continue
+		}
+		d, err := strconv.ParseFloat(fields[2], 64)
+		if err != nil {
+			t.Fatal(err)
+		}
+		out = append(out, entry{fields[0], fields[1] == "equivalent", d})
+	}
+	if len(out) < 25 {
+		t.Fatalf("manifest has %d pairs", len(out))
+	}
+	return out
+}
+
+func pairFiles(name string) (string, string) {
+	return filepath.Join(corpus, name+".before.qasm"), filepath.Join(corpus, name+".after.qasm")
+}
+
+// equiv on every pair of the corpus: exit 0 or 1 as NumPy's verdict says, and the JSON distance
+// equal to NumPy's to 1e-9.
+func TestEquivCorpus(t *testing.T) {
+	for _, e := range manifest(t) {
+		a, b := pairFiles(e.name)
+		code, out, errOut := runCmd("equiv", "-json", a, b)
+		want := exitOK
+		if !e.equivalent {
+			want = exitDiffer
+		}
+		if code != want {
+			t.Errorf("%s: exit %d, want %d; stderr %s", e.name, code, want, errOut)
+			continue
+		}
+		var v struct {
+			Equivalent *bool    `json:"equivalent"`
+			Distance   *float64 `json:"distance"`
+			Tolerance  float64  `json:"tolerance"`
+			Measure    string   `json:"measure"`
+		}
+		if err := json.Unmarshal([]byte(out), &v); err != nil || v.Equivalent == nil || v.Distance == nil {
+			t.Fatalf("%s: JSON %q: %v", e.name, out, err)
+		}
+		if *v.Equivalent != e.equivalent || math.Abs(*v.Distance-e.distance) > 1e-9 || v.Tolerance != 1e-9 || v.Measure != "operator norm" {
+			t.Errorf("%s: JSON %+v, NumPy says equivalent=%v distance=%.15g", e.name, v, e.equivalent, e.distance)
+		}
+	}
+}
+
+// Human output: the verdict line when equivalent; the report (headline first, then a witness and
+// a measurement) on a difference.
+func TestEquivHumanOutput(t *testing.T) {
+	a, b := pairFiles("toffoli")
+	code, out, _ := runCmd("equiv", a, b)
+	if code != exitOK || !strings.Contains(out, "equivalent") || strings.Count(out, "\n") != 1 {
+		t.Errorf("toffoli: exit %d, output %q", code, out)
+	}
+	a, b = pairFiles("cp_in_place_of_crz")
+	code, out, _ = runCmd("equiv", a, b)
+	if code != exitDiffer || !strings.HasPrefix(out, "qcheck: got differs from want: operator norm 0.1748") {
+		t.Errorf("cp_in_place_of_crz: exit %d, output %q", code, out)
+	}
+}
+
+func writeFiles(t *testing.T, files map[string]string) string {
+	t.Helper()
+	dir := t.TempDir()
+	for name, src := range files {
+		if err := os.WriteFile(filepath.Join(dir, name), []byte("OPENQASM 2.0;\ninclude \"qelib1.inc\";\n"+src), 0o644); err != nil {
+			t.Fatal(err)
+		}
+	}
+	return dir
+}
+
+// The comparison flags. Expected verdicts by hand: a SWAP only relabels qubits (N&C §1.3.4), so
+// with the permutation that undoes it the circuits agree; rz and p differ by a global phase only
+// (DESIGN.md); Z before a computational-basis measurement changes no probability (N&C §2.2.5,
+// the measurement postulate: |e^{iπ}a|² = |a|²).
+func TestEquivFlags(t *testing.T) {
+	dir := writeFiles(t, map[string]string{
+		"routed_want.qasm": "qreg q[2];\nh q[0];\ncx q[0],q[1];\nx q[0];\n",
+		"routed_got.qasm":  "qreg q[2];\nh q[0];\ncx q[0],q[1];\nswap q[0],q[1];\nx q[1];\n",
+		"rz.qasm":          "qreg q[1];\nrz(0.5) q[0];\n",
+		"p.qasm":           "qreg q[1];\np(0.5) q[0];\n",
+		"bell.qasm":        "qreg q[2];\ncreg c[2];\nh q[0];\ncx q[0],q[1];\nmeasure q -> c;\n",
+		"bell_z.qasm":      "qreg q[2];\ncreg c[2];\nh q[0];\ncx q[0],q[1];\nz q[1];\nmeasure q -> c;\n",
+		"three.qasm":       "qreg q[3];\nh q[0];\n",
+		"bad.qasm":         "qreg q[2];\nh q[0];\ncx q[0] q[1];\n",
+		"ancilla.qasm":     "qreg q[5];\nccx q[0],q[1],q[4];\nccx q[2],q[4],q[3];\nccx q[0],q[1],q[4];\nccx q[2],q[4],q[3];\n",
+		"c3x.qasm":         "qreg q[4];\nc3x q[0],q[1],q[2],q[3];\n",
+	})
+	f := func(name string) string { return filepath.Join(dir, name) }
+	cases := []struct {
+		args   []string
+		code   int
+		stderr string
+	}{
+		{[]string{"equiv", f("routed_want.qasm"), f("routed_got.qasm")}, exitDiffer, ""},
+		{[]string{"equiv", "-perm", "1,0", f("routed_want.qasm"), f("routed_got.qasm")}, exitOK, ""},
+		{[]string{"equiv", f("routed_want.qasm"), f("routed_got.qasm"), "-perm", "1,0"}, exitOK, ""}, // flags after files
+		{[]string{"equiv", f("rz.qasm"), f("p.qasm")}, exitOK, ""},
+		{[]string{"equiv", "-exact-phase", f("rz.qasm"), f("p.qasm")}, exitDiffer, ""},
+		// ‖rz(0.5) − p(0.5)‖ = |1 − e^{i0.25}| = 2 sin(0.125) ≈ 0.2493 (by hand): within -tol 0.3.
+		{[]string{"equiv", "-exact-phase", "-tol", "0.3", f("rz.qasm"), f("p.qasm")}, exitOK, ""},
+		{[]string{"equiv", "-exact-phase", "-tol", "0.2", f("rz.qasm"), f("p.qasm")}, exitDiffer, ""},
+		{[]string{"equiv", "-measured", f("bell.qasm"), f("bell_z.qasm")}, exitOK, ""},
+		{[]string{"equiv", f("bell.qasm"), f("bell_z.qasm")}, exitBadUsed, "bell.qasm:7: measure has no unitary; use -measured"},
+		// Barenco et al. 1995, Lemma 7.2: the ancilla may hold anything and is restored.
+		{[]string{"equiv", "-ancillas", "4", "-dirty", f("c3x.qasm"), f("ancilla.qasm")}, exitOK, ""},
+		{[]string{"equiv", "-dirty", f("rz.qasm"), f("p.qasm")}, exitBadUsed, "-dirty needs -ancillas"},
+		{[]string{"equiv", "-measure", "diamond", f("rz.qasm"), f("p.qasm")}, exitOK, ""},
+		{[]string{"equiv", "-measure", "fidelity", f("routed_want.qasm"), f("routed_got.qasm")}, exitDiffer, ""},
+		{[]string{"equiv", "-measure", "loud", f("rz.qasm"), f("p.qasm")}, exitBadUsed, "choose operator, diamond or fidelity"},
+		{[]string{"equiv", "-perm", "1,x", f("rz.qasm"), f("p.qasm")}, exitBadUsed, "-perm"},
+		{[]string{"equiv", "-perm", "0,0", f("routed_want.qasm"), f("routed_got.qasm")}, exitBadUsed, "OutputPermutation"},
+		{[]string{"equiv", f("rz.qasm"), f("three.qasm")}, exitBadUsed, "rz.qasm vs"},
+		{[]string{"equiv", f("bad.qasm"), f("rz.qasm")}, exitBadUsed, "bad.qasm:5:9: expected \";\""},
+		{[]string{"equiv", f("missing.qasm"), f("rz.qasm")}, exitBadUsed, "missing.qasm"},
+		{[]string{"equiv", f("rz.qasm")}, exitBadUsed, "want 2 argument(s), got 1"},
+		{[]string{"equiv", "-tol", "-1", f("rz.qasm"), f("p.qasm")}, exitBadUsed, "tolerance"},
+		{[]string{"equiv", "-bogus", f("rz.qasm"), f("p.qasm")}, exitBadUsed, "flag provided but not defined"},
+		{[]string{"frobnicate"}, exitBadUsed, "unknown command"},
+		{nil, exitBadUsed, "Usage:"},
+	}
+	for _, tc := range cases {
+		code, _, errOut := runCmd(tc.args...)
+		if code != tc.code || !strings.Contains(errOut, tc.stderr) {
+			t.Errorf("qcheck %s: exit %d, stderr %q; want exit %d and …%s…", strings.Join(tc.args, " "), code, errOut, tc.code, tc.stderr)
+		}
+		if tc.code == exitBadUsed && errOut == "" {
+			t.Errorf("qcheck %s: bad input with nothing on stderr", strings.Join(tc.args, " "))
+		}
+	}
+}
+
+// measures for CX(0,1) against CX(1,0), worked by hand: V†U is a 3-cycle on the basis states
+// 1, 2, 3 fixing 0, with eigenvalues 1, 1, ω, ω² (ω = e^{2πi/3}). So ‖U − V‖ = |ω − 1| = √3;
+// the shortest arc holding 0, 2π/3, 4π/3 is 4π/3, so the phase-free distance is 2 sin(π/3) = √3;
+// 0 lies in the convex hull of the eigenvalues, so the diamond distance is 2 (DESIGN.md formula);
+// tr U†V = 1, so the average fidelity is (4 + 1)/(4·5) = 1/4 and the process fidelity 1/16.
+func TestMeasures(t *testing.T) {
+	a, b := pairFiles("cnot_swapped_roles")
+	code, out, errOut := runCmd("measures", "-json", a, b)
+	if code != exitOK {
+		t.Fatalf("exit %d: %s", code, errOut)
+	}
+	var m allMeasures
+	if err := json.Unmarshal([]byte(out), &m); err != nil {
+		t.Fatal(err)
+	}
+	want := allMeasures{Operator: math.Sqrt(3), PhaseFree: math.Sqrt(3), Diamond: 2, AverageFidelity: 0.25, ProcessFidelity: 1.0 / 16}
+	for _, c := range []struct {
+		name      string
+		got, want float64
+	}{
+		{"operator", m.Operator, want.Operator}, {"phase-free", m.PhaseFree, want.PhaseFree},
+		{"diamond", m.Diamond, want.Diamond}, {"average", m.AverageFidelity, want.AverageFidelity},
+		{"process", m.ProcessFidelity, want.ProcessFidelity},
+	} {
+		if math.Abs(c.got-c.want) > 1e-9 {
+			t.Errorf("%s = %.15g, want %.15g", c.name, c.got, c.want)
+		}
+	}
+	code, out, _ = runCmd("measures", a, b)
+	if code != exitOK || !strings.Contains(out, "diamond     2\n") || !strings.Contains(out, "average     0.25\n") {
+		t.Errorf("human output (exit %d):\n%s", code, out)
+	}
+	dir := writeFiles(t, map[string]string{"m.qasm": "qreg q[1];\ncreg c[1];\nmeasure q[0] -> c[0];\n"})
+	if code, _, errOut := runCmd("measures", filepath.Join(dir, "m.qasm"), a); code != exitBadUsed || !strings.Contains(errOut, "m.qasm:5: measure") {
+		t.Errorf("measure in input: exit %d, stderr %q", code, errOut)
+	}
+}
+
+// pairs over the corpus: with the manifest as expectation every pair passes; without it the
+// eight near misses fail; a half pair is an error.
+func TestPairs(t *testing.T) {
+	code, out, errOut := runCmd("pairs", "-expect", filepath.Join(corpus, "manifest.txt"), corpus)
+	if code != exitOK || !strings.Contains(out, "41 pairs: 41 passed, 0 failed, 0 errors") {
+		t.Errorf("with -expect: exit %d\n%s%s", code, out, errOut)
+	}
+	code, out, _ = runCmd("pairs", corpus)
+	if code != exitDiffer || !strings.Contains(out, "41 pairs: 33 passed, 8 failed, 0 errors") ||
+		!strings.Contains(out, "cp_in_place_of_crz") {
+		t.Errorf("without -expect: exit %d\n%s", code, out)
+	}
+	code, out, _ = runCmd("pairs", "-json", corpus)
+	var summary struct {
+		Pairs []struct {
+			Pair string `json:"pair"`
+			Pass bool   `json:"pass"`
+		} `json:"pairs"`
+		Passed, Failed, Errors int
+	}
+	if err := json.Unmarshal([]byte(out), &summary); err != nil || code != exitDiffer || summary.Passed != 33 || summary.Failed != 8 || len(summary.Pairs) != 41 {
+		t.Errorf("-json: exit %d, %+v, %v", code, summary, err)
+	}
+
+	dir := writeFiles(t, map[string]string{
+		"a.before.qasm": "qreg q[1];\nh q[0];\nh q[0];\n",
+		"a.after.qasm":  "qreg q[1];\n",
+		"b.before.qasm": "qreg q[1];\nh q[0];\n",
+	})
+	code, out, errOut = runCmd("pairs", dir)
+	if code != exitBadUsed || !strings.Contains(errOut, "no b.after.qasm") || !strings.Contains(out, "2 pairs: 1 passed, 0 failed, 1 errors") {
+		t.Errorf("half pair: exit %d\n%s%s", code, out, errOut)
+	}
+	expect := filepath.Join(dir, "expect.txt")
+	os.WriteFile(expect, []byte("a different 0.5\n"), 0o644)
+	os.Remove(filepath.Join(dir, "b.before.qasm"))
+	if code, out, _ := runCmd("pairs", "-expect", expect, dir); code != exitDiffer || !strings.Contains(out, "FAIL") {
+		t.Errorf("wrong expectation: exit %d\n%s", code, out)
+	}
+	os.WriteFile(expect, []byte("a sideways\n"), 0o644)
+	if code, _, errOut := runCmd("pairs", "-expect", expect, dir); code != exitBadUsed || !strings.Contains(errOut, "expect.txt:1:") {
+		t.Errorf("bad expectation file: exit %d, %s", code, errOut)
+	}
+}
+
+// random: the same flags give the same circuits; each file parses to the asked width and length,
+// using only the asked gates.
+func TestRandom(t *testing.T) {
+	args := []string{"random", "-qubits", "4", "-gates", "25", "-set", "h,t,cx,rz", "-seed", "3"}
+	code, out1, errOut := runCmd(args...)
+	_, out2, _ := runCmd(args...)
+	if code != exitOK || out1 != out2 {
+		t.Fatalf("exit %d (%s); outputs equal: %v", code, errOut, out1 == out2)
+	}
+	c, err := qasm.Parse([]byte(out1))
+	if err != nil {
+		t.Fatal(err)
+	}
+	if c.Qubits() != 4 || c.Len() != 25 {
+		t.Errorf("%d qubits, %d ops; want 4, 25", c.Qubits(), c.Len())
+	}
+	for _, op := range c.Ops {
+		if !strings.Contains(",h,t,cx,rz,", ","+op.Gate.Name+",") {
+			t.Errorf("gate %s not in the set", op.Gate.Name)
+		}
+	}
+	if !strings.HasPrefix(out1, "// qcheck random -qubits 4 -gates 25 -set h,t,cx,rz -motifs 0 -seed 3\n") {
+		t.Errorf("header: %q", strings.SplitN(out1, "\n", 2)[0])
+	}
+
+	dir := t.TempDir()
+	code, out, _ := runCmd("random", "-count", "3", "-seed", "10", "-out", dir)
+	files, _ := filepath.Glob(filepath.Join(dir, "random-*.qasm"))
+	if code != exitOK || len(files) != 3 || strings.Count(out, "\n") != 3 {
+		t.Errorf("-count 3: exit %d, files %v", code, files)
+	}
+	for _, bad := range [][]string{
+		{"random", "-set", "h,foo"}, {"random", "-qubits", "1", "-set", "cx"},
+		{"random", "-count", "2"}, {"random", "-qubits", "0"}, {"random", "-motifs", "101"},
+	} {
+		if code, _, errOut := runCmd(bad...); code != exitBadUsed || errOut == "" {
+			t.Errorf("qcheck %s: exit %d, stderr %q", strings.Join(bad, " "), code, errOut)
+		}
+	}
+}
+
+func TestHelp(t *testing.T) {
+	for _, cmd := range []string{"equiv", "measures", "random", "pairs", "demo"} {
+		code, out, errOut := runCmd(cmd, "-h")
+		if code != exitOK || !strings.HasPrefix(out, "usage: qcheck "+cmd) || errOut != "" {
+			t.Errorf("%s -h: exit %d, stdout %q, stderr %q", cmd, code, out, errOut)
+		}
+	}
+	if code, out, _ := runCmd("-h"); code != exitOK || !strings.Contains(out, "qcheck pairs") {
+		t.Errorf("-h: exit %d, %q", code, out)
+	}
+}
+
+func TestDemo(t *testing.T) {
+	code, out, errOut := runCmd("demo", "-seed", "1")
+	if code != exitOK || !strings.Contains(out, "Shrunk report") {
+		t.Errorf("demo: exit %d\n%s%s", code, out, errOut)
+	}
+}
+
+// The built command, run as another toolchain's CI would: the exit status carries the verdict.
+func TestBuiltBinary(t *testing.T) {
+	if testing.Short() {
+		t.Skip("builds the command")
+	}
+	bin := filepath.Join(t.TempDir(), "qcheck")
+	if out, err := exec.Command("go", "build", "-o", bin, ".").CombinedOutput(); err != nil {
+		t.Fatalf("go build: %v\n%s", err, out)
+	}
+	out, err := exec.Command(bin, "pairs", "-expect", filepath.Join(corpus, "manifest.txt"), corpus).Output()
+	if err != nil || !strings.Contains(string(out), "41 pairs: 41 passed") {
+		t.Errorf("pairs: %v\n%s", err, out)
+	}
+	a, b := pairFiles("toffoli_one_t_daggered")
+	out, err = exec.Command(bin, "equiv", "-json", a, b).Output()
+	var exit *exec.ExitError
+	if !errors.As(err, &exit) || exit.ExitCode() != exitDiffer || !strings.Contains(string(out), `"equivalent": false`) {
+		t.Errorf("equiv near miss: %v\n%s", err, out)
+	}
+	a, b = pairFiles("toffoli")
+	if err := exec.Command(bin, "equiv", a, b).Run(); err != nil {
+		t.Errorf("equiv toffoli: %v", err)
+	}
+}

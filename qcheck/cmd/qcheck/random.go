@@ -1,0 +1,120 @@
+package main
+
+import (
+	"fmt"
+	"io"
+	"os"
+	"path/filepath"
+	"strings"
+
+	"qcheck.dev/gen"
+	"qcheck.dev/qcheck/circuit"
+	"qcheck.dev/qcheck/qasm"
+)
+
+const randomAbout = `
+Writes random circuits as OpenQASM 2.0, drawn by qcheck's generator (package gen), so that a
+compiler written in any language can be fuzzed: generate, compile with your tool, compare the
+output with qcheck equiv. The same flags and seed always give the same circuits. One circuit goes
+to stdout; with -count N > 1 (or -out), N files DIR/random-SEED.qasm are written for seeds
+SEED, SEED+1, ... Each file starts with a comment holding the command that makes it again.
+Exit 0, or 2 on bad input or usage.`
+
+func random(args []string, stdout, stderr io.Writer) int {
+	c := newCommand("random", "random [flags]", randomAbout, stdout, stderr)
+	qubits := c.fs.Int("qubits", 3, "`N` qubits per circuit")
+	gates := c.fs.Int("gates", 20, "`N` ops per circuit")
+	set := c.fs.String("set", "", "gates to draw from, `G1,G2,...` by OpenQASM name (default: "+strings.Join(gen.DefaultGateSet(), ",")+")")
+	seed := c.fs.Int("seed", 1, "seed `S` of the first circuit; circuit i has seed S+i")
+	count := c.fs.Int("count", 1, "write `N` circuits")
+	out := c.fs.String("out", "", "folder `DIR` to write random-SEED.qasm files into (made if missing)")
+	motifs := c.fs.Int("motifs", 0, "percentage `P` of draws that place a motif (runs, inverse pairs, repeated blocks) instead of one op")
+	if _, code, ok := c.parse(args, 0); !ok {
+		return code
+	}
+	switch {
+	case *qubits <= 0:
+		return c.fail("-qubits %d: want at least 1", *qubits)
+	case *gates < 0:
+		return c.fail("-gates %d: want at least 0", *gates)
+	case *count <= 0:
+		return c.fail("-count %d: want at least 1", *count)
+	case *count > 1 && *out == "":
+		return c.fail("-count %d needs -out DIR", *count)
+	case *motifs < 0 || *motifs > 100:
+		return c.fail("-motifs %d: want a percentage in [0, 100]", *motifs)
+	}
+	opts := gen.Options{Qubits: *qubits, MinOps: *gates, MaxOps: *gates, Motifs: *motifs}
+	if *motifs == 0 {
+		opts.Motifs = -1
+	}
+	if *gates == 0 {
+		opts.MaxOps = 1 // gen reads 0 as its default; the circuit is cut to 0 ops below
+	}
+	if *set != "" {
+		for _, name := range strings.Split(*set, ",") {
+			name = strings.TrimSpace(name)
+			spec, ok := circuit.Lookup(name)
+			if g, err := circuit.NewGate(name, make([]float64, spec.Params)...); !ok || err != nil || !g.Unitary() {
+				return c.fail("-set: %q is not a gate of the standard library", name)
+			}
+			if spec.Qubits > *qubits {
+				return c.fail("-set: %s acts on %d qubits, more than -qubits %d", name, spec.Qubits, *qubits)
+			}
+			opts.GateSet = append(opts.GateSet, name)
+		}
+	}
+	if *out != "" {
+		if err := os.MkdirAll(*out, 0o755); err != nil {
+			return c.fail("%v", err)
+		}
+	}
+	circuits := gen.Circuit(opts)
+	for i := 0; i < *count; i++ {
+		s := *seed + i
+		circ, err := draw(circuits, s)
+		if err != nil {
+			return c.fail("%v", err)
+		}
+		if *gates == 0 {
+			circ.Ops = nil
+		}
+		src, err := qasm.Format(circ)
+		if err != nil {
+			return c.fail("seed %d: %v", s, err)
+		}
+		head := fmt.Sprintf("// qcheck random -qubits %d -gates %d -set %s -motifs %d -seed %d\n",
+			*qubits, *gates, strings.Join(opts.GateSet, ","), *motifs, s)
+		if len(opts.GateSet) == 0 {
+			head = fmt.Sprintf("// qcheck random -qubits %d -gates %d -motifs %d -seed %d\n", *qubits, *gates, *motifs, s)
+		}
+		if *out == "" {
+			fmt.Fprint(stdout, head)
+			stdout.Write(src)
+			continue
+		}
+		name := filepath.Join(*out, fmt.Sprintf("random-%d.qasm", s))
+		if err := os.WriteFile(name, append([]byte(head), src...), 0o644); err != nil {
+			return c.fail("%v", err)
+		}
+		fmt.Fprintln(stdout, name)
+	}
+	return exitOK
+}
+
+// draw takes the circuit of the given seed. The generator reports impossible options (an unknown
+// gate, a gate wider than the register) by panicking outside a test; that becomes an error.
+func draw(g interface {
+	Example(seed ...int) *circuit.Circuit
+}, seed int) (c *circuit.Circuit, err error) {
+	defer func() {
+		if r := recover(); r != nil {
+			msg := fmt.Sprint(r)
+			if i := strings.Index(msg, "gen.Options"); i >= 0 {
+				msg = msg[i:]
+			}
+			err = fmt.Errorf("cannot draw a circuit: %s", msg)
+		}
+	}()
+	return g.Example(seed), nil
+}

@@ -1,0 +1,307 @@
+package qcheck
+
+import (
+	"fmt"
+	"math"
+	"math/cmplx"
+
+	"gonum.org/v1/gonum/mat"
+	"qcheck.dev/metric"
+	"qcheck.dev/qcheck/sim"
+)
+
+// densePair holds the two unitaries of a dense comparison on got's register: u of want (moved
+// onto got's register) and v of got (with its output permutation undone), both row-major
+// dim × dim.
+type densePair struct {
+	u, v   *mat.CDense
+	ud, vd []complex128
+	dim    int
+	f      *frame
+	exact  bool
+}
+
+// compareDense fills r from the two full unitaries.
+func compareDense(cfg *config, f *frame, r *Result, full bool) error {
+	u, err := sim.Unitary(f.want)
+	if err != nil {
+		return fmt.Errorf("qcheck: want: %w", err)
+	}
+	v, err := sim.Unitary(f.got)
+	if err != nil {
+		return fmt.Errorf("qcheck: got: %w", err)
+	}
+	if f.perm != nil {
+		v = undoPermutation(v, f.perm)
+	}
+	flushTiny(u.RawCMatrix().Data)
+	flushTiny(v.RawCMatrix().Data)
+	p := &densePair{u: u, v: v, ud: u.RawCMatrix().Data, vd: v.RawCMatrix().Data, dim: 1 << f.m, f: f, exact: cfg.exactPhase}
+
+	var iso *isometryFit
+	switch {
+	case f.clean:
+		iso = p.fitIsometry()
+		r.OperatorDistance, r.Phase = iso.dist, iso.phase
+	case cfg.exactPhase:
+		r.OperatorDistance = metric.Distance(u, v)
+	default:
+		r.OperatorDistance, r.Phase = metric.PhaseAlign(u, v)
+	}
+	switch {
+	case f.measured != nil:
+		// Decided below from the distributions.
+	case cfg.measure == Diamond:
+		r.Distance = metric.Diamond(u, v)
+	case cfg.measure == AverageFidelity:
+		r.Distance = 1 - metric.AverageFidelity(u, v)
+	default:
+		r.Distance = r.OperatorDistance
+	}
+	if f.measured == nil {
+		r.Equivalent = r.Distance <= cfg.tol
+		if !full && r.Equivalent {
+			return nil
+		}
+	}
+
+	// The evidence: a witness input, a measurement that tells the circuits apart, and blame.
+	if iso != nil {
+		r.Witness = iso.witness
+	} else {
+		r.Phase, r.Witness = p.unitaryWitness()
+	}
+	r.Witness = p.simplerWitness(r.Witness)
+	r.WitnessGap = p.deviation(r.Witness)
+	if f.measured != nil {
+		r.Measure = Distribution
+		r.Distance, r.Measurement = p.distributions(r.Witness)
+		r.Equivalent = r.Distance <= cfg.tol
+		if !full && r.Equivalent {
+			return nil
+		}
+	} else {
+		r.Measurement = p.measurement(r.Witness)
+	}
+	r.Blame = blame(cfg, f, r.Want, r.Got)
+	return nil
+}
+
+// tinyEntry is the size below which matrix entries are set to zero before any eigen-solver sees
+// them. Angles such as 1e-279, which rapid draws at the edges of a float range, otherwise leave
+// entries whose products underflow to subnormal numbers, on which gonum's tridiagonal QR
+// iteration (Dsterf) has been seen to loop without end. Changing entries of this size moves a
+// distance by at most 2^n·1e-30, far below any tolerance.
+const tinyEntry = 1e-30
+
+// flushTiny sets the real and imaginary parts below tinyEntry to zero.
+func flushTiny(data []complex128) {
+	for i, z := range data {
+		re, im := real(z), imag(z)
+		if math.Abs(re) < tinyEntry || math.Abs(im) < tinyEntry {
+			if math.Abs(re) < tinyEntry {
+				re = 0
+			}
+			if math.Abs(im) < tinyEntry {
+				im = 0
+			}
+			data[i] = complex(re, im)
+		}
+	}
+}
+
+// undoPermutation returns the unitary of got followed by the relabelling that puts logical qubit
+// i, found on physical qubit perm[i], back on qubit i: row x of v becomes row y, where bit i of y
+// is bit perm[i] of x.
+func undoPermutation(v *mat.CDense, perm []int) *mat.CDense {
+	dim, _ := v.Dims()
+	src := v.RawCMatrix().Data
+	dst := make([]complex128, len(src))
+	for x := 0; x < dim; x++ {
+		y := 0
+		for i, p := range perm {
+			y |= (x >> p & 1) << i
+		}
+		copy(dst[y*dim:(y+1)*dim], src[x*dim:(x+1)*dim])
+	}
+	return mat.NewCDense(dim, dim, dst)
+}
+
+// unitaryWitness returns the optimal global phase and the witness of two full unitaries.
+func (p *densePair) unitaryWitness() (phase float64, psi []complex128) {
+	if p.exact {
+		// With the phase fixed, the witness is the eigenvector of V†U whose eigenphase is
+		// farthest from 0, which is the isometry fit with every input allowed.
+		return 0, p.fitIsometry().witness
+	}
+	psi, _ = metric.Witness(p.u, p.v)
+	_, phase = metric.PhaseAlign(p.u, p.v)
+	return phase, psi
+}
+
+// apply returns m·psi for a row-major dim × dim matrix.
+func apply(m []complex128, dim int, psi []complex128) []complex128 {
+	out := make([]complex128, dim)
+	for y := 0; y < dim; y++ {
+		var s complex128
+		row := m[y*dim : (y+1)*dim]
+		for x, a := range psi {
+			s += row[x] * a
+		}
+		out[y] = s
+	}
+	return out
+}
+
+// deviation returns how far apart the outputs of the two circuits are for input ψ: with a = u·ψ
+// and b = v·ψ, ‖a − b‖ with exact phase, else min over φ of ‖a − e^{iφ}b‖ = √(2 − 2|⟨a|b⟩|). It
+// is computed directly from ψ, so it is a certified lower bound on the operator-norm distance
+// whatever the eigen-solver did (for the phase-free distance by the minimax inequality
+// max_ψ min_φ ≤ min_φ max_ψ).
+func (p *densePair) deviation(psi []complex128) float64 {
+	if psi == nil {
+		return 0
+	}
+	a, b := apply(p.ud, p.dim, psi), apply(p.vd, p.dim, psi)
+	return p.deviationOf(a, b)
+}
+
+func (p *densePair) deviationOf(a, b []complex128) float64 {
+	if p.exact {
+		s := 0.0
+		for i := range a {
+			s += abs2(a[i] - b[i])
+		}
+		return math.Sqrt(s)
+	}
+	// The best phase is that of ⟨b|a⟩; the difference is formed directly rather than through
+	// 2 − 2|⟨a|b⟩|, which loses all digits of distances near 1e-8.
+	var overlap complex128
+	for i := range a {
+		overlap += cmplx.Conj(b[i]) * a[i]
+	}
+	ph := complex(1, 0)
+	if overlap != 0 {
+		ph = overlap / complex(cmplx.Abs(overlap), 0)
+	}
+	s := 0.0
+	for i := range a {
+		s += abs2(a[i] - ph*b[i])
+	}
+	return math.Sqrt(s)
+}
+
+// simpleWitnessDim is the largest register dimension for which simpler witnesses are sought.
+const simpleWitnessDim = 32
+
+// simplerWitness looks for a witness a person can read, a basis state |x⟩ or an equal
+// superposition (|x⟩ + c|y⟩)/√2 with c ∈ {1, i, −1, −i}, that exposes the difference as well as
+// psi does (to 1e-9 relative); it returns psi when there is none. Eigenvectors of degenerate
+// eigenspaces are otherwise arbitrary mixtures.
+func (p *densePair) simplerWitness(psi []complex128) []complex128 {
+	if psi == nil || p.dim > simpleWitnessDim {
+		return psi
+	}
+	target := p.deviation(psi) * (1 - 1e-9)
+	if target <= 0 {
+		return psi
+	}
+	var cols []int
+	for x := 0; x < p.dim; x++ {
+		if p.allowed(x) {
+			cols = append(cols, x)
+		}
+	}
+	a, b := make([]complex128, p.dim), make([]complex128, p.dim)
+	for _, x := range cols {
+		for y := 0; y < p.dim; y++ {
+			a[y], b[y] = p.ud[y*p.dim+x], p.vd[y*p.dim+x]
+		}
+		if p.deviationOf(a, b) >= target {
+			return basisState(p.dim, x)
+		}
+	}
+	s := complex(1/math.Sqrt2, 0)
+	for i, x := range cols {
+		for _, y := range cols[i+1:] {
+			for _, c := range []complex128{1, 1i, -1, -1i} {
+				for r := 0; r < p.dim; r++ {
+					a[r] = s * (p.ud[r*p.dim+x] + c*p.ud[r*p.dim+y])
+					b[r] = s * (p.vd[r*p.dim+x] + c*p.vd[r*p.dim+y])
+				}
+				if p.deviationOf(a, b) >= target {
+					w := make([]complex128, p.dim)
+					w[x], w[y] = s, s*c
+					return w
+				}
+			}
+		}
+	}
+	return psi
+}
+
+// allowed reports whether basis input x may be prepared: with clean ancillas only those with the
+// ancillas in |0⟩.
+func (p *densePair) allowed(x int) bool { return !p.f.clean || x&p.f.ancMask == 0 }
+
+// measurement finds a concrete experiment that tells the circuits apart: the computational-basis
+// input and outcome whose probabilities differ most, the witness input with the outcome whose
+// probabilities differ most, or, when relative phases hide the difference from the
+// computational basis, the projection of the witness's output onto want's output.
+func (p *densePair) measurement(psi []complex128) Measurement {
+	best := Measurement{InputBasis: -1}
+	bestGap := -1.0
+	for x := 0; x < p.dim; x++ {
+		if !p.allowed(x) {
+			continue
+		}
+		for y := 0; y < p.dim; y++ {
+			pu, pv := abs2(p.ud[y*p.dim+x]), abs2(p.vd[y*p.dim+x])
+			if g := math.Abs(pu - pv); g > bestGap+1e-12 {
+				bestGap = g
+				best = Measurement{InputBasis: x, Basis: true, Outcome: y, Want: pu, Got: pv}
+			}
+		}
+	}
+	if best.InputBasis >= 0 {
+		best.Input = basisState(p.dim, best.InputBasis)
+	}
+	if psi == nil {
+		return best
+	}
+	a, b := apply(p.ud, p.dim, psi), apply(p.vd, p.dim, psi)
+	for y := range a {
+		pu, pv := abs2(a[y]), abs2(b[y])
+		if g := math.Abs(pu - pv); g > bestGap+1e-12 {
+			bestGap = g
+			best = Measurement{Input: psi, InputBasis: -1, Basis: true, Outcome: y, Want: pu, Got: pv}
+		}
+	}
+	var overlap complex128
+	for y := range a {
+		overlap += cmplx.Conj(a[y]) * b[y]
+	}
+	norm := 0.0
+	for _, z := range a {
+		norm += abs2(z)
+	}
+	if proj := abs2(overlap) / norm; 1-proj > 2*bestGap {
+		best, bestGap = Measurement{Input: psi, InputBasis: -1, Want: 1, Got: proj}, 1-proj
+	}
+	if bestGap < indistinguishable {
+		// Only a global phase separates the circuits: no measurement of them alone can.
+		return Measurement{InputBasis: -1}
+	}
+	return best
+}
+
+// indistinguishable is the probability difference below which no measurement is reported.
+const indistinguishable = 1e-12
+
+func abs2(z complex128) float64 { return real(z)*real(z) + imag(z)*imag(z) }
+
+func basisState(dim, x int) []complex128 {
+	s := make([]complex128, dim)
+	s[x] = 1
+	return s
+}

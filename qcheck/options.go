@@ -1,0 +1,276 @@
+package qcheck
+
+import (
+	"fmt"
+	"math"
+	"strings"
+)
+
+// An Option changes how two circuits are compared: the tolerance, whether global phase counts,
+// how got's qubits relate to want's, what is observed, the measure and the engine. Options are
+// values that compose: pass several to Compare, Equivalent or Preserves, or bundle them with
+// Options. Later options override earlier ones of the same kind.
+type Option interface {
+	apply(*config) error
+}
+
+// Options bundles several options into one, so that a team can keep its usual settings in a
+// variable: qcheck.Options{qcheck.Tolerance(1e-6), qcheck.ExactPhase()}.
+type Options []Option
+
+func (o Options) apply(c *config) error {
+	for _, opt := range o {
+		if opt == nil {
+			continue
+		}
+		if err := opt.apply(c); err != nil {
+			return err
+		}
+	}
+	return nil
+}
+
+// optionFunc turns a function into an Option.
+type optionFunc func(*config) error
+
+func (f optionFunc) apply(c *config) error { return f(c) }
+
+// DefaultTolerance is the tolerance ε used when no Tolerance option is given: far above the
+// floating-point noise of exact rewrites of circuits of a few thousand gates, far below any real
+// bug (see DESIGN.md, "Default tolerance").
+const DefaultTolerance = 1e-9
+
+// Tolerance sets ε, the largest distance at which two circuits still count as equivalent, in the
+// units of the measure (operator norm by default). It must be positive and finite; Compare
+// returns an error otherwise. Approximate passes (synthesis to a finite gate set, rotation
+// merging with rounding) pass the accuracy they promise.
+func Tolerance(eps float64) Option {
+	return optionFunc(func(c *config) error {
+		if !(eps > 0) || math.IsInf(eps, 0) {
+			return fmt.Errorf("qcheck: Tolerance(%v): the tolerance must be positive and finite", eps)
+		}
+		c.tol = eps
+		return nil
+	})
+}
+
+// ExactPhase makes a global phase count as a difference: the distance is ‖U − V‖ instead of
+// min over φ of ‖U − e^{iφ}V‖. Use it for a pass whose output is later controlled (a global phase
+// of a sub-circuit becomes a relative phase under control). It applies to the operator-norm
+// measure only; the diamond distance and the average fidelity are blind to global phase by
+// definition, and Compare refuses the combination.
+func ExactPhase() Option {
+	return optionFunc(func(c *config) error {
+		c.exactPhase = true
+		return nil
+	})
+}
+
+// OutputPermutation states where a routing pass leaves each qubit: logical qubit i ends on
+// physical qubit perm[i] of got's register. Compare undoes the permutation on got's output before
+// comparing, so a router that inserts SWAPs and leaves its qubits permuted is equivalent when the
+// permutation is the one it reports. perm must have one entry per qubit of got and be a
+// permutation of 0..n−1. Passes that compute their layout report it through a LayoutPass.
+func OutputPermutation(perm []int) Option {
+	p := append([]int(nil), perm...)
+	return optionFunc(func(c *config) error {
+		c.perm = p
+		return nil
+	})
+}
+
+// AncillaState says what a borrowed qubit may hold when a circuit starts.
+type AncillaState int
+
+const (
+	// Clean ancillas start in |0⟩ and must be returned to |0⟩. Only inputs with the ancillas in
+	// |0⟩ are compared, and any amplitude left outside |0⟩ on them counts towards the distance.
+	Clean AncillaState = iota + 1
+	// Dirty ancillas start in any state, possibly entangled with the data, and must be restored:
+	// got must equal want ⊗ I on the ancillas, up to global phase unless ExactPhase.
+	Dirty
+)
+
+func (s AncillaState) String() string {
+	switch s {
+	case Clean:
+		return "clean"
+	case Dirty:
+		return "dirty"
+	}
+	return fmt.Sprintf("AncillaState(%d)", int(s))
+}
+
+// Ancillas declares qubits of got's register that a decomposition borrows, and whether they
+// start Clean or Dirty. want may be narrower than got by exactly these qubits, in which case
+// want's qubit i is the i-th qubit of got that is not an ancilla; or as wide as got, in which case
+// both circuits are compared on the same register with the same ancillas. The option may be given
+// more than once; every use adds qubits, and all ancillas must be in the same state.
+func Ancillas(qubits []int, state AncillaState) Option {
+	qs := append([]int(nil), qubits...)
+	return optionFunc(func(c *config) error {
+		if state != Clean && state != Dirty {
+			return fmt.Errorf("qcheck: Ancillas(%v, %v): the state must be Clean or Dirty", qs, state)
+		}
+		if len(c.ancillas) > 0 && c.ancillaState != state {
+			return fmt.Errorf("qcheck: Ancillas(%v, %v): earlier ancillas %v are %v; mixing clean and dirty ancillas is not supported", qs, state, c.ancillas, c.ancillaState)
+		}
+		c.ancillaState = state
+		c.ancillas = append(c.ancillas, qs...)
+		return nil
+	})
+}
+
+// Measured compares only what measuring the given qubits of want (in the computational basis, at
+// the end) would show: the output distributions, from every computational-basis input and from
+// the inputs that separate the two unitaries most. The distance is then the largest
+// total-variation distance found, compared against the tolerance; the result also gives the
+// operator-norm distance and its bound 2ε on any probability difference. Use it for passes that
+// only promise to keep measurement statistics, such as dropping diagonal gates before a final
+// measurement. With no qubits, every qubit of want is measured.
+func Measured(qubits ...int) Option {
+	qs := append([]int(nil), qubits...)
+	return optionFunc(func(c *config) error {
+		c.measured = qs
+		c.measuredSet = true
+		return nil
+	})
+}
+
+// Measure names the distance that decides the verdict.
+type Measure int
+
+const (
+	// OperatorNorm is min over φ of ‖U − e^{iφ}V‖ (or ‖U − V‖ with ExactPhase): the largest change
+	// of any output state's amplitude vector. The default.
+	OperatorNorm Measure = iota
+	// Diamond is the diamond-norm distance of the two unitary channels (Watrous 2018, §3.3): the
+	// best advantage in telling them apart with an entangled probe. Between 0 and 2.
+	Diamond
+	// AverageFidelity uses 1 − F_avg, the average gate infidelity (Nielsen, Phys. Lett. A 303
+	// (2002)): what randomized benchmarking reports. Between 0 and d/(d+1).
+	AverageFidelity
+	// Distribution is the largest total-variation distance of measured output distributions; it
+	// is the measure Measured selects and cannot be chosen with UseMeasure.
+	Distribution
+)
+
+func (m Measure) String() string {
+	switch m {
+	case OperatorNorm:
+		return "operator norm"
+	case Diamond:
+		return "diamond norm"
+	case AverageFidelity:
+		return "average infidelity"
+	case Distribution:
+		return "total variation"
+	}
+	return fmt.Sprintf("Measure(%d)", int(m))
+}
+
+// UseMeasure chooses the measure that decides the verdict (OperatorNorm by default). The tolerance
+// is read in the units of that measure.
+func UseMeasure(m Measure) Option {
+	return optionFunc(func(c *config) error {
+		if m != OperatorNorm && m != Diamond && m != AverageFidelity {
+			return fmt.Errorf("qcheck: UseMeasure(%v): choose OperatorNorm, Diamond or AverageFidelity (Measured selects the distribution measure)", m)
+		}
+		c.measure = m
+		return nil
+	})
+}
+
+// Engine names the method that gives circuits their meaning for a comparison.
+type Engine int
+
+const (
+	// Auto lets Compare choose the engine from the circuits' width and gates. The default.
+	Auto Engine = iota
+	// Dense builds both unitaries as 2^n × 2^n matrices: exact to floating-point rounding,
+	// practical up to about 12 qubits.
+	Dense
+	// Tableau compares how two Clifford circuits conjugate the Pauli generators X_q and Z_q
+	// (stabilizer tableaux, Aaronson & Gottesman 2004): exact, for thousands of qubits, and for
+	// Clifford circuits only.
+	Tableau
+	// MatrixFree estimates the phase-free distance from runs of both circuits on statevectors
+	// (a Krylov iteration on V†U), without forming either matrix: for 13 to about 24 qubits. Its
+	// witness certifies a lower bound; its upper bound holds with a stated probability.
+	MatrixFree
+)
+
+func (e Engine) String() string {
+	switch e {
+	case Auto:
+		return "auto"
+	case Dense:
+		return "dense"
+	case Tableau:
+		return "tableau"
+	case MatrixFree:
+		return "matrix-free"
+	}
+	return fmt.Sprintf("Engine(%d)", int(e))
+}
+
+// UseEngine overrides the automatic choice of engine.
+func UseEngine(e Engine) Option {
+	return optionFunc(func(c *config) error {
+		if e < Auto || e > MatrixFree {
+			return fmt.Errorf("qcheck: UseEngine(%v): unknown engine", e)
+		}
+		c.engine = e
+		return nil
+	})
+}
+
+// config is the resolved set of options.
+type config struct {
+	tol          float64
+	exactPhase   bool
+	perm         []int
+	ancillas     []int
+	ancillaState AncillaState
+	measured     []int
+	measuredSet  bool
+	measure      Measure
+	engine       Engine
+}
+
+// newConfig applies opts over the defaults and checks that they fit together; checks that need
+// the circuits (ranges, widths) are done by layoutOf.
+func newConfig(opts []Option) (*config, error) {
+	c := &config{tol: DefaultTolerance}
+	if err := Options(opts).apply(c); err != nil {
+		return nil, err
+	}
+	if c.exactPhase && c.measure != OperatorNorm {
+		return nil, fmt.Errorf("qcheck: ExactPhase with the %v measure: that measure ignores global phase by definition; use OperatorNorm", c.measure)
+	}
+	if c.measuredSet && c.measure != OperatorNorm {
+		return nil, fmt.Errorf("qcheck: Measured with UseMeasure(%v): measured comparisons use the total-variation distance", c.measure)
+	}
+	if len(c.ancillas) > 0 && c.ancillaState == Clean && c.measure != OperatorNorm {
+		return nil, fmt.Errorf("qcheck: clean ancillas with the %v measure: the restricted map need not be unitary; use OperatorNorm", c.measure)
+	}
+	return c, nil
+}
+
+// describe lists the non-default settings, for reports.
+func (c *config) describe() string {
+	var parts []string
+	if c.exactPhase {
+		parts = append(parts, "exact phase")
+	}
+	if c.perm != nil {
+		parts = append(parts, fmt.Sprintf("output permutation %v", c.perm))
+	}
+	if len(c.ancillas) > 0 {
+		parts = append(parts, fmt.Sprintf("%v ancillas %v", c.ancillaState, c.ancillas))
+	}
+	if c.measuredSet {
+		parts = append(parts, fmt.Sprintf("measured qubits %v", c.measured))
+	}
+	return strings.Join(parts, ", ")
+}

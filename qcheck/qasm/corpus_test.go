@@ -1,0 +1,122 @@
+package qasm
+
+import (
+	"bufio"
+	"math"
+	"os"
+	"path/filepath"
+	"strconv"
+	"strings"
+	"testing"
+
+	"gonum.org/v1/gonum/mat"
+	"qcheck.dev/metric"
+	"qcheck.dev/qcheck/sim"
+)
+
+const corpusDir = "../../testdata/identities"
+
+// corpusEntry is one line of testdata/identities/manifest.txt, written by distances.py (NumPy).
+type corpusEntry struct {
+	name       string
+	equivalent bool
+	distance   float64
+}
+
+func readManifest(t *testing.T) []corpusEntry {
+	t.Helper()
+	f, err := os.Open(filepath.Join(corpusDir, "manifest.txt"))
+	if err != nil {
+		t.Fatal(err)
+	}
+	defer f.Close()
+	var out []corpusEntry
+	s := bufio.NewScanner(f)
+	for s.Scan() {
+		line := strings.TrimSpace(s.Text())
+		if line == "" || line[0] == '#' {
+			continue
+		}
+		fields := strings.Fields(line)
+		if len(fields) != 3 || (fields[1] != "equivalent" && fields[1] != "different") {
+			t.Fatalf("manifest line %q: want name, verdict, distance", line)
+		}
+		d, err := strconv.ParseFloat(fields[2], 64)
+		if err != nil {
+			t.Fatalf("manifest line %q: %v", line, err)
+		}
+		out = append(out, corpusEntry{fields[0], fields[1] == "equivalent", d})
+	}
+	return out
+}
+
+// Every .qasm file of the corpus belongs to a pair listed in the manifest, and there are at least
+// 25 equivalent pairs and a near miss for each kind of error the issue names.
+func TestCorpusComplete(t *testing.T) {
+	entries := readManifest(t)
+	listed := map[string]bool{}
+	equivalent := 0
+	for _, e := range entries {
+		listed[e.name] = true
+		if e.equivalent {
+			equivalent++
+		}
+	}
+	if equivalent < 25 {
+		t.Errorf("%d equivalent pairs, want at least 25", equivalent)
+	}
+	for _, miss := range []string{"toffoli_one_t_daggered", "cp_in_place_of_crz", "cnot_swapped_roles"} {
+		if !listed[miss] {
+			t.Errorf("near miss %s missing", miss)
+		}
+	}
+	files, _ := filepath.Glob(filepath.Join(corpusDir, "*.qasm"))
+	for _, f := range files {
+		base := filepath.Base(f)
+		name := strings.TrimSuffix(strings.TrimSuffix(base, ".before.qasm"), ".after.qasm")
+		if name == base || !listed[name] {
+			t.Errorf("%s is not half of a pair in the manifest", base)
+		}
+	}
+	if len(files) != 2*len(entries) {
+		t.Errorf("%d files for %d pairs", len(files), len(entries))
+	}
+}
+
+func corpusUnitary(t *testing.T, name string) *mat.CDense {
+	t.Helper()
+	src, err := os.ReadFile(filepath.Join(corpusDir, name))
+	if err != nil {
+		t.Fatal(err)
+	}
+	if !strings.Contains(string(src), "Source:") {
+		t.Errorf("%s does not name its source", name)
+	}
+	c, err := Parse(src)
+	if err != nil {
+		t.Fatalf("%s: %v", name, err)
+	}
+	u, err := sim.Unitary(c)
+	if err != nil {
+		t.Fatalf("%s: %v", name, err)
+	}
+	return u
+}
+
+// Every pair parses, and its phase-free operator-norm distance (metric.PhaseDistance on the
+// sim.Unitary matrices) agrees with the one NumPy computed independently (manifest.txt, written
+// by testdata/identities/distances.py), to 1e-9: far above rounding for these few gates, far
+// below the smallest near miss (0.17).
+func TestCorpusDistances(t *testing.T) {
+	for _, e := range readManifest(t) {
+		u := corpusUnitary(t, e.name+".before.qasm")
+		v := corpusUnitary(t, e.name+".after.qasm")
+		d := metric.PhaseDistance(u, v)
+		if math.Abs(d-e.distance) > 1e-9 {
+			t.Errorf("%s: phase-free distance %.15g, NumPy gives %.15g", e.name, d, e.distance)
+		}
+		if e.equivalent != (d <= 1e-9) {
+			t.Errorf("%s: distance %.3g contradicts the verdict %v in the manifest", e.name, d, e.equivalent)
+		}
+	}
+}

@@ -1,0 +1,199 @@
+package qasm
+
+import "qcheck.dev/qcheck/circuit"
+
+// reserved are the words a gate, parameter or qubit name may not take.
+var reserved = map[string]bool{
+	"OPENQASM": true, "include": true, "qreg": true, "creg": true, "gate": true, "opaque": true,
+	"if": true, "barrier": true, "measure": true, "reset": true, "U": true, "CX": true, "pi": true,
+	"sin": true, "cos": true, "tan": true, "exp": true, "ln": true, "sqrt": true,
+}
+
+// gateDecl reads gate name[(params)] qubits { body } and records the definition. A definition
+// may replace a qelib1 gate (libraries differ between toolchains) but not U, CX or an earlier
+// definition of the source. A definition that is token for token the one Format writes for a
+// gate of package circuit outside qelib1 (iswap, iswapdg, ccz, ryy) is read as that gate, so
+// that Parse(Format(c)) gives back c.
+func (p *parser) gateDecl() error {
+	start := p.tok.off
+	if err := p.advance(); err != nil {
+		return err
+	}
+	name, err := p.ident("a gate name")
+	if err != nil {
+		return err
+	}
+	if reserved[string(name.text)] {
+		return p.errorf(name.off, "%s is a reserved word and cannot name a gate", name.text)
+	}
+	if old, ok := p.gates[string(name.text)]; ok && old.user {
+		return p.errorf(name.off, "gate %s is already defined", name.text)
+	}
+	def := &gateDef{name: string(name.text), user: true}
+	var params []string
+	if p.tok.is("(") {
+		if err := p.advance(); err != nil {
+			return err
+		}
+		if !p.tok.is(")") {
+			if params, err = p.names("parameter", nil); err != nil {
+				return err
+			}
+		}
+		if err := p.expect(")", "after the parameters"); err != nil {
+			return err
+		}
+	}
+	qubits, err := p.names("qubit argument", params)
+	if err != nil {
+		return err
+	}
+	def.nparams, def.nqubits = len(params), len(qubits)
+	if err := p.expect("{", "to open the gate body"); err != nil {
+		return err
+	}
+	for !p.tok.is("}") {
+		if p.tok.kind == tEOF {
+			return p.errorf(p.tok.off, "gate %s: body not closed with }", def.name)
+		}
+		b, err := p.bodyStatement(def.name, params, qubits)
+		if err != nil {
+			return err
+		}
+		def.body = append(def.body, b)
+	}
+	end := p.tok.off + 1
+	if err := p.advance(); err != nil {
+		return err
+	}
+	if native := canonicalFor(def.name, p.src[start:end]); native != "" {
+		def.native, def.body = native, nil
+	}
+	p.gates[def.name] = def
+	return nil
+}
+
+// names reads a comma-separated list of distinct identifiers, none reserved and none in taken.
+func (p *parser) names(what string, taken []string) ([]string, error) {
+	var out []string
+	for {
+		t, err := p.ident("a " + what)
+		if err != nil {
+			return nil, err
+		}
+		s := string(t.text)
+		if reserved[s] {
+			return nil, p.errorf(t.off, "%s is a reserved word and cannot name a %s", s, what)
+		}
+		for _, o := range append(out, taken...) {
+			if o == s {
+				return nil, p.errorf(t.off, "%s is used twice in the gate's signature", s)
+			}
+		}
+		out = append(out, s)
+		if !p.tok.is(",") {
+			return out, nil
+		}
+		if err := p.advance(); err != nil {
+			return nil, err
+		}
+	}
+}
+
+// bodyStatement reads one call or barrier inside a gate body; operands are the gate's own qubit
+// arguments, without indices.
+func (p *parser) bodyStatement(gate string, params, qubits []string) (bodyCall, error) {
+	t := p.tok
+	if t.kind != tIdent {
+		return bodyCall{}, p.errorf(t.off, "expected a gate call in the body of %s, found %s", gate, t.describe())
+	}
+	var b bodyCall
+	want := -1
+	switch string(t.text) {
+	case "barrier":
+		if err := p.advance(); err != nil {
+			return b, err
+		}
+	case "measure", "reset", "if", "opaque", "gate", "qreg", "creg", "include":
+		return b, p.errorf(t.off, "%s is not allowed in a gate body", t.text)
+	default:
+		def, ok := p.gates[string(t.text)]
+		if !ok {
+			if string(t.text) == gate {
+				return b, p.errorf(t.off, "gate %s calls itself; a gate can only call gates defined before it", gate)
+			}
+			return b, p.unknownGate(t)
+		}
+		if err := p.advance(); err != nil {
+			return b, err
+		}
+		args, err := p.angles(params)
+		if err != nil {
+			return b, err
+		}
+		if len(args) != def.nparams {
+			return b, p.errorf(t.off, "gate %s takes %d angle(s), got %d", t.text, def.nparams, len(args))
+		}
+		b.def, b.args, want = def, args, def.nqubits
+	}
+	for {
+		q, err := p.ident("a qubit argument of " + gate)
+		if err != nil {
+			return b, err
+		}
+		k := -1
+		for i, name := range qubits {
+			if name == string(q.text) {
+				k = i
+			}
+		}
+		if k < 0 {
+			if p.tok.is("[") {
+				return b, p.errorf(p.tok.off, "indexing is not allowed in a gate body; use the gate's qubit arguments")
+			}
+			return b, p.errorf(q.off, "%s is not a qubit argument of gate %s", q.text, gate)
+		}
+		if p.tok.is("[") {
+			return b, p.errorf(p.tok.off, "indexing is not allowed in a gate body; use the gate's qubit arguments")
+		}
+		for _, j := range b.qubits {
+			if j == k {
+				return b, p.errorf(q.off, "qubit %s used twice in one call", q.text)
+			}
+		}
+		b.qubits = append(b.qubits, k)
+		if !p.tok.is(",") {
+			break
+		}
+		if err := p.advance(); err != nil {
+			return b, err
+		}
+	}
+	if want >= 0 && len(b.qubits) != want {
+		return b, p.errorf(t.off, "gate %s acts on %d qubit(s), got %d operand(s)", t.text, want, len(b.qubits))
+	}
+	return b, p.expect(";", "after the call")
+}
+
+// canonicalFor returns the circuit gate that the definition text def stands for, when name is a
+// gate Format defines and def is token for token Format's definition; else "".
+func canonicalFor(name string, def []byte) string {
+	want, ok := formatDefs[name]
+	if !ok {
+		return ""
+	}
+	if _, ok := circuit.Lookup(name); !ok {
+		return ""
+	}
+	a, b := lexer{src: def}, lexer{src: []byte(want)}
+	for {
+		x, errx := a.next()
+		y, erry := b.next()
+		if errx != nil || erry != nil || x.kind != y.kind || string(x.text) != string(y.text) {
+			return ""
+		}
+		if x.kind == tEOF {
+			return name
+		}
+	}
+}

@@ -1,0 +1,65 @@
+package qasm_test
+
+import (
+	"fmt"
+
+	"qcheck.dev/qcheck/circuit"
+	"qcheck.dev/qcheck/qasm"
+)
+
+func ExampleParseProgram() {
+	src := []byte(`OPENQASM 2.0;
+include "qelib1.inc";
+qreg data[2];
+qreg anc[1];
+creg out[1];
+gate majority a, b, c { cx c, b; cx c, a; ccx a, b, c; }
+majority data[0], data[1], anc[0];
+measure anc[0] -> out[0];
+`)
+	p, err := qasm.ParseProgram(src)
+	if err != nil {
+		fmt.Println(err)
+		return
+	}
+	anc, _ := p.Qubit("anc", 0)
+	fmt.Println("anc[0] is qubit", anc)
+	for i, op := range p.Circuit.Ops {
+		fmt.Printf("line %d: %v\n", p.Lines[i], op)
+	}
+	// Output:
+	// anc[0] is qubit 2
+	// line 7: cx q2,q1
+	// line 7: cx q2,q0
+	// line 7: ccx q0,q1,q2
+	// line 8: measure q2 -> c0
+}
+
+func ExampleFormat() {
+	c := circuit.New(2).H(0).CX(0, 1).RZ(0.25, 1).ISWAP(0, 1)
+	src, err := qasm.Format(c)
+	if err != nil {
+		fmt.Println(err)
+		return
+	}
+	fmt.Print(string(src))
+	back, _ := qasm.Parse(src)
+	fmt.Println("round trip equal:", back.Equal(c))
+	// Output:
+	// OPENQASM 2.0;
+	// include "qelib1.inc";
+	// gate iswap a,b { s a; s b; h a; cx a,b; cx b,a; h b; }
+	// qreg q[2];
+	// h q[0];
+	// cx q[0],q[1];
+	// rz(0.25) q[1];
+	// iswap q[0],q[1];
+	// round trip equal: true
+}
+
+func ExampleParse_error() {
+	_, err := qasm.Parse([]byte("OPENQASM 2.0;\ninclude \"qelib1.inc\";\nqreg q[2];\ncreg c[2];\nif (c == 1) x q[0];\n"))
+	fmt.Println(err)
+	// Output:
+	// qasm: 5:1: if is not supported: a classically controlled operation has no unitary
+}

@@ -1,0 +1,588 @@
+package qasm
+
+import (
+	"bytes"
+	"fmt"
+	"math"
+	"strconv"
+
+	"qcheck.dev/qcheck/circuit"
+)
+
+// Parse reads an OpenQASM 2.0 source and returns its circuit, registers flattened in order of
+// declaration (see ParseProgram for the mapping). Errors are *Error values with the line and
+// column of the problem.
+func Parse(src []byte, opts ...Option) (*circuit.Circuit, error) {
+	p, err := ParseProgram(src, opts...)
+	if err != nil {
+		return nil, err
+	}
+	return p.Circuit, nil
+}
+
+// ParseProgram reads an OpenQASM 2.0 source and returns the circuit with its registers and the
+// source line of every op. What it accepts and how each qelib1 gate maps onto the gates of
+// package circuit is described in the package documentation.
+func ParseProgram(src []byte, opts ...Option) (*Program, error) {
+	cfg := config{maxOps: DefaultMaxOps}
+	for _, o := range opts {
+		o(&cfg)
+	}
+	p := &parser{src: src, lx: lexer{src: src}, cfg: cfg, gates: map[string]*gateDef{},
+		regs: map[string]*register{}}
+	// Most statements make one op: size the op list once instead of growing it.
+	if n := bytes.Count(src, []byte{';'}); n <= cfg.maxOps {
+		p.ops, p.offs = make([]circuit.Op, 0, n), make([]int, 0, n)
+	}
+	for name, d := range builtins() {
+		if d.keyword {
+			p.gates[name] = d
+		}
+	}
+	if err := p.advance(); err != nil {
+		return nil, err
+	}
+	if err := p.program(); err != nil {
+		return nil, err
+	}
+	c := circuit.New(p.nq)
+	c.Ops = p.ops
+	c.SetClbits(p.nc)
+	prog := &Program{Circuit: c, Lines: make([]int, len(p.offs))}
+	for _, r := range p.order {
+		reg := Register{Name: r.name, Size: r.size, Start: r.start}
+		if r.quantum {
+			prog.Qregs = append(prog.Qregs, reg)
+		} else {
+			prog.Cregs = append(prog.Cregs, reg)
+		}
+	}
+	// Offsets never decrease, so one pass over the source numbers every op's line.
+	line, at := 1, 0
+	for i, off := range p.offs {
+		for ; at < off; at++ {
+			if src[at] == '\n' {
+				line++
+			}
+		}
+		prog.Lines[i] = line
+	}
+	return prog, nil
+}
+
+type register struct {
+	name        string
+	quantum     bool
+	start, size int
+}
+
+// gateDef is a gate that a source can call: a gate of package circuit (native), or a definition
+// whose body is expanded at each call.
+type gateDef struct {
+	name    string
+	native  string // the circuit gate a call becomes; empty for a definition to expand
+	nparams int
+	nqubits int
+	body    []bodyCall
+	keyword bool // U and CX, which exist without any include
+	hidden  bool // a helper of the built-in library that sources cannot call
+	user    bool // defined by the source itself
+}
+
+// bodyCall is one statement in a gate body: a call (def set) or a barrier (def nil).
+type bodyCall struct {
+	def    *gateDef
+	args   []*expr
+	qubits []int // positions in the enclosing gate's qubit list
+}
+
+type parser struct {
+	src   []byte
+	lx    lexer
+	tok   token
+	cfg   config
+	gates map[string]*gateDef
+	regs  map[string]*register
+	order []*register
+	nq    int
+	nc    int
+	ops   []circuit.Op
+	offs  []int // source offset of the statement that made each op
+	stmt  int   // offset of the statement being read
+	// scratch buffers reused across statements
+	argBuf []operand
+}
+
+// operand is a statement argument: a whole register or one element.
+type operand struct {
+	reg   *register
+	index int // -1 for the whole register
+	off   int
+}
+
+func (p *parser) advance() error {
+	t, err := p.lx.next()
+	if err != nil {
+		return err
+	}
+	p.tok = t
+	return nil
+}
+
+func (p *parser) errorf(off int, format string, args ...any) *Error {
+	line, col := position(p.src, off)
+	return &Error{Line: line, Col: col, Msg: fmt.Sprintf(format, args...)}
+}
+
+// expect consumes the punctuation or keyword s, or fails saying what was found instead.
+func (p *parser) expect(s, why string) error {
+	if !p.tok.is(s) || p.tok.kind == tString {
+		return p.errorf(p.tok.off, "expected %q %s, found %s", s, why, p.tok.describe())
+	}
+	return p.advance()
+}
+
+func (p *parser) ident(what string) (token, error) {
+	t := p.tok
+	if t.kind != tIdent {
+		return t, p.errorf(t.off, "expected %s, found %s", what, t.describe())
+	}
+	return t, p.advance()
+}
+
+func (p *parser) program() error {
+	if !p.tok.is("OPENQASM") {
+		return p.errorf(p.tok.off, "expected the header OPENQASM 2.0; found %s", p.tok.describe())
+	}
+	if err := p.advance(); err != nil {
+		return err
+	}
+	if p.tok.kind != tNumber || (string(p.tok.text) != "2.0" && string(p.tok.text) != "2") {
+		return p.errorf(p.tok.off, "unsupported OpenQASM version %s; this reader takes 2.0", p.tok.describe())
+	}
+	if err := p.advance(); err != nil {
+		return err
+	}
+	if err := p.expect(";", "after the version"); err != nil {
+		return err
+	}
+	for p.tok.kind != tEOF {
+		if err := p.statement(); err != nil {
+			return err
+		}
+	}
+	return nil
+}
+
+func (p *parser) statement() error {
+	t := p.tok
+	p.stmt = t.off
+	if t.kind != tIdent {
+		return p.errorf(t.off, "expected a statement, found %s", t.describe())
+	}
+	switch string(t.text) {
+	case "include":
+		return p.include()
+	case "qreg", "creg":
+		return p.declare(string(t.text) == "qreg")
+	case "gate":
+		return p.gateDecl()
+	case "opaque":
+		return p.errorf(t.off, "opaque gates are not supported: they have no body to give them a matrix")
+	case "if":
+		return p.errorf(t.off, "if is not supported: a classically controlled operation has no unitary")
+	case "OPENQASM":
+		return p.errorf(t.off, "the OPENQASM header may appear only once, at the start")
+	case "measure":
+		return p.measure()
+	case "reset":
+		return p.reset()
+	case "barrier":
+		return p.barrier()
+	}
+	return p.call()
+}
+
+func (p *parser) include() error {
+	if err := p.advance(); err != nil {
+		return err
+	}
+	t := p.tok
+	if t.kind != tString {
+		return p.errorf(t.off, "expected a file name in quotes after include, found %s", t.describe())
+	}
+	if string(t.text) != `"qelib1.inc"` {
+		return p.errorf(t.off, "cannot include %s: only \"qelib1.inc\" is known (it is built in, not read from disk)", t.text)
+	}
+	if err := p.advance(); err != nil {
+		return err
+	}
+	for name, d := range builtins() {
+		if !d.hidden && !d.keyword {
+			if old, ok := p.gates[name]; !ok || !old.user {
+				p.gates[name] = d
+			}
+		}
+	}
+	return p.expect(";", "after include")
+}
+
+func (p *parser) declare(quantum bool) error {
+	if err := p.advance(); err != nil {
+		return err
+	}
+	name, err := p.ident("a register name")
+	if err != nil {
+		return err
+	}
+	if err := p.expect("[", "before the register size"); err != nil {
+		return err
+	}
+	size, err := p.integer("register size")
+	if err != nil {
+		return err
+	}
+	if err := p.expect("]", "after the register size"); err != nil {
+		return err
+	}
+	if _, dup := p.regs[string(name.text)]; dup {
+		return p.errorf(name.off, "register %s is already declared", name.text)
+	}
+	if size.val == 0 {
+		return p.errorf(size.off, "register %s has size 0", name.text)
+	}
+	total := &p.nc
+	if quantum {
+		total = &p.nq
+	}
+	if size.val > maxQubits-*total {
+		return p.errorf(size.off, "register %s makes the total size exceed %d", name.text, maxQubits)
+	}
+	r := &register{name: string(name.text), quantum: quantum, start: *total, size: size.val}
+	*total += size.val
+	p.regs[r.name] = r
+	p.order = append(p.order, r)
+	return p.expect(";", "after the register declaration")
+}
+
+type intTok struct {
+	val, off int
+}
+
+// integer reads a non-negative integer literal of at most maxQubits.
+func (p *parser) integer(what string) (intTok, error) {
+	t := p.tok
+	if t.kind != tNumber {
+		return intTok{}, p.errorf(t.off, "expected the %s as an integer, found %s", what, t.describe())
+	}
+	for _, c := range t.text {
+		if !isDigit(c) {
+			return intTok{}, p.errorf(t.off, "the %s must be an integer, found %s", what, t.text)
+		}
+	}
+	v, err := strconv.Atoi(string(t.text))
+	if err != nil || v > maxQubits {
+		return intTok{}, p.errorf(t.off, "the %s %s is too large (at most %d)", what, t.text, maxQubits)
+	}
+	return intTok{val: v, off: t.off}, p.advance()
+}
+
+// operands reads a comma-separated list of registers and elements, at least one.
+func (p *parser) operands(quantum bool, stop string) ([]operand, error) {
+	args := p.argBuf[:0]
+	for {
+		name, err := p.ident("a register or register element")
+		if err != nil {
+			return nil, err
+		}
+		r, ok := p.regs[string(name.text)]
+		if !ok {
+			return nil, p.errorf(name.off, "unknown register %s", name.text)
+		}
+		if r.quantum != quantum {
+			kind := "quantum"
+			if !quantum {
+				kind = "classical"
+			}
+			return nil, p.errorf(name.off, "%s is not a %s register", name.text, kind)
+		}
+		a := operand{reg: r, index: -1, off: name.off}
+		if p.tok.is("[") {
+			if err := p.advance(); err != nil {
+				return nil, err
+			}
+			i, err := p.integer("index")
+			if err != nil {
+				return nil, err
+			}
+			if i.val >= r.size {
+				return nil, p.errorf(i.off, "index %s[%d] out of range: %s has size %d", r.name, i.val, r.name, r.size)
+			}
+			a.index = i.val
+			if err := p.expect("]", "after the index"); err != nil {
+				return nil, err
+			}
+		}
+		args = append(args, a)
+		if !p.tok.is(",") {
+			break
+		}
+		if err := p.advance(); err != nil {
+			return nil, err
+		}
+	}
+	p.argBuf = args
+	if stop != "" {
+		return args, p.expect(stop, "after the operands")
+	}
+	return args, nil
+}
+
+// broadcast returns how many times a statement over args applies: 1 when every operand is an
+// element, else the common size of the whole registers.
+func (p *parser) broadcast(args []operand) (int, error) {
+	n := 1
+	var first *operand
+	for k := range args {
+		a := &args[k]
+		if a.index >= 0 {
+			continue
+		}
+		if first == nil {
+			first, n = a, a.reg.size
+		} else if a.reg.size != n {
+			return 0, p.errorf(a.off, "registers of different sizes in one statement: %s has %d, %s has %d",
+				first.reg.name, first.reg.size, a.reg.name, a.reg.size)
+		}
+	}
+	return n, nil
+}
+
+func (a operand) at(i int) int {
+	if a.index >= 0 {
+		return a.reg.start + a.index
+	}
+	return a.reg.start + i
+}
+
+func (p *parser) add(op circuit.Op) error {
+	if len(p.ops) >= p.cfg.maxOps {
+		return p.errorf(p.stmt, "the source expands to more than %d ops (see MaxOps)", p.cfg.maxOps)
+	}
+	p.ops = append(p.ops, op)
+	p.offs = append(p.offs, p.stmt)
+	return nil
+}
+
+func (p *parser) measure() error {
+	if err := p.advance(); err != nil {
+		return err
+	}
+	qs, err := p.operands(true, "")
+	if err != nil {
+		return err
+	}
+	if len(qs) != 1 {
+		return p.errorf(qs[1].off, "measure takes one qubit or register")
+	}
+	q := qs[0]
+	if err := p.expect("->", "between the measured qubit and the classical bit"); err != nil {
+		return err
+	}
+	bs, err := p.operands(false, ";")
+	if err != nil {
+		return err
+	}
+	if len(bs) != 1 {
+		return p.errorf(bs[1].off, "measure writes one bit or register")
+	}
+	b := bs[0]
+	if (q.index < 0) != (b.index < 0) || q.index < 0 && q.reg.size != b.reg.size {
+		return p.errorf(b.off, "measure needs a qubit and a bit, or two registers of the same size")
+	}
+	n := 1
+	if q.index < 0 {
+		n = q.reg.size
+	}
+	for i := 0; i < n; i++ {
+		if err := p.add(circuit.Op{Gate: circuit.Gate{Name: "measure"}, Qubits: []int{q.at(i)}, Clbits: []int{b.at(i)}}); err != nil {
+			return err
+		}
+	}
+	return nil
+}
+
+func (p *parser) reset() error {
+	if err := p.advance(); err != nil {
+		return err
+	}
+	qs, err := p.operands(true, ";")
+	if err != nil {
+		return err
+	}
+	if len(qs) != 1 {
+		return p.errorf(qs[1].off, "reset takes one qubit or register")
+	}
+	n, _ := p.broadcast(qs)
+	for i := 0; i < n; i++ {
+		if err := p.add(circuit.Op{Gate: circuit.Gate{Name: "reset"}, Qubits: []int{qs[0].at(i)}}); err != nil {
+			return err
+		}
+	}
+	return nil
+}
+
+func (p *parser) barrier() error {
+	if err := p.advance(); err != nil {
+		return err
+	}
+	qs, err := p.operands(true, ";")
+	if err != nil {
+		return err
+	}
+	if p.cfg.dropBarriers {
+		return nil
+	}
+	seen := make([]bool, p.nq)
+	var qubits []int
+	for _, a := range qs {
+		lo, hi := a.index, a.index+1
+		if a.index < 0 {
+			lo, hi = 0, a.reg.size
+		}
+		for i := lo; i < hi; i++ {
+			if q := a.reg.start + i; !seen[q] {
+				seen[q] = true
+				qubits = append(qubits, q)
+			}
+		}
+	}
+	return p.add(circuit.Op{Gate: circuit.Gate{Name: "barrier"}, Qubits: qubits})
+}
+
+// call reads a gate application: name[(angles)] operands;
+func (p *parser) call() error {
+	name := p.tok
+	def, ok := p.gates[string(name.text)]
+	if !ok {
+		return p.unknownGate(name)
+	}
+	if err := p.advance(); err != nil {
+		return err
+	}
+	angles, err := p.angles(nil)
+	if err != nil {
+		return err
+	}
+	if len(angles) != def.nparams {
+		return p.errorf(name.off, "gate %s takes %d angle(s), got %d", name.text, def.nparams, len(angles))
+	}
+	vals := make([]float64, len(angles))
+	for i, a := range angles {
+		vals[i] = a.eval(nil)
+	}
+	args, err := p.operands(true, ";")
+	if err != nil {
+		return err
+	}
+	if len(args) != def.nqubits {
+		return p.errorf(name.off, "gate %s acts on %d qubit(s), got %d operand(s)", name.text, def.nqubits, len(args))
+	}
+	n, err := p.broadcast(args)
+	if err != nil {
+		return err
+	}
+	for i := 0; i < n; i++ {
+		qubits := make([]int, len(args))
+		for k, a := range args {
+			qubits[k] = a.at(i)
+			for j := 0; j < k; j++ {
+				if qubits[j] == qubits[k] {
+					return p.errorf(a.off, "gate %s uses qubit %s[%d] twice", name.text, a.reg.name, qubits[k]-a.reg.start)
+				}
+			}
+		}
+		if err := p.expand(def, vals, qubits, name.off); err != nil {
+			return err
+		}
+	}
+	return nil
+}
+
+func (p *parser) unknownGate(t token) error {
+	if s := string(t.text); s == "rccx" || s == "rc3x" {
+		return p.errorf(t.off, "%s (a relative-phase Toffoli of some qelib1.inc versions) is not supported; define it with gate", s)
+	}
+	if _, ok := builtins()[string(t.text)]; ok && !builtins()[string(t.text)].hidden {
+		return p.errorf(t.off, "unknown gate %s (it is in qelib1.inc: add include \"qelib1.inc\";)", t.text)
+	}
+	if _, ok := circuit.Lookup(string(t.text)); ok {
+		return p.errorf(t.off, "unknown gate %s: it is not in qelib1.inc, so the source must define it with gate", t.text)
+	}
+	return p.errorf(t.off, "unknown gate or statement %s", t.text)
+}
+
+// angles reads an optional parenthesised, comma-separated list of expressions.
+func (p *parser) angles(params []string) ([]*expr, error) {
+	if !p.tok.is("(") {
+		return nil, nil
+	}
+	if err := p.advance(); err != nil {
+		return nil, err
+	}
+	var out []*expr
+	if p.tok.is(")") {
+		return nil, p.advance()
+	}
+	for {
+		e, err := p.parseExpr(params, 0)
+		if err != nil {
+			return nil, err
+		}
+		out = append(out, e)
+		if p.tok.is(")") {
+			return out, p.advance()
+		}
+		if err := p.expect(",", "between angles"); err != nil {
+			return nil, err
+		}
+	}
+}
+
+// expand appends the ops of one call of def with the given angles on the given flat qubits.
+func (p *parser) expand(def *gateDef, vals []float64, qubits []int, off int) error {
+	if def.native != "" {
+		for k, v := range vals {
+			if math.IsNaN(v) || math.IsInf(v, 0) {
+				return p.errorf(off, "angle %d of %s evaluates to %v; angles must be finite", k+1, def.native, v)
+			}
+		}
+		var params []float64
+		if len(vals) > 0 {
+			params = append(params, vals...)
+		}
+		return p.add(circuit.Op{Gate: circuit.Gate{Name: def.native, Params: params}, Qubits: qubits})
+	}
+	for _, b := range def.body {
+		sub := make([]int, len(b.qubits))
+		for k, i := range b.qubits {
+			sub[k] = qubits[i]
+		}
+		if b.def == nil {
+			if !p.cfg.dropBarriers {
+				if err := p.add(circuit.Op{Gate: circuit.Gate{Name: "barrier"}, Qubits: sub}); err != nil {
+					return err
+				}
+			}
+			continue
+		}
+		args := make([]float64, len(b.args))
+		for k, a := range b.args {
+			args[k] = a.eval(vals)
+		}
+		if err := p.expand(b.def, args, sub, off); err != nil {
+			return err
+		}
+	}
+	return nil
+}

@@ -1,0 +1,71 @@
+package qasm
+
+import "qcheck.dev/qcheck/circuit"
+
+// Program is a parsed OpenQASM file: the circuit, with every qreg laid end to end in the order
+// of declaration (the first qreg's qubit 0 is the circuit's qubit 0), and the registers that say
+// which flat index belongs to which name. Likewise every creg is laid end to end to number the
+// classical bits that measure writes.
+type Program struct {
+	Circuit *circuit.Circuit
+	// Qregs and Cregs are the quantum and classical registers in the order of declaration.
+	Qregs, Cregs []Register
+	// Lines gives, for each op of Circuit, the 1-based source line of the statement it came
+	// from, so that a report about op k can point into the file.
+	Lines []int
+}
+
+// Register is one declared register: its name, its size, and the flat index of its element 0.
+type Register struct {
+	Name  string
+	Size  int
+	Start int
+}
+
+// Qubit returns the circuit's qubit for reg[i], and false when there is no such qubit.
+func (p *Program) Qubit(reg string, i int) (int, bool) { return find(p.Qregs, reg, i) }
+
+// Clbit returns the circuit's classical bit for reg[i], and false when there is no such bit.
+func (p *Program) Clbit(reg string, i int) (int, bool) { return find(p.Cregs, reg, i) }
+
+func find(regs []Register, name string, i int) (int, bool) {
+	for _, r := range regs {
+		if r.Name == name {
+			if i < 0 || i >= r.Size {
+				return 0, false
+			}
+			return r.Start + i, true
+		}
+	}
+	return 0, false
+}
+
+// Option changes how Parse reads a source. Options compose; the zero set keeps barriers and
+// allows DefaultMaxOps ops.
+type Option func(*config)
+
+type config struct {
+	dropBarriers bool
+	maxOps       int
+}
+
+// DefaultMaxOps bounds the ops one source may expand to (gate definitions can double the count
+// at each level of nesting), so that a small hostile file cannot exhaust memory.
+const DefaultMaxOps = 1 << 22
+
+// maxQubits bounds the total size of the quantum and of the classical registers.
+const maxQubits = 1 << 20
+
+// DropBarriers makes Parse leave barriers out of the circuit. By default they are kept: engines
+// skip them, and passes that must not move gates across them can see them.
+func DropBarriers() Option { return func(c *config) { c.dropBarriers = true } }
+
+// MaxOps sets how many ops the source may expand to before Parse gives up with an error; n ≤ 0
+// means DefaultMaxOps.
+func MaxOps(n int) Option {
+	return func(c *config) {
+		if n > 0 {
+			c.maxOps = n
+		}
+	}
+}

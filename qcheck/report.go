@@ -1,0 +1,356 @@
+package qcheck
+
+import (
+	"fmt"
+	"strings"
+
+	"github.com/google/go-cmp/cmp"
+	"qcheck.dev/qcheck/circuit"
+)
+
+// reportMaxOps is the longest circuit a report draws in full; longer ones are shown by their
+// differing window only, to keep a failing test's log readable.
+const reportMaxOps = 60
+
+// Headline is the first line of the report: the verdict and the distance against the tolerance.
+func (r Result) Headline() string {
+	if r.Equivalent {
+		return fmt.Sprintf("qcheck: got is equivalent to want: %s %.4g ≤ tolerance %g", r.Measure, r.Distance, r.Tolerance)
+	}
+	return fmt.Sprintf("qcheck: got differs from want: %s %.4g > tolerance %g", r.Measure, r.Distance, r.Tolerance)
+}
+
+// Report writes the result for a person, in lines of at most 100 columns (drawings are wrapped by
+// the circuit package at the same width): the verdict, both circuits drawn and listed, their
+// difference as op lists, the ops to blame, the witness input state, and a measurement whose
+// probabilities tell the circuits apart.
+func (r Result) Report() string {
+	var b strings.Builder
+	b.WriteString(r.Headline())
+	b.WriteString("\n")
+	r.writeSettings(&b)
+	if r.Want != nil && r.Got != nil {
+		writeCircuit(&b, "want", r.Want)
+		writeCircuit(&b, "got", r.Got)
+		writeDiff(&b, "want", r.Want, "got", r.Got)
+	}
+	if !r.Equivalent {
+		r.writeBlame(&b, "want", "got")
+	}
+	r.writeEvidence(&b)
+	return b.String()
+}
+
+// writeSettings writes the measure, phase convention, engine and options.
+func (r Result) writeSettings(b *strings.Builder) {
+	phase := "up to global phase"
+	switch {
+	case r.Measure == Distribution:
+		phase = "distributions of measuring " + qubitList(r.Measured)
+	case r.ExactPhase:
+		phase = "global phase counts"
+	}
+	fmt.Fprintf(b, "  measure: %s, %s\n", r.Measure, phase)
+	fmt.Fprintf(b, "  engine: %s (%s)\n", r.Engine, r.Certifies)
+	if r.Options != "" {
+		fmt.Fprintf(b, "  options: %s\n", r.Options)
+	}
+}
+
+// writeCircuit draws a circuit and lists its ops.
+func writeCircuit(b *strings.Builder, title string, c *circuit.Circuit) {
+	fmt.Fprintf(b, "\n%s: %d qubit(s), %d op(s)\n", title, c.Qubits(), c.Len())
+	if c.Len() > reportMaxOps {
+		fmt.Fprintf(b, "  (longer than %d ops: drawing and list omitted, see the differing ops below)\n", reportMaxOps)
+		return
+	}
+	b.WriteString(c.String())
+	b.WriteString(wrapList("  ops: ", opList(c.Ops, 0), " · "))
+}
+
+// opList writes each op as "i: gate qubits".
+func opList(ops []circuit.Op, from int) []string {
+	out := make([]string, len(ops))
+	for i, op := range ops {
+		out[i] = fmt.Sprintf("%d: %s", from+i, op)
+	}
+	return out
+}
+
+// wrapList joins items after a prefix, wrapping lines at circuit.DrawWidth columns.
+func wrapList(prefix string, items []string, sep string) string {
+	if len(items) == 0 {
+		return prefix + "(none)\n"
+	}
+	var b strings.Builder
+	indent := strings.Repeat(" ", len([]rune(prefix)))
+	line := prefix
+	for i, it := range items {
+		piece := it
+		if i > 0 {
+			piece = sep + it
+		}
+		if len([]rune(line))+len([]rune(piece)) > circuit.DrawWidth && line != prefix && line != indent {
+			b.WriteString(strings.TrimRight(line, " ·") + "\n")
+			line = indent + it
+			continue
+		}
+		line += piece
+	}
+	b.WriteString(line + "\n")
+	return b.String()
+}
+
+// writeDiff writes the structural difference of two op lists with go-cmp.
+func writeDiff(b *strings.Builder, aName string, a *circuit.Circuit, bName string, c *circuit.Circuit) {
+	as, cs := opStrings(a), opStrings(c)
+	d := cmp.Diff(as, cs)
+	if d == "" {
+		fmt.Fprintf(b, "\nops: %s and %s have the same ops\n", aName, bName)
+		return
+	}
+	fmt.Fprintf(b, "\nops (−%s +%s):\n", aName, bName)
+	for _, line := range strings.Split(strings.TrimRight(d, "\n"), "\n") {
+		// go-cmp marks lines with "-" and "+" and indents with a non-breaking space; keep its
+		// layout but make it plain.
+		b.WriteString("  " + strings.ReplaceAll(line, "\u00a0", " ") + "\n")
+	}
+}
+
+func opStrings(c *circuit.Circuit) []string {
+	out := make([]string, len(c.Ops))
+	for i, op := range c.Ops {
+		out[i] = op.String()
+	}
+	return out
+}
+
+// writeBlame names the ops that explain the difference.
+func (r Result) writeBlame(b *strings.Builder, wantName, gotName string) {
+	bl := r.Blame
+	if !bl.Found || r.Want == nil || r.Got == nil {
+		return
+	}
+	w, g := r.Want.Ops[bl.WantOps[0]:bl.WantOps[1]], r.Got.Ops[bl.GotOps[0]:bl.GotOps[1]]
+	b.WriteString("\nblame:\n")
+	pad := max(len(wantName), len(gotName))
+	wl := fmt.Sprintf("    %-*s ", pad+1, wantName+":")
+	gl := fmt.Sprintf("    %-*s ", pad+1, gotName+":")
+	fmt.Fprintf(b, "  the op lists first differ at op %d; apart from a common start and end, %s has %s\n",
+		bl.FirstDiff, wantName, rangeWords(bl.WantOps))
+	fmt.Fprintf(b, "  where %s has %s\n", gotName, rangeWords(bl.GotOps))
+	if len(w)+len(g) <= 12 {
+		b.WriteString(wrapList(wl, opList(w, bl.WantOps[0]), " · "))
+		b.WriteString(wrapList(gl, opList(g, bl.GotOps[0]), " · "))
+	}
+	if bl.Prefix > 0 {
+		k := bl.Prefix
+		fmt.Fprintf(b, "  the meaning first changes at op %d: the first %d op(s) of %s already differ from %s's\n",
+			k-1, k, gotName, wantName)
+		fmt.Fprintf(b, "%s%d: %s\n%s%d: %s\n", wl, k-1, r.Want.Ops[k-1], gl, k-1, r.Got.Ops[k-1])
+	}
+}
+
+func rangeWords(r [2]int) string {
+	switch r[1] - r[0] {
+	case 0:
+		return fmt.Sprintf("no ops (before op %d)", r[0])
+	case 1:
+		return fmt.Sprintf("1 op (op %d)", r[0])
+	}
+	return fmt.Sprintf("%d ops (ops %d–%d)", r[1]-r[0], r[0], r[1]-1)
+}
+
+// ketOrder names the qubits of a ket of n qubits, highest first: "|q2 q1 q0⟩".
+func ketOrder(n int) string {
+	switch {
+	case n <= 1:
+		return "|q0⟩"
+	case n <= 4:
+		s := make([]string, n)
+		for i := range s {
+			s[i] = fmt.Sprintf("q%d", n-1-i)
+		}
+		return "|" + strings.Join(s, " ") + "⟩"
+	}
+	return fmt.Sprintf("|q%d … q1 q0⟩", n-1)
+}
+
+// writeEvidence writes the witness input, the distinguishing measurement and the probability
+// bound.
+func (r Result) writeEvidence(b *strings.Builder) {
+	n := r.Qubits
+	if p := r.Pauli; p != nil {
+		b.WriteString("\nwitness Pauli (the tableau engine; strings list qubits that are not I):\n")
+		fmt.Fprintf(b, "  want maps %s to %s, got maps it to %s\n", p.Generator, p.Want, p.Got)
+		if p.Anticommute {
+			fmt.Fprintf(b, "  prepare any state that %s leaves unchanged and measure the observable %s:\n", p.Generator, p.Want)
+			b.WriteString("  +1 with probability 1 after want, 1/2 after got (the two images anticommute)\n")
+		}
+		fmt.Fprintf(b, "  so the distance up to global phase is at least %.4g (half of ‖%s − %s‖)\n", r.Distance, p.Want, p.Got)
+	}
+	if r.Witness != nil {
+		fmt.Fprintf(b, "\nwitness input ψ (kets are %s: qubit 0 is the rightmost bit):\n", ketOrder(n))
+		b.WriteString(wrapList("  ψ = ", strings.Fields(Ket(r.Witness, n)), " "))
+		if r.ExactPhase {
+			fmt.Fprintf(b, "  ‖want·ψ − got·ψ‖ = %.4g (a certified lower bound on the distance)\n", r.WitnessGap)
+		} else {
+			fmt.Fprintf(b, "  min over φ of ‖want·ψ − e^{iφ}·got·ψ‖ = %.4g (a certified lower bound on the distance)\n", r.WitnessGap)
+			fmt.Fprintf(b, "  best global phase for the whole circuit: want ≈ e^{iφ}·got with φ = %.4g rad\n", r.Phase)
+		}
+	}
+	m := r.Measurement
+	if r.Witness != nil || m.Input != nil {
+		b.WriteString("\nmeasurement that tells them apart:\n")
+	}
+	switch {
+	case m.Input == nil && r.Witness != nil:
+		b.WriteString("  none: the circuits differ only by a global phase, which no measurement of them alone can\n")
+		b.WriteString("  see; it shows when the circuit is controlled, which is what ExactPhase guards\n")
+	case m.Input != nil:
+		input := Ket(m.Input, n)
+		if m.InputBasis >= 0 {
+			input = basisKet(m.InputBasis, n)
+		} else if r.Witness != nil && sameState(m.Input, r.Witness) {
+			input = "ψ, the witness above"
+		}
+		b.WriteString(wrapList("  prepare ", strings.Fields(input+" and run the circuit;"), " "))
+		switch {
+		case !m.Basis:
+			b.WriteString("  then test whether the output is want's output state (a projective measurement):\n")
+			fmt.Fprintf(b, "  want passes with probability %s, got with %s\n", prob(m.Want), prob(m.Got))
+		case r.Measured != nil:
+			fmt.Fprintf(b, "  measuring %s gives %s with probability %s after want, %s after got\n",
+				qubitList(r.Measured), outcomeWords(m.Outcome, r.Measured), prob(m.Want), prob(m.Got))
+		default:
+			fmt.Fprintf(b, "  measuring every qubit gives %s with probability %s after want, %s after got\n",
+				basisKet(m.Outcome, n), prob(m.Want), prob(m.Got))
+		}
+	}
+	if (r.Witness != nil || m.Input != nil) && 2*r.OperatorDistance < 1 {
+		fmt.Fprintf(b, "  no outcome probability can differ by more than 2 × %.4g = %.4g, twice the operator-norm\n",
+			r.OperatorDistance, 2*r.OperatorDistance)
+		b.WriteString("  distance (Nielsen & Chuang §4.5.3)\n")
+	}
+}
+
+// prob writes a probability to four digits, with rounding noise at the ends written as 0 and 1.
+func prob(p float64) string {
+	switch {
+	case p < 1e-12:
+		return "0"
+	case p > 1-1e-12:
+		return "1"
+	}
+	return fmt.Sprintf("%.4g", p)
+}
+
+func sameState(a, c []complex128) bool {
+	if len(a) != len(c) {
+		return false
+	}
+	for i := range a {
+		if a[i] != c[i] {
+			return false
+		}
+	}
+	return true
+}
+
+// qubitList writes qubits as "q0, q2".
+func qubitList(qs []int) string {
+	s := make([]string, len(qs))
+	for i, q := range qs {
+		s[i] = fmt.Sprintf("q%d", q)
+	}
+	return strings.Join(s, ", ")
+}
+
+// outcomeWords writes an outcome over the measured qubits as "q2=1 q0=0", highest qubit first.
+func outcomeWords(o int, measured []int) string {
+	s := make([]string, len(measured))
+	for i := range measured {
+		j := len(measured) - 1 - i
+		s[i] = fmt.Sprintf("q%d=%d", measured[j], o>>j&1)
+	}
+	return strings.Join(s, " ")
+}
+
+// Headline is the first line of the failure's report.
+func (f *Failure) Headline() string {
+	in := "input"
+	if f.Input != nil {
+		in = fmt.Sprintf("%d-qubit, %d-op circuit", f.Input.Qubits(), f.Input.Len())
+	}
+	switch f.Kind {
+	case NotEquivalent:
+		r := f.Result
+		return fmt.Sprintf("qcheck: the pass changes a %s: %s %.4g > tolerance %g", in, r.Measure, r.Distance, r.Tolerance)
+	case PassError:
+		return fmt.Sprintf("qcheck: the pass returned an error on a valid %s: %v", in, f.Err)
+	case PassPanic:
+		return fmt.Sprintf("qcheck: the pass panicked on a %s: %v", in, f.Err.(*passPanic).value)
+	case ModifiedInput:
+		return fmt.Sprintf("qcheck: the pass modified its %s instead of returning a new circuit", in)
+	case BadOutput:
+		return fmt.Sprintf("qcheck: the pass returned an unusable circuit for a %s: %v", in, f.Err)
+	}
+	return "qcheck: the pass failed"
+}
+
+// Report writes the failure for a person: what went wrong, the minimal input drawn and listed
+// (and as Go code to paste into a regression test), the pass's output beside it with their
+// difference, the comparison's evidence, and how to replay the failure.
+func (f *Failure) Report() string {
+	var b strings.Builder
+	b.WriteString(f.Headline())
+	b.WriteString("\n")
+	if f.Kind == NotEquivalent {
+		f.Result.writeSettings(&b)
+	}
+	if f.Input != nil {
+		writeCircuit(&b, "input (as small as rapid could make it)", f.Input)
+		b.WriteString(wrapList("  as Go: ", []string{GoCode(f.Input)}, ""))
+	}
+	switch f.Kind {
+	case NotEquivalent:
+		r := f.Result
+		writeCircuit(&b, "output of the pass", f.Output)
+		if f.Layout != nil {
+			fmt.Fprintf(&b, "  final layout reported by the pass: %v (logical i on physical layout[i])\n", f.Layout)
+		}
+		writeDiff(&b, "input", f.Input, "output", f.Output)
+		r.writeBlame(&b, "input", "output")
+		r.writeEvidence(&b)
+	case ModifiedInput:
+		writeCircuit(&b, "the input after the pass ran", f.Modified)
+		writeDiff(&b, "before", f.Input, "after", f.Modified)
+	case PassPanic:
+		fmt.Fprintf(&b, "\n%s\n", trimLines(f.Err.Error(), 24))
+	case BadOutput:
+		if f.Output != nil {
+			writeCircuit(&b, "output of the pass", f.Output)
+		}
+	}
+	b.WriteString("\nreplay: ")
+	switch {
+	case f.FailFile != "" && f.Seed != 0:
+		fmt.Fprintf(&b, "-rapid.failfile=%q (or -rapid.seed=%d)\n", f.FailFile, f.Seed)
+	case f.FailFile != "":
+		fmt.Fprintf(&b, "-rapid.failfile=%q\n", f.FailFile)
+	case f.Seed != 0:
+		fmt.Fprintf(&b, "-rapid.seed=%d\n", f.Seed)
+	default:
+		b.WriteString("rapid prints the -rapid.seed and the fail file under testdata/rapid/ to rerun with\n")
+	}
+	return b.String()
+}
+
+// trimLines keeps the first n lines of s.
+func trimLines(s string, n int) string {
+	lines := strings.Split(s, "\n")
+	if len(lines) <= n {
+		return s
+	}
+	return strings.Join(lines[:n], "\n") + fmt.Sprintf("\n… (%d more lines)", len(lines)-n)
+}

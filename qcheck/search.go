@@ -1,0 +1,117 @@
+package qcheck
+
+import (
+	"fmt"
+	"reflect"
+	"regexp"
+	"runtime"
+	"strconv"
+	"strings"
+	"sync"
+
+	"pgregory.net/rapid"
+	"qcheck.dev/qcheck/circuit"
+)
+
+// Search runs the same campaign as Preserves outside a test, for the command-line tool and
+// demos: it returns the shrunk counterexample as a value, or nil when every check passed. The
+// error reports bad options, or a campaign that failed without a failure of the pass (a panicking
+// generator, or a failure rapid could not reproduce).
+//
+// Search is rapid.Check with a test handle of its own, so rapid's settings apply as in a test:
+// the number of checks (-rapid.checks or RAPID_CHECKS, 100 by default), the seed (-rapid.seed or
+// RAPID_SEED, random by default) and the fail file. Like rapid.Check, it saves the shrunk failure
+// under testdata/rapid/ in the working directory (unless -rapid.nofailfile or RAPID_NOFAILFILE is
+// set), replays saved failures of the same pass first, and reports the seed and the file in the
+// Failure. It runs in the calling goroutine; calls must not overlap.
+func Search(pass Pass, g *rapid.Generator[*circuit.Circuit], opts ...Option) (*Failure, error) {
+	return search(funcName(pass), pass.subject(), g, opts)
+}
+
+// SearchLayout is Search for a pass that reports its final layout.
+func SearchLayout(pass LayoutPass, g *rapid.Generator[*circuit.Circuit], opts ...Option) (*Failure, error) {
+	return search(funcName(pass), pass.subject(), g, opts)
+}
+
+// searching keeps Search calls from overlapping: rapid's settings and fail files are global.
+var searching sync.Mutex
+
+func search(name string, s subject, g *rapid.Generator[*circuit.Circuit], opts []Option) (*Failure, error) {
+	cfg, err := newConfig(opts)
+	if err != nil {
+		return nil, err
+	}
+	searching.Lock()
+	defer searching.Unlock()
+	var last *Failure
+	prop := property(cfg, s, g, func(f *Failure) { last = f })
+	h := &searchTB{name: "qcheck.Search_" + name}
+	rapid.Check(h, prop)
+	if !h.failed {
+		return nil, nil
+	}
+	msg := strings.Join(h.errors, "\n")
+	if last == nil {
+		return nil, fmt.Errorf("qcheck.Search: the campaign failed without a failure of the pass:\n%s", msg)
+	}
+	if strings.Contains(msg, "flaky test") {
+		return nil, fmt.Errorf("qcheck.Search: rapid could not reproduce the failure (is the pass deterministic?):\n%s", msg)
+	}
+	if m := seedPattern.FindStringSubmatch(msg); m != nil {
+		last.Seed, _ = strconv.ParseUint(m[1], 10, 64)
+	}
+	if m := failFilePattern.FindStringSubmatch(msg); m != nil {
+		last.FailFile, _ = strconv.Unquote(m[1])
+	}
+	if m := passedPattern.FindStringSubmatch(msg); m != nil {
+		last.Passed, _ = strconv.Atoi(m[1])
+	}
+	return last, nil
+}
+
+var (
+	seedPattern     = regexp.MustCompile(`-rapid\.seed=(\d+)`)
+	failFilePattern = regexp.MustCompile(`-rapid\.failfile=("(?:[^"\\]|\\.)*")`)
+	passedPattern   = regexp.MustCompile(`failed after (\d+) tests`)
+)
+
+// funcName names a function value for fail-file names: the last element of its package path and
+// its name, such as "peephole.MergeRotations".
+func funcName(f any) string {
+	fn := runtime.FuncForPC(reflect.ValueOf(f).Pointer())
+	if fn == nil {
+		return "pass"
+	}
+	name := fn.Name()
+	if i := strings.LastIndex(name, "/"); i >= 0 {
+		name = name[i+1:]
+	}
+	return name
+}
+
+// searchTB is the test handle Search gives rapid.Check: it records what rapid reports instead of
+// failing a test. rapid calls FailNow only as its last step, so FailNow just records.
+type searchTB struct {
+	name   string
+	failed bool
+	errors []string
+	logs   []string
+}
+
+func (h *searchTB) Helper()                    {}
+func (h *searchTB) Name() string               { return h.name }
+func (h *searchTB) Logf(f string, args ...any) { h.logs = append(h.logs, fmt.Sprintf(f, args...)) }
+func (h *searchTB) Log(args ...any)            { h.logs = append(h.logs, fmt.Sprint(args...)) }
+func (h *searchTB) Errorf(f string, args ...any) {
+	h.failed = true
+	h.errors = append(h.errors, fmt.Sprintf(f, args...))
+}
+func (h *searchTB) Error(args ...any)            { h.Errorf("%s", fmt.Sprint(args...)) }
+func (h *searchTB) Fatalf(f string, args ...any) { h.Errorf(f, args...) }
+func (h *searchTB) Fatal(args ...any)            { h.Error(args...) }
+func (h *searchTB) FailNow()                     { h.failed = true }
+func (h *searchTB) Fail()                        { h.failed = true }
+func (h *searchTB) Failed() bool                 { return h.failed }
+func (h *searchTB) Skipf(f string, args ...any)  { h.Logf(f, args...) }
+func (h *searchTB) Skip(args ...any)             { h.Log(args...) }
+func (h *searchTB) SkipNow()                     {}

@@ -1,0 +1,24 @@
+// Package sim gives circuits their meaning: engines that compute a circuit's unitary matrix or
+// apply it to a state, in the qubit order of package circuit (qubit 0 is the least-significant
+// bit of a basis index).
+//
+// Every engine validates the circuit first and returns an error, never a panic, for an ill-formed
+// circuit, a non-unitary op (measure, reset), or a size it cannot hold.
+//
+// # Engines
+//
+// Unitary builds the dense 2^n × 2^n matrix, refusing sizes over a memory limit (UnitaryWithin)
+// with an error that says how much it would need. Apply runs a circuit on a statevector in place;
+// Compile prepares a circuit once for many statevectors, and Apply(c.Inverse(), state) applies
+// the inverse.
+//
+// # How the work is done
+//
+// Both engines share one set of kernels (kernel.go). Gates are first fused: consecutive gates on
+// the same qubits are multiplied into one matrix (fuse.go). Each fused gate then runs in place
+// over strided index sets, with an inner loop chosen from its matrix: a 2×2 block, a diagonal, an
+// exchange of amplitudes, a full 4×4, or a sparse row-by-row loop. The dense engine builds blocks
+// of columns that fit in a core's cache, one block per goroutine at a time, running every gate
+// over a block before moving on; the statevector engine runs gates on low qubits chunk by chunk
+// in cache and splits every other gate across all cores.
+package sim

@@ -1,0 +1,6 @@
+// c3x_missing_toffoli (before side).
+// Source: NEAR MISS. Barenco et al. Lemma 7.2 with the last Toffoli left out (a deliberate error).
+OPENQASM 2.0;
+include "qelib1.inc";
+qreg q[5];
+c3x q[0],q[1],q[2],q[3];

@@ -1,0 +1,7 @@
+// cnot_conjugates_xi (after side).
+// Source: Clifford conjugation rules, Nielsen & Chuang §10.5.2 (from memory): CNOT (X⊗I) CNOT = X⊗X, control first.
+OPENQASM 2.0;
+include "qelib1.inc";
+qreg q[2];
+x q[0];
+x q[1];

@@ -1,0 +1,6 @@
+// cy_from_cnot (before side).
+// Source: Nielsen & Chuang, §4.3 with Y = S X S†: controlled-Y is a CNOT conjugated by S on the target.
+OPENQASM 2.0;
+include "qelib1.inc";
+qreg q[2];
+cy q[0],q[1];

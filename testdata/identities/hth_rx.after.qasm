@@ -1,0 +1,6 @@
+// hth_rx (after side).
+// Source: Nielsen & Chuang, Exercise 4.14: HTH = R_x(π/4) up to a global phase.
+OPENQASM 2.0;
+include "qelib1.inc";
+qreg q[1];
+rx(pi/4) q[0];

@@ -1,0 +1,8 @@
+// s_conjugates_x_to_y (before side).
+// Source: Clifford conjugation rules, Nielsen & Chuang §10.5.2 (from memory): S X S† = Y.
+OPENQASM 2.0;
+include "qelib1.inc";
+qreg q[1];
+sdg q[0];
+x q[0];
+s q[0];

@@ -1,0 +1,8 @@
+// swap_three_cnots (after side).
+// Source: Nielsen & Chuang, §1.3.4 and Fig. 1.7: SWAP from three alternating CNOTs.
+OPENQASM 2.0;
+include "qelib1.inc";
+qreg q[2];
+cx q[0],q[1];
+cx q[1],q[0];
+cx q[0],q[1];

@@ -1,0 +1,7 @@
+// sx_squared_x (before side).
+// Source: √X squared is X (definition of sx, DESIGN.md; common practice).
+OPENQASM 2.0;
+include "qelib1.inc";
+qreg q[1];
+sx q[0];
+sx q[0];

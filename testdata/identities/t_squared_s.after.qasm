@@ -1,0 +1,6 @@
+// t_squared_s (after side).
+// Source: Nielsen & Chuang, §4.2: the π/8 gate squares to the phase gate, T² = S.
+OPENQASM 2.0;
+include "qelib1.inc";
+qreg q[1];
+s q[0];

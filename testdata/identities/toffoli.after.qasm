@@ -1,0 +1,20 @@
+// toffoli (after side).
+// Source: Nielsen & Chuang, Fig. 4.9: the Toffoli gate from H, T, T† and six CNOTs (controls q[0], q[1], target q[2]).
+OPENQASM 2.0;
+include "qelib1.inc";
+qreg q[3];
+h q[2];
+cx q[1],q[2];
+tdg q[2];
+cx q[0],q[2];
+t q[2];
+cx q[1],q[2];
+tdg q[2];
+cx q[0],q[2];
+t q[1];
+t q[2];
+h q[2];
+cx q[0],q[1];
+t q[0];
+tdg q[1];
+cx q[0],q[1];
