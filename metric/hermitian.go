@@ -208,9 +208,9 @@ func sweepKernelGo(col, v, w, y, x []complex128, p, q, r complex128) complex128 
 
 // reflector turns x into the vector v of a Householder reflector
 // H = I − tau·v·vᴴ with Hᴴ·x = (beta, 0, …, 0), beta real: x[0] is left for
-// the caller, x[1:] becomes v[1:] (v[0] = 1). It follows LAPACK's zlarfg
-// without the rescaling for tiny norms, which the unit-scale inputs of this
-// package do not need.
+// the caller, x[1:] becomes v[1:] (v[0] = 1). It follows LAPACK's zlarfg,
+// with the norm summed over entries scaled by the largest one instead of
+// zlarfg's repeated rescaling.
 func reflector(x []complex128) (beta float64, tau complex128) {
 	alpha := x[0]
 	ar, ai := real(alpha), imag(alpha)
