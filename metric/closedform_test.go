@@ -72,7 +72,8 @@ func TestDistanceByHand(t *testing.T) {
 
 // Distinct Pauli operators are perfectly distinguishable channels: the
 // eigenvalues of P†Q are ±1 or ±i pairs whose hull holds 0, so the diamond
-// distance is 2 (Watrous 2018, Thm 3.55 applied to anticommuting Paulis).
+// distance is 2 (Watrous 2018, chapter 3, the unitary-channel theorem, 3.55 from memory,
+// applied to anticommuting Paulis).
 func TestDiamondPaulis(t *testing.T) {
 	paulis := map[string]*mat.CDense{"I": gateI, "X": gateX, "Y": gateY, "Z": gateZ}
 	for a, p := range paulis {
@@ -89,7 +90,7 @@ func TestDiamondPaulis(t *testing.T) {
 }
 
 // Average gate fidelity (d + |tr U†V|²)/(d(d+1)) (Nielsen, Phys. Lett. A 303
-// (2002) 249, eq. for unitary channels): for T against I, tr = 1 + e^{iπ/4},
+// (2002) 249, its formula for unitary channels): for T against I, tr = 1 + e^{iπ/4},
 // |tr|² = 2 + √2, d = 2.
 func TestFidelityByHand(t *testing.T) {
 	want := (2 + 2 + math.Sqrt2) / 6

@@ -37,7 +37,7 @@ func probabilities(m mat.CMatrix, psi []complex128) []float64 {
 	return p
 }
 
-// Nielsen & Chuang §4.5.3 (eq. 4.63): if ‖U − V‖ ≤ ε then every measurement
+// Nielsen & Chuang §4.5.3: if ‖U − V‖ ≤ ε then every measurement
 // outcome's probability moves by at most 2ε. Probabilities ignore global
 // phase, so the bound holds with PhaseDistance as well.
 func TestPropertyProbabilityBound(t *testing.T) {
@@ -63,7 +63,7 @@ func TestPropertyProbabilityBound(t *testing.T) {
 	})
 }
 
-// Nielsen & Chuang §4.5.3 (eq. 4.69): ‖U_N⋯U_1 − V_N⋯V_1‖ ≤ Σ‖U_k − V_k‖, and
+// Nielsen & Chuang §4.5.3: ‖U_N⋯U_1 − V_N⋯V_1‖ ≤ Σ‖U_k − V_k‖, and
 // the same for the phase-free distance, since each factor's phase may be
 // chosen separately (DESIGN.md).
 func TestPropertyErrorsAddUp(t *testing.T) {

@@ -8,7 +8,7 @@ import (
 )
 
 // Pure-state trace distance sqrt(1 − |⟨a|b⟩|²) and fidelity |⟨a|b⟩|²
-// (Nielsen & Chuang §9.2.3, eq. 9.60 and §9.2.2) on states worked by hand.
+// (Nielsen & Chuang §9.2; section numbers from memory) on states worked by hand.
 func TestStateDistanceByHand(t *testing.T) {
 	s := 1 / math.Sqrt2
 	zero, one := []complex128{1, 0}, []complex128{0, 1}
@@ -25,8 +25,8 @@ func TestStateDistanceByHand(t *testing.T) {
 }
 
 // Trace distance of density matrices: ½ Σ|λ_i(ρ − σ)| (Nielsen & Chuang
-// §9.2.1). |0⟩⟨0| vs |1⟩⟨1| is 1; |0⟩⟨0| vs I/2 is ½; for pure states it
-// agrees with StateDistance (eq. 9.60).
+// §9.2.1, from memory). |0⟩⟨0| vs |1⟩⟨1| is 1; |0⟩⟨0| vs I/2 is ½; for pure
+// states it agrees with StateDistance (same section).
 func TestTraceDistance(t *testing.T) {
 	p0 := mat.NewCDense(2, 2, []complex128{1, 0, 0, 0})
 	p1 := mat.NewCDense(2, 2, []complex128{0, 0, 0, 1})
