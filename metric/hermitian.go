@@ -5,7 +5,6 @@ import (
 	"runtime"
 	"sync"
 
-	"gonum.org/v1/gonum/lapack"
 	lapackgonum "gonum.org/v1/gonum/lapack/gonum"
 )
 
@@ -209,9 +208,9 @@ func sweepKernelGo(col, v, w, y, x []complex128, p, q, r complex128) complex128 
 
 // reflector turns x into the vector v of a Householder reflector
 // H = I − tau·v·vᴴ with Hᴴ·x = (beta, 0, …, 0), beta real: x[0] is left for
-// the caller, x[1:] becomes v[1:] (v[0] = 1). It follows LAPACK's zlarfg
-// without the rescaling for tiny norms, which the unit-scale inputs of this
-// package do not need.
+// the caller, x[1:] becomes v[1:] (v[0] = 1). It follows LAPACK's zlarfg,
+// with the norm summed over entries scaled by the largest one instead of
+// zlarfg's repeated rescaling.
 func reflector(x []complex128) (beta float64, tau complex128) {
 	alpha := x[0]
 	ar, ai := real(alpha), imag(alpha)
@@ -274,20 +273,12 @@ func (t *tridiagonal) values() ([]float64, bool) {
 	return t.diag, ok
 }
 
-// vectors returns the eigenvalues of T in ascending order, overwriting diag
-// and off, and puts the eigenvectors of T into the columns of z (row-major
-// n×n). work needs length max(1, 2n−2).
-func (t *tridiagonal) vectors(z, work []float64) ([]float64, bool) {
-	ok := lapackgonum.Implementation{}.Dsteqr(lapack.EVTridiag, t.n, t.diag, t.off, z, t.n, work)
-	return t.diag, ok
-}
-
-// backTransform turns an eigenvector of T, given as column j of the
-// row-major real matrix z, into the eigenvector Q·y of the original matrix.
-func (t *tridiagonal) backTransform(z []float64, j int, dst []complex128) []complex128 {
+// backTransform turns an eigenvector y of T into the eigenvector Q·y of the
+// original matrix, written to dst.
+func (t *tridiagonal) backTransform(y []float64, dst []complex128) []complex128 {
 	n := t.n
 	for i := 0; i < n; i++ {
-		dst[i] = complex(z[i*n+j], 0)
+		dst[i] = complex(y[i], 0)
 	}
 	for k := n - 2; k >= 0; k-- {
 		tau := t.tau[k]

@@ -25,12 +25,29 @@ func OperatorNorm(a mat.CMatrix) float64 {
 // PhaseDistance takes it out.
 func Distance(u, v mat.CMatrix) float64 {
 	n := pairSize("Distance", u, v)
-	d := rowMajor(u, nil)
-	w := rowMajor(v, nil)
-	for i, x := range w {
-		d[i] -= x
+	return operatorNorm(difference(u, v), n, n)
+}
+
+// difference returns a − b row-major, for matrices of equal size.
+func difference(a, b mat.CMatrix) []complex128 {
+	d := rowMajor(a, nil)
+	r, c := b.Dims()
+	if m, ok := b.(*mat.CDense); ok {
+		raw := m.RawCMatrix()
+		for i := 0; i < r; i++ {
+			row := raw.Data[i*raw.Stride : i*raw.Stride+c]
+			for j, x := range row {
+				d[i*c+j] -= x
+			}
+		}
+		return d
 	}
-	return operatorNorm(d, n, n)
+	for i := 0; i < r; i++ {
+		for j := 0; j < c; j++ {
+			d[i*c+j] -= b.At(i, j)
+		}
+	}
+	return d
 }
 
 // operatorNorm is OperatorNorm of the r×c row-major matrix a.
@@ -71,8 +88,10 @@ func hermitianValues(g []complex128, k int) []float64 {
 	vals, ok := t.values()
 	if !ok {
 		// Dsterf gives up only after 30·k QR sweeps, which a Hermitian
-		// matrix built from finite numbers does not need.
-		panic("metric: tridiagonal eigenvalue iteration did not converge")
+		// matrix of finite numbers does not need: the input held NaN or ±Inf.
+		for i := range vals {
+			vals[i] = math.NaN()
+		}
 	}
 	return vals
 }

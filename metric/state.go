@@ -7,7 +7,7 @@ import (
 )
 
 // StateDistance returns the trace distance ½‖|a⟩⟨a| − |b⟩⟨b|‖₁ of two pure
-// states, sqrt(1 − |⟨a|b⟩|²) (Nielsen & Chuang §9.2.3). It bounds how much
+// states, sqrt(1 − |⟨a|b⟩|²) (Nielsen & Chuang §9.2, from memory). It bounds how much
 // any measurement's outcome probabilities can differ between the two states.
 // The vectors are normalised first, so only their directions matter; global
 // phase does not count. It is computed as the length of the part of b̂
@@ -37,17 +37,13 @@ func StateFidelity(a, b []complex128) float64 {
 }
 
 // TraceDistance returns ½‖ρ − σ‖₁, half the sum of the absolute eigenvalues
-// of ρ − σ, for two n×n density matrices (Nielsen & Chuang §9.2.1). It is the
+// of ρ − σ, for two n×n density matrices (Nielsen & Chuang §9.2.1, from memory). It is the
 // largest difference in probability that any measurement can show between
 // them. Both are trusted to be Hermitian; their difference is symmetrised
 // before its eigenvalues are taken.
 func TraceDistance(rho, sigma mat.CMatrix) float64 {
 	n := pairSize("TraceDistance", rho, sigma)
-	d := rowMajor(rho, nil)
-	s := rowMajor(sigma, nil)
-	for i, x := range s {
-		d[i] -= x
-	}
+	d := difference(rho, sigma)
 	// Read column-major the buffer is (ρ − σ)ᵀ, Hermitian with the same
 	// eigenvalues; average it with its adjoint on the lower triangle.
 	for j := 0; j < n; j++ {
@@ -62,7 +58,8 @@ func TraceDistance(rho, sigma mat.CMatrix) float64 {
 	return sum / 2
 }
 
-// inner returns ⟨a|b⟩ = Σ conj(a_i)·b_i.
+// inner returns ⟨a|b⟩ = Σ conj(a_i)·b_i; for two matrices stored the same
+// way it is tr(a†b).
 func inner(a, b []complex128) complex128 {
 	var s complex128
 	b = b[:len(a)]
