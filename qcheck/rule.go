@@ -19,6 +19,10 @@ const (
 	ruleContextOps  = 6 // at most this many ops before and after the rule
 )
 
+// ruleGateWeight is how much more often the rule's own gates appear around it than the common
+// gates: a matcher bug needs a gate of the pattern nearby to show.
+const ruleGateWeight = 4
+
 // ruleContextGates are the common gates CheckRule surrounds a rule with.
 var ruleContextGates = []string{"h", "x", "s", "t", "sdg", "rz", "rx", "cx", "cz"}
 
@@ -138,8 +142,8 @@ type drawnPlacement gen.Embedding
 // GoString implements fmt.GoStringer for rapid's log of draws.
 func (d drawnPlacement) GoString() string { return fmt.Sprintf("rule qubits on %v", d.Qubits) }
 
-// contextOptions are the surroundings of a rule on w qubits: common gates and the rule's own
-// gates (custom ones included), so that a matcher that ignores qubits, reads through
+// contextOptions are the surroundings of a rule on w qubits: the rule's own gates (custom ones
+// included, listed first and drawn more often) and common gates, so that a matcher that ignores qubits, reads through
 // intervening gates or misplaces its result meets the situations that expose it.
 func contextOptions(left *circuit.Circuit, w int) gen.Options {
 	opts := gen.Options{Qubits: w, MaxOps: ruleContextOps}
@@ -155,13 +159,15 @@ func contextOptions(left *circuit.Circuit, w int) gen.Options {
 			opts.GateSet = append(opts.GateSet, g.Name)
 		}
 	}
+	opts.Weights = map[string]int{}
+	for _, op := range left.Ops {
+		add(op.Gate)
+		opts.Weights[op.Gate.Name] = ruleGateWeight
+	}
 	for _, name := range ruleContextGates {
 		spec, _ := circuit.Lookup(name)
 		g, _ := circuit.NewGate(name, make([]float64, spec.Params)...)
 		add(g)
-	}
-	for _, op := range left.Ops {
-		add(op.Gate)
 	}
 	return opts
 }
