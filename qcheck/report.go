@@ -331,7 +331,7 @@ func (f *Failure) Report() string {
 	case f.Seed != 0:
 		fmt.Fprintf(&b, "-rapid.seed=%d\n", f.Seed)
 	default:
-		b.WriteString("rapid prints the -rapid.seed and the fail file under testdata/rapid/ to rerun with\n")
+		b.WriteString("rerun the test with the -rapid.seed (or -rapid.failfile) that rapid printed above\n")
 	}
 	return b.String()
 }
