@@ -9,12 +9,17 @@ import (
 
 // Benchmarks. Run briefly on a shared machine, e.g.
 //
-//	go test -run='^$' -bench=. -benchtime=1x ./gen/        (the 10-qubit pair)
-//	go test -run='^$' -bench=Circuit -benchtime=2000x ./gen/
+//	go test -run='^$' -bench='Unitary10|QR10' -benchtime=1x -count=3 ./gen/
+//	go test -run='^$' -bench='Circuit|Clifford' -benchtime=3000x -count=3 ./gen/
+//
+// Each also reports cpu-ns/op, the process's CPU time per op, which a busy
+// machine inflates far less than ns/op (the QR uses all cores, so its
+// cpu-ns/op is summed over them).
 
 // BenchmarkHaarUnitary10 draws a 10-qubit Haar unitary through rapid: seed
 // bits, 2^21 Gaussian variates, the QR and the phase fix.
 func BenchmarkHaarUnitary10(b *testing.B) {
+	defer reportCPU(b)()
 	g := Unitary(10)
 	for i := 0; b.Loop(); i++ {
 		g.Example(i)
@@ -36,6 +41,7 @@ func benchmarkQR(b *testing.B, d int) {
 	for i := range a {
 		a[i] = complex(rng.NormFloat64(), rng.NormFloat64())
 	}
+	defer reportCPU(b)()
 	for b.Loop() {
 		copy(work, a)
 		householderQR(work, d)
@@ -46,6 +52,7 @@ func benchmarkQR(b *testing.B, d int) {
 // default gate set with motifs.
 func BenchmarkCircuit3x30(b *testing.B) {
 	g := Circuit(Options{Qubits: 3, MinOps: 30, MaxOps: 30})
+	defer reportCPU(b)()
 	for i := 0; b.Loop(); i++ {
 		g.Example(i)
 	}
@@ -56,6 +63,7 @@ func BenchmarkCircuit3x30(b *testing.B) {
 func BenchmarkCircuit3x30InCheck(b *testing.B) {
 	g := Circuit(Options{Qubits: 3, MinOps: 30, MaxOps: 30})
 	n := 0
+	defer reportCPU(b)()
 	rapid.Check(b, func(t *rapid.T) {
 		for range b.N / 100 {
 			g.Draw(t, "c")
@@ -67,6 +75,7 @@ func BenchmarkCircuit3x30InCheck(b *testing.B) {
 // BenchmarkClifford5 draws a uniform 5-qubit Clifford circuit.
 func BenchmarkClifford5(b *testing.B) {
 	g := Clifford(5)
+	defer reportCPU(b)()
 	for i := 0; b.Loop(); i++ {
 		g.Example(i)
 	}

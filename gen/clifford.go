@@ -26,8 +26,8 @@ import (
 // The randomness is drawn bit by bit through rapid without rapid's lean
 // toward small values, so draws inside a property test are exactly uniform;
 // a failing case shrinks toward the identity (the empty circuit) through
-// Cliffords whose images are close to X_k and Z_k. Each draw costs O(n³)
-// bit operations and O(n²) gates. With qubits < 1 every draw fails the test
+// Cliffords whose images are close to X_k and Z_k. A draw makes O(n²)
+// draws and gates. With qubits < 1 every draw fails the test
 // with an error saying so.
 func Clifford(qubits int) *rapid.Generator[*circuit.Circuit] {
 	if qubits < 1 {

@@ -2,11 +2,13 @@ package gen
 
 import (
 	"fmt"
+	"math/cmplx"
 	"slices"
 	"strings"
 	"testing"
 
 	"qcheck.dev/qcheck/circuit"
+	"qcheck.dev/qcheck/sim"
 )
 
 func TestEmbedMapsEveryOp(t *testing.T) {
@@ -37,6 +39,49 @@ func TestEmbedMapsEveryOp(t *testing.T) {
 	}
 	if !small.Equal(before) {
 		t.Fatal("Embed modified the circuit it was given")
+	}
+}
+
+func TestEmbedActsOnItsQubitsOnly(t *testing.T) {
+	// The embedded circuit's matrix is the small one on the chosen qubits
+	// tensored with the identity on the idle ones (Nielsen & Chuang §2.1.7):
+	// entry (i, j) is U_small(s(i), s(j)) when i and j agree on every idle
+	// qubit and 0 otherwise, s reading the chosen qubits' bits in order.
+	small := circuit.New(2).H(0).CX(0, 1).RY(0.3, 1).CP(0.7, 1, 0)
+	us, err := sim.Unitary(small)
+	if err != nil {
+		t.Fatal(err)
+	}
+	for seed := range 5 {
+		e := Embed(small, 4).Example(seed)
+		uw, err := sim.Unitary(e.Circuit)
+		if err != nil {
+			t.Fatal(err)
+		}
+		sub := func(i int) int {
+			s := 0
+			for k, q := range e.Qubits {
+				s |= (i >> q & 1) << k
+			}
+			return s
+		}
+		idle := 0
+		for q := range 4 {
+			if !slices.Contains(e.Qubits, q) {
+				idle |= 1 << q
+			}
+		}
+		for i := range 16 {
+			for j := range 16 {
+				want := complex(0, 0)
+				if i&idle == j&idle {
+					want = us.At(sub(i), sub(j))
+				}
+				if cmplx.Abs(uw.At(i, j)-want) > 1e-12 {
+					t.Fatalf("seed %d, placement %v: U[%d,%d] = %v, want %v", seed, e.Qubits, i, j, uw.At(i, j), want)
+				}
+			}
+		}
 	}
 }
 

@@ -145,14 +145,17 @@ func traceMomentsCheck(us []*mat.CDense, alpha float64) string {
 }
 
 func TestUnitaryTraceMoments(t *testing.T) {
-	// Three dimensions × two moments; traceMomentsCheck runs both moments at
-	// alpha each, so alpha = 1e-6/6 keeps the run's false failure ≤ 1e-6.
+	// Three dimensions × two sources (Example, rapid.Check) × two moments;
+	// traceMomentsCheck runs both moments at alpha each, so alpha = 1e-6/12
+	// keeps the run's false failure ≤ 1e-6.
 	n := sampleSize(20000, 10)
-	alpha := falseFailure / 6
+	alpha := falseFailure / 12
 	for _, qubits := range []int{1, 2, 3} {
-		us, _ := drawAll(t, Unitary(qubits), n, 50000*qubits)
-		if msg := traceMomentsCheck(us, alpha); msg != "" {
-			t.Errorf("d=%d: %s", 1<<qubits, msg)
+		example, checked := drawAll(t, Unitary(qubits), n, 50000*qubits)
+		for name, us := range map[string][]*mat.CDense{"Example": example, "rapid.Check": checked} {
+			if msg := traceMomentsCheck(us, alpha); msg != "" {
+				t.Errorf("d=%d via %s: %s", 1<<qubits, name, msg)
+			}
 		}
 	}
 }
@@ -334,4 +337,20 @@ func TestDrawsDoNotRepeat(t *testing.T) {
 		t.Fatalf("seeds from rapid.Uint64 repeated only %d times in %d draws; the rationale in bits.go is stale", repeats, n)
 	}
 	t.Logf("seeds from rapid.Uint64: %d repeats in %d draws", repeats, n)
+}
+
+func TestUnitaryShrinksToSeedZero(t *testing.T) {
+	// A failing Haar draw shrinks to the unitary of seed 0, still generic.
+	got := shrunk(t, Unitary(1), func(*mat.CDense) bool { return true })
+	want := haarUnitary(rand.New(rand.NewPCG(0, sourceStream)), 2)
+	for i := range 2 {
+		for j := range 2 {
+			if got.At(i, j) != want.At(i, j) {
+				t.Fatalf("shrunk unitary %v, want seed 0's %v", got, want)
+			}
+		}
+	}
+	if cmplx.Abs(want.At(0, 0)) < 1e-3 || cmplx.Abs(want.At(0, 1)) < 1e-3 {
+		t.Errorf("seed 0 gives a special-looking unitary %v", want)
+	}
 }

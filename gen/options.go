@@ -39,7 +39,8 @@ type Options struct {
 	// of the structure that rewrite passes look for, instead of a single
 	// op: runs of gates on the same qubits, a gate and (a few ops later)
 	// its inverse, runs of commuting diagonal gates, and a block of ops
-	// repeated two or three times. 0 means 30; a negative value means none.
+	// repeated two or three times. 0 means 30; a negative value means none;
+	// at most 100.
 	Motifs int
 }
 

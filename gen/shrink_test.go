@@ -22,10 +22,14 @@ func shrunk[V any](t *testing.T, g *rapid.Generator[V], fails func(V) bool) V {
 // the one it shrank from.
 func shrunkFrom[V any](t *testing.T, g *rapid.Generator[V], fails func(V) bool) (minimal, first V) {
 	t.Helper()
-	// A probe's failure is expected: write no fail file. Fix the seed so
-	// that the case rapid shrinks from is the same on every run.
+	// A probe's failure is expected: write no fail file. Fix the seed and
+	// the number of cases so that the case rapid shrinks from is the same on
+	// every run, and give the shrinker time enough on a busy machine, so that
+	// where it ends does not depend on the load.
 	defer setFlag(t, "rapid.nofailfile", "true")()
 	defer setFlag(t, "rapid.seed", "12345")()
+	defer setFlag(t, "rapid.checks", "1000")()
+	defer setFlag(t, "rapid.shrinktime", "10m")()
 
 	rec := &recorder{name: t.Name()}
 	found := false

@@ -25,4 +25,3 @@ func TestOperatorNormOfWidelyScaledEntries(t *testing.T) {
 		t.Errorf("OperatorNorm = %g, want %g", got, want)
 	}
 }
-

@@ -51,6 +51,10 @@ func compare(cfg *config, want, got *circuit.Circuit, full bool) (Result, error)
 	switch eng {
 	case Dense:
 		err = compareDense(cfg, f, &r, full)
+	case Tableau:
+		err = compareTableau(cfg, f, &r)
+	case MatrixFree:
+		err = compareMatrixFree(cfg, f, &r, full)
 	default:
 		err = fmt.Errorf("qcheck: engine %v is not wired into Compare", eng)
 	}

@@ -197,6 +197,14 @@ const (
 	// Dense builds both unitaries as 2^n × 2^n matrices: exact to floating-point rounding,
 	// practical up to about 12 qubits.
 	Dense
+	// Tableau compares how two Clifford circuits conjugate the Pauli generators X_q and Z_q
+	// (stabilizer tableaux, Aaronson & Gottesman 2004): exact, for thousands of qubits, and for
+	// Clifford circuits only.
+	Tableau
+	// MatrixFree estimates the phase-free distance from runs of both circuits on statevectors
+	// (a Krylov iteration on V†U), without forming either matrix: for 13 to about 24 qubits. Its
+	// witness certifies a lower bound; its upper bound holds with a stated probability.
+	MatrixFree
 )
 
 func (e Engine) String() string {
@@ -205,6 +213,10 @@ func (e Engine) String() string {
 		return "auto"
 	case Dense:
 		return "dense"
+	case Tableau:
+		return "tableau"
+	case MatrixFree:
+		return "matrix-free"
 	}
 	return fmt.Sprintf("Engine(%d)", int(e))
 }
@@ -215,7 +227,7 @@ func (e Engine) MarshalText() ([]byte, error) { return []byte(e.String()), nil }
 // UseEngine overrides the automatic choice of engine.
 func UseEngine(e Engine) Option {
 	return optionFunc(func(c *config) error {
-		if e != Auto && e != Dense {
+		if e < Auto || e > MatrixFree {
 			return fmt.Errorf("qcheck: UseEngine(%v): unknown engine", e)
 		}
 		c.engine = e

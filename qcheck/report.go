@@ -179,6 +179,15 @@ func ketOrder(n int) string {
 // bound.
 func (r Result) writeEvidence(b *strings.Builder) {
 	n := r.Qubits
+	if p := r.Pauli; p != nil {
+		b.WriteString("\nwitness Pauli (the tableau engine; strings list qubits that are not I):\n")
+		fmt.Fprintf(b, "  want maps %s to %s, got maps it to %s\n", p.Generator, p.Want, p.Got)
+		if p.Anticommute {
+			fmt.Fprintf(b, "  prepare any state that %s leaves unchanged and measure the observable %s:\n", p.Generator, p.Want)
+			b.WriteString("  +1 with probability 1 after want, 1/2 after got (the two images anticommute)\n")
+		}
+		fmt.Fprintf(b, "  so the distance up to global phase is at least %.4g (half of ‖%s − %s‖)\n", r.Distance, p.Want, p.Got)
+	}
 	if r.Witness != nil {
 		fmt.Fprintf(b, "\nwitness input ψ (kets are %s: qubit 0 is the rightmost bit):\n", ketOrder(n))
 		b.WriteString(wrapList("  ψ = ", strings.Fields(Ket(r.Witness, n)), " "))

@@ -44,6 +44,10 @@ type Result struct {
 	// Chuang §4.5.3).
 	OperatorDistance float64
 
+	// Pauli is the tableau engine's witness when it answered and the circuits differ: a Pauli
+	// generator the two circuits conjugate differently. Nil otherwise.
+	Pauli *PauliEvidence
+
 	// Blame points at the ops that explain a difference, when they can be found.
 	Blame Blame
 

@@ -25,20 +25,24 @@
 //
 // OpenQASM 2.0 defines its built-in U(θ,φ,λ) as Rz(φ)Ry(θ)Rz(λ), which is e^{−i(φ+λ)/2} times
 // the u(θ,φ,λ) of package circuit, and so defines every gate only up to a global phase. Parse
-// gives each gate the textbook matrix of package circuit, so a parsed gate may differ from the
-// matrix of its qelib1 body by a global phase, never by a relative one:
+// gives each gate name the textbook matrix of package circuit. testdata/qasm/qelib1_phases.py
+// (NumPy) compares the qelib1 bodies of the 2017 paper, read with the spec's U, against these
+// matrices; its output, qelib1_phases.out, gives the global phase of each:
 //
 //   - the same name, our matrix: id x y z h s sdg t tdg sx sxdg rx ry rz p u cx cy cz ch cp crx
-//     cry crz swap rxx rzz ccx cswap. For the gates without controls this may differ from the
-//     qelib1 body by a global phase (for u it is e^{−i(φ+λ)/2}; for rz, which qelib1 writes as
-//     u1, the choice of u1 decides it); the controlled gates are the exact controlled forms of
-//     our single-qubit matrices, since there the relative phase matters (cp is not crz).
-//   - U → u; CX → cx; u3(θ,φ,λ) → u(θ,φ,λ); u2(φ,λ) → u(π/2,φ,λ); u1(λ) → p(λ) (equal to rz(λ)
-//     up to e^{iλ/2}); u0(γ) → id; cu1(λ) → cp(λ).
-//   - expanded into exact sequences (the controlled matrix of the textbook gate, phase
-//     included): cu3(θ,φ,λ) → controlled u(θ,φ,λ) with five gates; cu(θ,φ,λ,γ) → p(γ) on the
-//     control then cu3; csx → h, cp(π/2), h; c3x, c3sqrtx and c4x → multiply controlled X or √X
-//     built from cp, cx, ccx and h (Barenco et al., Phys. Rev. A 52 (1995), Lemma 7.1).
+//     cry crz swap rxx rzz ccx cswap. Where qelib1 has a body it differs from ours by a global
+//     phase only: u3 and u2 by e^{−i(φ+λ)/2}, x y z h by e^{−iπ/2}, s t and u1 by e^{−iλ/2},
+//     cz by −1, ch by e^{−iπ/4}; rx, ry, rz, cy and crz agree exactly.
+//   - U → u; CX → cx; u3(θ,φ,λ) → u(θ,φ,λ); u2(φ,λ) → u(π/2,φ,λ); u1(λ) → p(λ) (the spec's u1
+//     is Rz(λ), equal to p(λ) up to e^{−iλ/2}); u0(γ) → id; cu1(λ) → cp(λ) (up to a global
+//     phase).
+//   - expanded into exact sequences, phase included: cu3(θ,φ,λ) → the controlled form of the
+//     matrix Parse gives u3, controlled-u(θ,φ,λ), in five gates; cu(θ,φ,λ,γ) → p(γ) on the
+//     control then cu3; csx → h, cp(π/2), h; c3x, c3sqrtx and c4x → multiply controlled X or
+//     √X built from cp, cx, ccx and h (Barenco et al., Phys. Rev. A 52 (1995), Lemma 7.1).
+//     Beware: the 2017 body of cu3, read with the spec's U, is controlled-Rz(φ)Ry(θ)Rz(λ),
+//     which differs from controlled-u by the relative phase p(−(φ+λ)/2) on the control; a file
+//     that relies on that body should define its own gate instead of calling cu3.
 //   - not supported (an error naming them): the relative-phase Toffolis rccx and rc3x.
 //
 // # Entry points

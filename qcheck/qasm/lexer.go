@@ -44,6 +44,9 @@ type lexer struct {
 // next returns the next token, or an error for a byte that starts no token.
 func (l *lexer) next() (token, error) {
 	src := l.src
+	if l.pos == 0 && len(src) >= 3 && src[0] == 0xEF && src[1] == 0xBB && src[2] == 0xBF {
+		l.pos = 3 // a UTF-8 byte order mark, as some editors write
+	}
 	for l.pos < len(src) {
 		c := src[l.pos]
 		if c == ' ' || c == '\t' || c == '\n' || c == '\r' || c == '\f' || c == '\v' {

@@ -51,6 +51,8 @@ func TestParseStatements(t *testing.T) {
 		{"reset broadcast", head + "qreg q[2];\nreset q;", circuit.New(2).Reset(0).Reset(1)},
 		{"measure registers pairwise", head + "qreg q[2];\ncreg c[3];\ncreg d[2];\nmeasure q -> d;\nmeasure q[1] -> c[2];",
 			circuit.New(2).Measure(0, 3).Measure(1, 4).Measure(1, 2)},
+		{"byte order mark and CRLF line ends", "\xEF\xBB\xBFOPENQASM 2.0;\r\ninclude \"qelib1.inc\";\r\nqreg q[1];\r\nx q[0];\r\n",
+			circuit.New(1).X(0)},
 		{"comments anywhere", "// first\nOPENQASM 2.0; // header\ninclude \"qelib1.inc\"; //\nqreg q[1]; // x\nx q[0]; // done",
 			circuit.New(1).X(0)},
 		{"redefining a qelib1 gate applies to later calls", head + "qreg q[1];\nh q[0];\ngate h a { x a; }\nh q[0];",

@@ -1,6 +1,8 @@
 package sim
 
-import "sort"
+import (
+	"slices"
+)
 
 // The engines share one kernel design. Amplitudes live in a flat array whose index holds basis
 // states bit by bit; a k-qubit gate acts on k bit positions of that index. A statevector of n
@@ -17,8 +19,8 @@ import "sort"
 type kernelKind uint8
 
 const (
-	// pairKind: a 2×2 block acting on two local states, every other local state left alone
-	// (a one-qubit gate, or a controlled one-qubit gate).
+	// pairKind: 2×2 blocks, each mixing two local states, every other local state left alone
+	// (a one-qubit gate, a controlled one-qubit gate, rxx and ryy).
 	pairKind kernelKind = iota
 	// diagonalKind: each moved local state is multiplied by a phase (rz, p, cz, cp, crz, rzz, t, …).
 	diagonalKind
@@ -39,9 +41,8 @@ type kernel struct {
 	offs   []int        // offs[a] is the index offset of local state a within a group
 	m      []complex128 // the gate's matrix, row-major 2^k × 2^k in local order
 
-	// pairKind: the index offsets of the two local states it moves, and the 2×2 block.
-	p0, p1             int
-	m00, m01, m10, m11 complex128
+	// pairKind: the 2×2 blocks.
+	pairs []pairBlock
 	// diagonalKind and swapKind: local states multiplied by a phase in place.
 	scale []scaled
 	// swapKind: pairs of local states exchanged with phases.
@@ -51,6 +52,12 @@ type kernel struct {
 	rows  []sparseRow
 	// scratchLen is the length of the per-call buffer the sparse kernel needs.
 	scratchLen int
+}
+
+// pairBlock mixes the amplitudes at index offsets o0 and o1 of each group by a 2×2 matrix.
+type pairBlock struct {
+	o0, o1             int
+	m00, m01, m10, m11 complex128
 }
 
 // scaled multiplies the amplitude at index offset off of each group by v.
@@ -90,7 +97,7 @@ func newKernel(m []complex128, bits []uint) *kernel {
 		kn.offs[a] = off
 	}
 	kn.sorted = append([]uint(nil), bits...)
-	sort.Slice(kn.sorted, func(i, j int) bool { return kn.sorted[i] < kn.sorted[j] })
+	slices.Sort(kn.sorted)
 
 	// Active rows are the local states the gate moves: rows other than e_a.
 	var active []int
@@ -105,14 +112,6 @@ func newKernel(m []complex128, bits []uint) *kernel {
 		if !identity {
 			active = append(active, a)
 		}
-	}
-	isActive := func(a int) bool {
-		for _, x := range active {
-			if x == a {
-				return true
-			}
-		}
-		return false
 	}
 	// single returns the column of the one nonzero entry of row a, or −1.
 	single := func(a int) int {
@@ -135,7 +134,7 @@ func newKernel(m []complex128, bits []uint) *kernel {
 			monomial, diagonal = false, false
 		case c != a:
 			diagonal = false
-			if single(c) != a || !isActive(c) { // only exchanges of two states
+			if single(c) != a || !slices.Contains(active, c) { // only exchanges of two states
 				monomial = false
 			}
 		}
@@ -156,11 +155,13 @@ func newKernel(m []complex128, bits []uint) *kernel {
 				kn.swaps = append(kn.swaps, swapped{kn.offs[a], kn.offs[c], m[a*d+c], m[c*d+a]})
 			}
 		}
-	case len(active) == 2 && pairOnly(m, d, active[0], active[1]):
+	case pairUp(m, d, active) != nil:
 		kn.kind = pairKind
-		a, b := active[0], active[1]
-		kn.p0, kn.p1 = kn.offs[a], kn.offs[b]
-		kn.m00, kn.m01, kn.m10, kn.m11 = m[a*d+a], m[a*d+b], m[b*d+a], m[b*d+b]
+		for _, ab := range pairUp(m, d, active) {
+			a, b := ab[0], ab[1]
+			kn.pairs = append(kn.pairs, pairBlock{kn.offs[a], kn.offs[b],
+				m[a*d+a], m[a*d+b], m[b*d+a], m[b*d+b]})
+		}
 	case k == 2:
 		kn.kind = dense2Kind // zeros cost less than the sparse kernel's indirection
 	default:
@@ -194,7 +195,7 @@ func (kn *kernel) cost(sweepCost float64) float64 {
 	d := float64(int(1) << kn.qubits)
 	switch kn.kind {
 	case pairKind:
-		return (2*sweepCost + 4) / d
+		return float64(len(kn.pairs)) * (2*sweepCost + 4) / d
 	case diagonalKind:
 		return float64(len(kn.scale)) * (sweepCost + 1) / d
 	case swapKind:
@@ -216,16 +217,34 @@ func (kn *kernel) cost(sweepCost float64) float64 {
 	return c / d
 }
 
-// pairOnly reports whether rows a and b of m have their nonzero entries in columns a and b only.
-func pairOnly(m []complex128, d, a, b int) bool {
-	for _, r := range []int{a, b} {
-		for c, v := range m[r*d : r*d+d] {
-			if v != 0 && c != a && c != b {
-				return false
+// pairUp splits the active rows of m into pairs {a, b} whose rows have their nonzero entries in
+// columns a and b only, each row with one off-diagonal entry; it returns nil when they do not
+// split so.
+func pairUp(m []complex128, d int, active []int) [][2]int {
+	// partner returns the one column off the diagonal where row a is nonzero, or −1.
+	partner := func(a int) int {
+		p := -1
+		for c, v := range m[a*d : a*d+d] {
+			if v != 0 && c != a {
+				if p >= 0 {
+					return -1
+				}
+				p = c
 			}
 		}
+		return p
 	}
-	return true
+	var out [][2]int
+	for _, a := range active {
+		b := partner(a)
+		if b < 0 || partner(b) != a {
+			return nil
+		}
+		if a < b {
+			out = append(out, [2]int{a, b})
+		}
+	}
+	return out
 }
 
 // groups returns the number of groups in an array of the given length.
@@ -233,7 +252,7 @@ func (kn *kernel) groups(length int) int { return length >> kn.qubits }
 
 // apply applies the gate to groups [g0, g1) of data in place.
 func (kn *kernel) apply(data []complex128, g0, g1 int) {
-	if kn.kind == pairKind && kn.sorted[0] == 0 && kn.qubits == 1 {
+	if kn.kind == pairKind && kn.sorted[0] == 0 && kn.qubits == 1 && len(kn.pairs) == 1 {
 		kn.applyLowPair(data, g0, g1)
 		return
 	}
@@ -255,6 +274,10 @@ func (kn *kernel) apply(data []complex128, g0, g1 int) {
 		mask |= 1 << b
 	}
 	run := 1 << kn.sorted[0]
+	if run == 1 && kn.kind == pairKind {
+		kn.pairGroups(data, base, mask, g1-g0)
+		return
+	}
 	for g := g0; g < g1; {
 		r := min(run-g&(run-1), g1-g)
 		switch kn.kind {
@@ -277,8 +300,9 @@ func (kn *kernel) apply(data []complex128, g0, g1 int) {
 
 // applyLowPair is the one-qubit gate on bit 0, where the two amplitudes of a group are adjacent.
 func (kn *kernel) applyLowPair(data []complex128, g0, g1 int) {
-	m00, m01, m10, m11 := kn.m00, kn.m01, kn.m10, kn.m11
-	if kn.p0 != 0 { // the block is stored the other way round
+	p := kn.pairs[0]
+	m00, m01, m10, m11 := p.m00, p.m01, p.m10, p.m11
+	if p.o0 != 0 { // the block is stored the other way round
 		m00, m01, m10, m11 = m11, m10, m01, m00
 	}
 	x := data[2*g0 : 2*g1]
@@ -290,14 +314,30 @@ func (kn *kernel) applyLowPair(data []complex128, g0, g1 int) {
 }
 
 func (kn *kernel) pairRun(data []complex128, base, r int) {
-	x := data[base+kn.p0 : base+kn.p0+r]
-	y := data[base+kn.p1 : base+kn.p1+r]
-	y = y[:len(x)]
-	m00, m01, m10, m11 := kn.m00, kn.m01, kn.m10, kn.m11
-	for j, a := range x {
-		b := y[j]
-		x[j] = m00*a + m01*b
-		y[j] = m10*a + m11*b
+	for _, p := range kn.pairs {
+		x := data[base+p.o0 : base+p.o0+r]
+		y := data[base+p.o1 : base+p.o1+r]
+		y = y[:len(x)]
+		m00, m01, m10, m11 := p.m00, p.m01, p.m10, p.m11
+		for j, a := range x {
+			b := y[j]
+			x[j] = m00*a + m01*b
+			y[j] = m10*a + m11*b
+		}
+	}
+}
+
+// pairGroups is pairRun for a gate on bit 0 and others, where runs are single groups: it walks
+// count groups from base one by one, indexing amplitudes directly.
+func (kn *kernel) pairGroups(data []complex128, base, mask, count int) {
+	for ; count > 0; count-- {
+		for _, p := range kn.pairs {
+			i, j := base+p.o0, base+p.o1
+			a, b := data[i], data[j]
+			data[i] = p.m00*a + p.m01*b
+			data[j] = p.m10*a + p.m11*b
+		}
+		base = ((base | mask) + 1) &^ mask
 	}
 }
 

@@ -18,7 +18,9 @@ func Unitary(c *circuit.Circuit) (*mat.CDense, error) {
 	return UnitaryWithin(c, DefaultMemoryLimit)
 }
 
-// UnitaryWithin is Unitary with an explicit memory limit in bytes.
+// UnitaryWithin is Unitary with an explicit memory limit in bytes for the matrix (16·4^n bytes);
+// besides the matrix the engine uses one cache-sized buffer (256 KiB, more above 14 qubits) per
+// core.
 func UnitaryWithin(c *circuit.Circuit, limit int64) (*mat.CDense, error) {
 	if err := checkUnitary(c); err != nil {
 		return nil, err

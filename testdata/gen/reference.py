@@ -62,5 +62,10 @@ for s in grid:
     diffs.append(abs(f - g))
 for s in (0.25, 0.5, 0.75, 1.0, 1.5, 2.0, 3.0):
     print("cdf", s, repr(float(spacing_cdf(s))), repr(float(surmise_cdf(s))))
+# Self-check: the spacing law has mean 1 (unit mean spacing), i.e. the
+# integral of 1 - F over [0, inf) is 1; the tail beyond s = 4 is below 1e-9.
+xs = np.linspace(0, 4.0, 801)
+tail = np.array([1 - spacing_cdf(x) if x > 0 else 1.0 for x in xs])
+print("mean spacing (want 1)", repr(float(np.trapz(tail, xs))))
 i = int(np.argmax(diffs))
 print("maxdiff", repr(float(diffs[i])), "at s =", repr(float(grid[i])))

@@ -1,0 +1,282 @@
+package qcheck
+
+import (
+	"math"
+	"math/rand/v2"
+	"strings"
+	"testing"
+
+	"gonum.org/v1/gonum/mat"
+	"qcheck.dev/qcheck/circuit"
+)
+
+// randomCircuit draws a circuit over rotations, T, H and controlled gates with a fixed seed.
+func randomCircuit(rng *rand.Rand, n, ops int) *circuit.Circuit {
+	c := circuit.New(n)
+	for range ops {
+		a := rng.IntN(n)
+		b := (a + 1 + rng.IntN(n-1)) % n
+		theta := (2*rng.Float64() - 1) * math.Pi
+		switch rng.IntN(7) {
+		case 0:
+			c.H(a)
+		case 1:
+			c.T(a)
+		case 2:
+			c.RX(theta, a)
+		case 3:
+			c.U(theta, 2*theta, -theta/3, a)
+		case 4:
+			c.CP(theta, a, b)
+		case 5:
+			c.CRY(theta, a, b)
+		default:
+			c.CX(a, b)
+		}
+	}
+	return c
+}
+
+// phaseFlipOnAllOnes is diag(1, …, 1, −1) on n qubits as a custom gate.
+func phaseFlipOnAllOnes(t *testing.T, n int) circuit.Gate {
+	d := 1 << n
+	m := mat.NewCDense(d, d, nil)
+	for i := 0; i < d; i++ {
+		m.Set(i, i, 1)
+	}
+	m.Set(d-1, d-1, -1)
+	g, err := circuit.Custom("flip", m)
+	if err != nil {
+		t.Fatal(err)
+	}
+	return g
+}
+
+// randomCliffordCircuit draws a circuit of h, s, sdg, x, z, cx, cz and swap with a fixed seed.
+func randomCliffordCircuit(rng *rand.Rand, n, ops int) *circuit.Circuit {
+	c := circuit.New(n)
+	for range ops {
+		a := rng.IntN(n)
+		b := (a + 1 + rng.IntN(n-1)) % n
+		switch rng.IntN(8) {
+		case 0:
+			c.H(a)
+		case 1:
+			c.S(a)
+		case 2:
+			c.Sdg(a)
+		case 3:
+			c.X(a)
+		case 4:
+			c.Z(a)
+		case 5:
+			c.CZ(a, b)
+		case 6:
+			c.SWAP(a, b)
+		default:
+			c.CX(a, b)
+		}
+	}
+	return c
+}
+
+// The tableau engine against the dense one on random Clifford pairs of up to 8 qubits: the same
+// verdict, and when they differ, the dense phase-free distance is at least the tableau's lower
+// bound (the bound ‖A − B‖ ≤ 2‖U − e^{iφ}V‖ derived in compareTableau).
+func TestTableauAgreesWithDense(t *testing.T) {
+	rng := rand.New(rand.NewPCG(7, 11))
+	differ := 0
+	for trial := range 60 {
+		n := 1 + trial%8
+		if n == 1 {
+			n = 2
+		}
+		want := randomCliffordCircuit(rng, n, 4*n)
+		got := want.Clone()
+		if trial%3 != 0 { // change one op so that some pairs differ and some do not
+			i := rng.IntN(len(got.Ops))
+			got.Ops[i] = circuit.Op{Gate: circuit.Gate{Name: []string{"s", "sdg", "h", "x", "z"}[rng.IntN(5)]}, Qubits: []int{got.Ops[i].Qubits[0]}}
+		}
+		tab, err := Compare(want, got, UseEngine(Tableau))
+		if err != nil {
+			t.Fatal(err)
+		}
+		dense, err := Compare(want, got, UseEngine(Dense))
+		if err != nil {
+			t.Fatal(err)
+		}
+		if tab.Equivalent != dense.Equivalent {
+			t.Fatalf("trial %d: tableau says equivalent=%v, dense %v (distance %.3g)\nwant %v\ngot %v", trial, tab.Equivalent, dense.Equivalent, dense.Distance, want, got)
+		}
+		if !tab.Equivalent {
+			differ++
+			if dense.Distance < tab.Distance-1e-12 {
+				t.Fatalf("trial %d: dense distance %.6g is below the tableau's lower bound %.6g", trial, dense.Distance, tab.Distance)
+			}
+			if tab.Pauli == nil {
+				t.Fatalf("trial %d: no Pauli witness", trial)
+			}
+		}
+	}
+	if differ < 10 {
+		t.Fatalf("only %d of 60 pairs differed; the test does not exercise the witness", differ)
+	}
+}
+
+// Wide Clifford circuits go to the tableau automatically: CX(1,0) = (H⊗H) CX(0,1) (H⊗H)
+// (Nielsen & Chuang ex. 4.20) embedded in a 300-qubit random Clifford context, and the near miss
+// S in place of S† there.
+func TestAutoTableauAtWidth(t *testing.T) {
+	rng := rand.New(rand.NewPCG(3, 5))
+	const n = 300
+	pre, post := randomCliffordCircuit(rng, n, 2000), randomCliffordCircuit(rng, n, 2000)
+	a, b := 17, 203
+	want := pre.Clone().CX(b, a).Sdg(a).Compose(post)
+	got := pre.Clone().H(a).H(b).CX(a, b).H(a).H(b).Sdg(a).Compose(post)
+	r, err := Compare(want, got)
+	if err != nil {
+		t.Fatal(err)
+	}
+	if r.Engine != Tableau || !r.Equivalent {
+		t.Fatalf("engine %v, equivalent %v; want the tableau to accept the identity", r.Engine, r.Equivalent)
+	}
+	bad := pre.Clone().H(a).H(b).CX(a, b).H(a).H(b).S(a).Compose(post)
+	r, err = Compare(want, bad)
+	if err != nil {
+		t.Fatal(err)
+	}
+	if r.Equivalent || r.Pauli == nil {
+		t.Fatalf("S in place of S† passed the tableau: %+v", r)
+	}
+	if !strings.Contains(r.Report(), "witness Pauli") {
+		t.Errorf("report does not show the Pauli witness:\n%s", r.Report())
+	}
+}
+
+// The matrix-free engine against the dense one at 6 and 8 qubits: random pairs, a single-angle
+// perturbation, and a defect confined to one basis state (a phase flip on |11…1⟩ built from a
+// doubly controlled Z), which random inputs alone rarely see.
+func TestMatrixFreeAgreesWithDense(t *testing.T) {
+	rng := rand.New(rand.NewPCG(1, 2))
+	for _, n := range []int{6, 8} {
+		base := randomCircuit(rng, n, 6*n)
+		near := base.Clone().RZ(1e-3, n-1)
+		defect := base.Clone().CCZ(0, 1, 2)
+		if n == 8 { // a phase flip on the single basis state |1…1⟩ of the whole register
+			defect = base.Clone().Append(phaseFlipOnAllOnes(t, n), 0, 1, 2, 3, 4, 5, 6, 7)
+		}
+		unrelated := randomCircuit(rng, n, 6*n)
+		for _, got := range []*circuit.Circuit{near, defect, unrelated} {
+			mf, err := Compare(base, got, UseEngine(MatrixFree))
+			if err != nil {
+				t.Fatal(err)
+			}
+			d, err := Compare(base, got, UseEngine(Dense))
+			if err != nil {
+				t.Fatal(err)
+			}
+			// The Krylov estimate is exact once its space holds the extreme eigenvectors of V†U,
+			// which a handful of steps reach for a few distinct eigenphases (near and defect
+			// pairs) but not for the spread spectrum of unrelated circuits; there it may only
+			// fall short, never exceed.
+			switch {
+			case got == unrelated && mf.Distance > d.Distance+1e-9:
+				t.Errorf("%d qubits, unrelated: matrix-free estimate %.10g exceeds dense %.10g", n, mf.Distance, d.Distance)
+			case got != unrelated && math.Abs(mf.Distance-d.Distance) > 1e-8:
+				t.Errorf("%d qubits: matrix-free %.10g, dense %.10g", n, mf.Distance, d.Distance)
+			}
+			if mf.WitnessGap > d.Distance+1e-9 {
+				t.Errorf("%d qubits: certified lower bound %.10g exceeds the dense distance %.10g", n, mf.WitnessGap, d.Distance)
+			}
+			if mf.Equivalent != d.Equivalent {
+				t.Errorf("%d qubits: verdicts differ", n)
+			}
+		}
+	}
+}
+
+// Circuits wider than the dense engine's automatic limit, and not Clifford, go to the matrix-free
+// engine; it accepts a routed circuit with its output permutation and rejects a T† in place of T.
+func TestAutoMatrixFreeAtWidth(t *testing.T) {
+	if testing.Short() {
+		t.Skip("14-qubit statevector runs")
+	}
+	rng := rand.New(rand.NewPCG(9, 9))
+	const n = 14
+	want := randomCircuit(rng, n, 40).T(3).CX(3, 9)
+	// got runs the same circuit and then swaps qubits 3 and 9, reporting that layout.
+	got := want.Clone().SWAP(3, 9)
+	perm := make([]int, n)
+	for i := range perm {
+		perm[i] = i
+	}
+	perm[3], perm[9] = 9, 3
+	r, err := Compare(want, got, OutputPermutation(perm))
+	if err != nil {
+		t.Fatal(err)
+	}
+	if r.Engine != MatrixFree || !r.Equivalent {
+		t.Fatalf("engine %v, equivalent %v, distance %.3g; want the matrix-free engine to accept it", r.Engine, r.Equivalent, r.Distance)
+	}
+	bad := want.Clone()
+	bad.Ops[len(bad.Ops)-2] = circuit.Op{Gate: circuit.Gate{Name: "tdg"}, Qubits: []int{3}}
+	r, err = Compare(want, bad)
+	if err != nil {
+		t.Fatal(err)
+	}
+	// T versus T† differ by diag(1, e^{iπ/2}) on one qubit: 2 sin(π/8) up to phase.
+	if r.Equivalent || math.Abs(r.Distance-2*math.Sin(math.Pi/8)) > 1e-8 {
+		t.Fatalf("T† for T: equivalent %v, distance %.10g, want %.10g", r.Equivalent, r.Distance, 2*math.Sin(math.Pi/8))
+	}
+}
+
+func TestWideEnginesRefuseWhatTheyCannotAnswer(t *testing.T) {
+	c := circuit.New(3).H(0).T(1)
+	if _, err := Compare(c, c, UseEngine(Tableau)); err == nil {
+		t.Error("the tableau accepted a T gate")
+	}
+	if _, err := Compare(c, c, UseEngine(MatrixFree), Measured(0)); err == nil {
+		t.Error("the matrix-free engine accepted Measured")
+	}
+	if _, err := Compare(c, c, UseEngine(MatrixFree), ExactPhase()); err == nil {
+		t.Error("the matrix-free engine accepted ExactPhase")
+	}
+	wide := circuit.New(30).T(0)
+	if _, err := Compare(wide, wide); err == nil {
+		t.Error("a 30-qubit non-Clifford comparison did not say it is too wide")
+	}
+}
+
+// undoLayout composes got with the swaps that undo its layout: checked against the dense engine's
+// relabelling of the matrix on a 5-qubit cyclic layout.
+func TestUndoLayoutMatchesDenseRelabelling(t *testing.T) {
+	rng := rand.New(rand.NewPCG(4, 4))
+	want := randomCircuit(rng, 5, 20)
+	perm := []int{2, 4, 0, 1, 3}
+	// got moves logical i to physical perm[i] with explicit swaps after want.
+	got := want.Clone()
+	moved := undoLayout(circuit.New(5), invert(perm))
+	got.Compose(moved)
+	r, err := Compare(want, got, OutputPermutation(perm))
+	if err != nil {
+		t.Fatal(err)
+	}
+	if !r.Equivalent {
+		t.Fatalf("dense: the routed circuit with its layout differs by %.3g", r.Distance)
+	}
+	r, err = Compare(want, got, OutputPermutation(perm), UseEngine(MatrixFree))
+	if err != nil {
+		t.Fatal(err)
+	}
+	if !r.Equivalent {
+		t.Fatalf("matrix-free: the routed circuit with its layout differs by %.3g", r.Distance)
+	}
+}
+
+func invert(p []int) []int {
+	q := make([]int, len(p))
+	for i, v := range p {
+		q[v] = i
+	}
+	return q
+}
