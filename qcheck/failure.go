@@ -24,6 +24,7 @@ const (
 	BadOutput
 )
 
+// String returns how the pass failed, in words.
 func (k FailureKind) String() string {
 	switch k {
 	case NotEquivalent:
