@@ -40,7 +40,7 @@ var ruleContextGates = []string{"h", "x", "s", "t", "sdg", "rz", "rx", "cx", "cz
 // refused. Like Preserves, a failure is shrunk and reported once, with rapid's replay line.
 func CheckRule(t TB, rule Rule, pass Pass, opts ...Option) {
 	t.Helper()
-	cfg, err := ruleConfig(opts)
+	cfg, err := ruleConfig(rule, opts)
 	if err != nil {
 		t.Fatalf("qcheck.CheckRule: %v", err)
 		return
@@ -51,14 +51,17 @@ func CheckRule(t TB, rule Rule, pass Pass, opts ...Option) {
 // RuleProperty returns the property CheckRule checks, for rapid.Check and rapid.MakeFuzz (see
 // Property for the fuzz target). Bad options fail every check with their error.
 func RuleProperty(rule Rule, pass Pass, opts ...Option) func(*rapid.T) {
-	cfg, err := ruleConfig(opts)
+	cfg, err := ruleConfig(rule, opts)
 	if err != nil {
 		return func(t *rapid.T) { t.Fatalf("qcheck: %v", err) }
 	}
 	return ruleProperty(cfg, rule, pass)
 }
 
-func ruleConfig(opts []Option) (*config, error) {
+func ruleConfig(rule Rule, opts []Option) (*config, error) {
+	if rule == nil {
+		return nil, fmt.Errorf("the rule is nil")
+	}
 	cfg, err := newConfig(opts)
 	if err != nil {
 		return nil, err
