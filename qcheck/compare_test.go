@@ -159,7 +159,7 @@ func TestCompareAgreesWithMetricAndSVD(t *testing.T) {
 	})
 }
 
-// svdPhaseDistance is min over φ of σ_max(U − e^{iφ}V), found by a grid of 360 phases and a
+// svdPhaseDistance is min over φ of σ_max(U − e^{iφ}V), found by a grid of 180 phases and a
 // golden-section search around each local minimum of the grid.
 func svdPhaseDistance(u, v *mat.CDense) float64 {
 	n, _ := u.Dims()
@@ -179,7 +179,7 @@ func svdPhaseDistance(u, v *mat.CDense) float64 {
 		svd.Factorize(emb, mat.SVDNone)
 		return svd.Values(nil)[0]
 	}
-	const grid = 360
+	const grid = 180
 	vals := make([]float64, grid)
 	for k := range vals {
 		vals[k] = f(2 * math.Pi * float64(k) / grid)
@@ -196,7 +196,7 @@ func svdPhaseDistance(u, v *mat.CDense) float64 {
 		r := (math.Sqrt(5) - 1) / 2
 		a, b := hi-r*(hi-lo), lo+r*(hi-lo)
 		fa, fb := f(a), f(b)
-		for i := 0; i < 50; i++ {
+		for i := 0; i < 40; i++ {
 			if fa < fb {
 				hi, b, fb = b, a, fa
 				a = hi - r*(hi-lo)
@@ -321,14 +321,89 @@ func TestBlamePrefix(t *testing.T) {
 func TestResultReportFitsTheTerminal(t *testing.T) {
 	r := mustCompare(t, circuit.New(4).H(0).CX(0, 1).CCX(0, 1, 3).RZ(0.1234567, 2), circuit.New(4).H(0).CX(0, 1).CCX(1, 0, 3).RZ(0.1234, 2))
 	rep := r.Report()
-	for i, line := range strings.Split(rep, "\n") {
-		if n := len([]rune(line)); n > circuit.DrawWidth {
-			t.Errorf("line %d has %d columns: %q", i, n, line)
-		}
-	}
 	for _, s := range []string{"differs from want", "rz(0.12346) q2", "witness input", "kets are |q3 q2 q1 q0⟩"} {
 		if !strings.Contains(rep, s) {
 			t.Errorf("report lacks %q:\n%s", s, rep)
 		}
 	}
+	reports := []string{
+		rep,
+		mustCompare(t, circuit.New(2).H(0).CX(0, 1), circuit.New(2).H(0).CX(0, 1).X(0).H(1), Measured(0)).Report(),
+		mustCompare(t, circuit.New(3).CCX(0, 1, 2), circuit.New(4).CCX(0, 1, 3).CX(3, 2), Ancillas([]int{3}, Clean)).Report(),
+		mustCompare(t, circuit.New(1).P(1, 0), circuit.New(1).RZ(1, 0), ExactPhase()).Report(),
+		mustCompare(t, circuit.New(8).H(7), circuit.New(8).H(7).RX(0.3, 0).RY(0.2, 3).CX(3, 5), UseMeasure(AverageFidelity)).Report(),
+	}
+	for k, rep := range reports {
+		for i, line := range strings.Split(rep, "\n") {
+			if n := len([]rune(line)); n > circuit.DrawWidth {
+				t.Errorf("report %d, line %d has %d columns: %q", k, i, n, line)
+			}
+		}
+	}
+}
+
+// toffoliFig49 appends the Toffoli of Nielsen & Chuang Fig. 4.9 (controls a, b, target c),
+// whose matrix has rounding noise where the exact one has zeros.
+func toffoliFig49(c *circuit.Circuit, a, b, t int) *circuit.Circuit {
+	return c.H(t).CX(b, t).Tdg(t).CX(a, t).T(t).CX(b, t).Tdg(t).CX(a, t).
+		T(b).T(t).H(t).CX(a, b).T(a).Tdg(b).CX(a, b)
+}
+
+// Clean ancillas at the edge of the tolerance: a decomposition with rounding noise on the
+// ancilla passes, and a rotation of the ancilla by rx(θ), which leaves amplitude sin(θ/2) on
+// |1⟩, gives the distance 2·sin(θ/4) (derived by hand: ‖(cos(θ/2) − 1)|0⟩ − i·sin(θ/2)|1⟩‖),
+// resolved far below 1e-8.
+func TestCleanAncillaNearTolerance(t *testing.T) {
+	want := circuit.New(3).CCX(0, 1, 2)
+	exact := toffoliFig49(toffoliFig49(circuit.New(4), 0, 1, 3).CX(3, 2), 0, 1, 3)
+	if r := mustCompare(t, want, exact, Ancillas([]int{3}, Clean)); !r.Equivalent {
+		t.Errorf("Fig. 4.9 Toffoli into a clean ancilla flagged: %s", r.Headline())
+	}
+	for _, theta := range []float64{2e-7, 4e-9, 1e-3} {
+		got := exact.Clone().RX(theta, 3)
+		r := mustCompare(t, want, got, Ancillas([]int{3}, Clean))
+		if d := 2 * math.Sin(theta/4); math.Abs(r.Distance-d) > 1e-3*d {
+			t.Errorf("rx(%g) on the ancilla: distance %g, want %g", theta, r.Distance, d)
+		}
+	}
+}
+
+func TestReportOfEquivalentCircuitsIsShort(t *testing.T) {
+	rep := mustCompare(t, circuit.New(1).P(0.3, 0), circuit.New(1).RZ(0.3, 0)).Report()
+	if !strings.HasPrefix(rep, "qcheck: got is equivalent to want") || strings.Contains(rep, "witness") {
+		t.Errorf("report of equivalent circuits:\n%s", rep)
+	}
+}
+
+func TestMeasureAndEngineEncodeAsText(t *testing.T) {
+	for v, want := range map[interface{ MarshalText() ([]byte, error) }]string{
+		Diamond: "diamond norm", OperatorNorm: "operator norm", Dense: "dense", Auto: "auto",
+	} {
+		if b, _ := v.MarshalText(); string(b) != want {
+			t.Errorf("%v encodes as %q", v, b)
+		}
+	}
+}
+
+// The verdict-only path compares just the ops between the common start and end of the two
+// circuits; by the unitary invariance of the operator norm (and the similarity of V†U to B†A for
+// the diamond distance and the average fidelity) it must give the whole circuits' distance.
+func TestDifferingWindowsKeepTheDistance(t *testing.T) {
+	g := circuits(3, 8)
+	rapid.Check(t, func(rt *rapid.T) {
+		s, a, b, p := g.Draw(rt, "start"), g.Draw(rt, "a"), g.Draw(rt, "b"), g.Draw(rt, "end")
+		want := circuit.New(3).Compose(s).Compose(a).Compose(p)
+		got := circuit.New(3).Compose(s).Compose(b).Compose(p)
+		for _, opts := range [][]Option{nil, {ExactPhase()}, {UseMeasure(Diamond)}, {UseMeasure(AverageFidelity)}} {
+			cfg, _ := newConfig(opts)
+			quick, err := compare(cfg, want, got, false)
+			if err != nil {
+				rt.Fatal(err)
+			}
+			whole := mustCompare(t, want, got, opts...)
+			if math.Abs(quick.Distance-whole.Distance) > 1e-9 {
+				rt.Fatalf("%v: windows give %g, whole circuits %g", whole.Measure, quick.Distance, whole.Distance)
+			}
+		}
+	})
 }

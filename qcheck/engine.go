@@ -72,7 +72,7 @@ func wideEngineFits(cfg *config, f *frame, e Engine) error {
 func certifies(e Engine, f *frame) string {
 	switch {
 	case e == Dense && f.measured != nil:
-		return "distributions from every basis input, the witness and 4 fixed random inputs (a lower bound over all inputs); unitaries exact to rounding"
+		return "exact unitaries; distributions from every basis input, the witness and 4 fixed random inputs, so a lower bound on the largest over all inputs"
 	case e == Dense:
 		return "exact: both full unitaries, to floating-point rounding"
 	case e == Tableau:

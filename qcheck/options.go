@@ -91,6 +91,7 @@ const (
 	Dirty
 )
 
+// String returns "clean" or "dirty".
 func (s AncillaState) String() string {
 	switch s {
 	case Clean:
@@ -127,7 +128,11 @@ func Ancillas(qubits []int, state AncillaState) Option {
 // total-variation distance found, compared against the tolerance; the result also gives the
 // operator-norm distance and its bound 2ε on any probability difference. Use it for passes that
 // only promise to keep measurement statistics, such as dropping diagonal gates before a final
-// measurement. With no qubits, every qubit of want is measured.
+// measurement. The qubits are want's; with none given, they are the qubits want measures (its
+// measure ops), or all of want's qubits if it has none. Final measure ops of both circuits (those
+// after which nothing acts on their qubit) are dropped before comparing; a measurement in the
+// middle of a circuit is refused. The search over inputs makes the verdict a lower bound on the
+// largest total-variation distance over all inputs, which Result.Certifies says.
 func Measured(qubits ...int) Option {
 	qs := append([]int(nil), qubits...)
 	return optionFunc(func(c *config) error {
@@ -155,6 +160,7 @@ const (
 	Distribution
 )
 
+// String returns the measure's name as reports write it.
 func (m Measure) String() string {
 	switch m {
 	case OperatorNorm:
@@ -168,6 +174,9 @@ func (m Measure) String() string {
 	}
 	return fmt.Sprintf("Measure(%d)", int(m))
 }
+
+// MarshalText writes the measure's name, so that results encode readably as JSON.
+func (m Measure) MarshalText() ([]byte, error) { return []byte(m.String()), nil }
 
 // UseMeasure chooses the measure that decides the verdict (OperatorNorm by default). The tolerance
 // is read in the units of that measure.
@@ -200,6 +209,7 @@ const (
 	MatrixFree
 )
 
+// String returns the engine's name.
 func (e Engine) String() string {
 	switch e {
 	case Auto:
@@ -213,6 +223,9 @@ func (e Engine) String() string {
 	}
 	return fmt.Sprintf("Engine(%d)", int(e))
 }
+
+// MarshalText writes the engine's name, so that results encode readably as JSON.
+func (e Engine) MarshalText() ([]byte, error) { return []byte(e.String()), nil }
 
 // UseEngine overrides the automatic choice of engine.
 func UseEngine(e Engine) Option {

@@ -113,12 +113,3 @@ func withSeed(t *testing.T, seed uint64) {
 	}
 	t.Cleanup(func() { _ = f.Value.Set(old) })
 }
-
-// withoutFailFiles keeps Search from writing rapid's fail files during the test.
-func withoutFailFiles(t *testing.T) {
-	t.Helper()
-	f := flag.Lookup("rapid.nofailfile")
-	old := f.Value.String()
-	_ = f.Value.Set("true")
-	t.Cleanup(func() { _ = f.Value.Set(old) })
-}

@@ -17,7 +17,6 @@ func TestPreservesAcceptsCorrectPasses(t *testing.T) {
 
 func TestExactPhaseFlagsGlobalPhaseChanges(t *testing.T) {
 	withSeed(t, 1)
-	withoutFailFiles(t)
 	f, err := Search(phaseToRZ, circuits(2, 10), ExactPhase())
 	if err != nil {
 		t.Fatal(err)
@@ -36,7 +35,6 @@ func TestExactPhaseFlagsGlobalPhaseChanges(t *testing.T) {
 
 func TestSearchFindsEachKindOfBug(t *testing.T) {
 	withSeed(t, 2)
-	withoutFailFiles(t)
 	// Small gate sets make each planted pattern common.
 	mixed := circuitsOf(3, 0, 20, "h", "t", "s", "rz", "cx", "cz", "swap")
 	cases := []struct {
@@ -79,7 +77,6 @@ func TestSearchFindsEachKindOfBug(t *testing.T) {
 // followed by that cx, and the report's blame names both.
 func TestReportBlamesTheMovedGates(t *testing.T) {
 	withSeed(t, 3)
-	withoutFailFiles(t)
 	f, err := Search(rzThroughTarget, circuitsOf(2, 0, 20, "rz", "cx"))
 	if err != nil || f == nil {
 		t.Fatalf("no failure: %v", err)
@@ -108,7 +105,6 @@ func TestReportBlamesTheMovedGates(t *testing.T) {
 // Preserves fails the test once, and rapid prints the report once, for the minimal case.
 func TestPreservesFailsOnceWithReport(t *testing.T) {
 	withSeed(t, 4)
-	withoutFailFiles(t)
 	h := &searchTB{name: "TestPreservesFailsOnceWithReport"}
 	Preserves(h, dropT, circuits(3, 20))
 	if !h.failed {
@@ -127,7 +123,6 @@ func TestPreservesFailsOnceWithReport(t *testing.T) {
 }
 
 func TestPreservesSilentOnSuccess(t *testing.T) {
-	withoutFailFiles(t)
 	h := &searchTB{name: "TestPreservesSilentOnSuccess"}
 	Preserves(h, cancelPairs, circuits(3, 10))
 	if h.failed {
@@ -164,7 +159,6 @@ func TestPreservesRefusesAHandleWithoutRapid(t *testing.T) {
 }
 
 func TestPreservesRefusesBadOptions(t *testing.T) {
-	withoutFailFiles(t)
 	h := &searchTB{name: "x"}
 	Preserves(h, cancelPairs, circuits(2, 5), Tolerance(-1))
 	if !h.failed || !strings.Contains(strings.Join(h.errors, ""), "Tolerance(-1)") {
@@ -209,7 +203,6 @@ func TestPreservesLayout(t *testing.T) {
 	PreservesLayout(t, lineRouter, circuits(4, 20))
 
 	withSeed(t, 5)
-	withoutFailFiles(t)
 	forgetful := func(c *circuit.Circuit) (*circuit.Circuit, []int, error) {
 		out, _, err := lineRouter(c)
 		return out, nil, err
@@ -217,5 +210,19 @@ func TestPreservesLayout(t *testing.T) {
 	f, err := SearchLayout(forgetful, circuits(4, 20))
 	if err != nil || f == nil || f.Kind != NotEquivalent {
 		t.Fatalf("a router that forgets its layout was not caught: %v %+v", err, f)
+	}
+}
+
+func TestNilPassOrGenerator(t *testing.T) {
+	if _, err := Search(nil, circuits(2, 5)); err == nil || !strings.Contains(err.Error(), "the pass is nil") {
+		t.Errorf("nil pass: %v", err)
+	}
+	if _, err := Search(cancelPairs, nil); err == nil || !strings.Contains(err.Error(), "generator is nil") {
+		t.Errorf("nil generator: %v", err)
+	}
+	h := &searchTB{name: "nil"}
+	CheckRule(h, nil, nil)
+	if !h.failed || !strings.Contains(strings.Join(h.errors, ""), "the rule is nil") {
+		t.Errorf("nil rule: %q", h.errors)
 	}
 }

@@ -22,8 +22,8 @@ func (r Result) Headline() string {
 
 // Report writes the result for a person, in lines of at most 100 columns (drawings are wrapped by
 // the circuit package at the same width): the verdict, both circuits drawn and listed, their
-// difference as op lists, the ops to blame, the witness input state, and a measurement whose
-// probabilities tell the circuits apart.
+// difference as op lists and, when they are not equivalent, the ops to blame, the witness input
+// state, and a measurement whose probabilities tell the circuits apart.
 func (r Result) Report() string {
 	var b strings.Builder
 	b.WriteString(r.Headline())
@@ -36,8 +36,8 @@ func (r Result) Report() string {
 	}
 	if !r.Equivalent {
 		r.writeBlame(&b, "want", "got")
+		r.writeEvidence(&b)
 	}
-	r.writeEvidence(&b)
 	return b.String()
 }
 
@@ -51,7 +51,7 @@ func (r Result) writeSettings(b *strings.Builder) {
 		phase = "global phase counts"
 	}
 	fmt.Fprintf(b, "  measure: %s, %s\n", r.Measure, phase)
-	fmt.Fprintf(b, "  engine: %s (%s)\n", r.Engine, r.Certifies)
+	b.WriteString(wrapList("  engine: ", strings.Fields(fmt.Sprintf("%s (%s)", r.Engine, r.Certifies)), " "))
 	if r.Options != "" {
 		fmt.Fprintf(b, "  options: %s\n", r.Options)
 	}
@@ -136,9 +136,8 @@ func (r Result) writeBlame(b *strings.Builder, wantName, gotName string) {
 	pad := max(len(wantName), len(gotName))
 	wl := fmt.Sprintf("    %-*s ", pad+1, wantName+":")
 	gl := fmt.Sprintf("    %-*s ", pad+1, gotName+":")
-	fmt.Fprintf(b, "  the op lists first differ at op %d; apart from a common start and end, %s has %s\n",
-		bl.FirstDiff, wantName, rangeWords(bl.WantOps))
-	fmt.Fprintf(b, "  where %s has %s\n", gotName, rangeWords(bl.GotOps))
+	fmt.Fprintf(b, "  the op lists first differ at op %d; between their common start and end,\n", bl.FirstDiff)
+	fmt.Fprintf(b, "  %s has %s where %s has %s\n", wantName, rangeWords(bl.WantOps), gotName, rangeWords(bl.GotOps))
 	if len(w)+len(g) <= 12 {
 		b.WriteString(wrapList(wl, opList(w, bl.WantOps[0]), " · "))
 		b.WriteString(wrapList(gl, opList(g, bl.GotOps[0]), " · "))
@@ -193,10 +192,10 @@ func (r Result) writeEvidence(b *strings.Builder) {
 		fmt.Fprintf(b, "\nwitness input ψ (kets are %s: qubit 0 is the rightmost bit):\n", ketOrder(n))
 		b.WriteString(wrapList("  ψ = ", strings.Fields(Ket(r.Witness, n)), " "))
 		if r.ExactPhase {
-			fmt.Fprintf(b, "  ‖want·ψ − got·ψ‖ = %.4g (a certified lower bound on the distance)\n", r.WitnessGap)
+			fmt.Fprintf(b, "  ‖want·ψ − got·ψ‖ = %.4g (a certified lower bound on the operator-norm distance)\n", r.WitnessGap)
 		} else {
-			fmt.Fprintf(b, "  min over φ of ‖want·ψ − e^{iφ}·got·ψ‖ = %.4g (a certified lower bound on the distance)\n", r.WitnessGap)
-			fmt.Fprintf(b, "  best global phase for the whole circuit: want ≈ e^{iφ}·got with φ = %.4g rad\n", r.Phase)
+			fmt.Fprintf(b, "  min over φ of ‖want·ψ − e^{iφ}·got·ψ‖ = %.4g, a certified lower bound on the operator-norm\n", r.WitnessGap)
+			fmt.Fprintf(b, "  distance; best global phase for the whole circuit: want ≈ e^{iφ}·got with φ = %.4g rad\n", r.Phase+0)
 		}
 	}
 	m := r.Measurement
@@ -341,7 +340,7 @@ func (f *Failure) Report() string {
 	case f.Seed != 0:
 		fmt.Fprintf(&b, "-rapid.seed=%d\n", f.Seed)
 	default:
-		b.WriteString("rapid prints the -rapid.seed and the fail file under testdata/rapid/ to rerun with\n")
+		b.WriteString("rerun the test with the -rapid.seed (or -rapid.failfile) that rapid printed above\n")
 	}
 	return b.String()
 }

@@ -2,9 +2,9 @@ package qcheck
 
 import (
 	"fmt"
-	"math"
 
 	"pgregory.net/rapid"
+	"qcheck.dev/gen"
 	"qcheck.dev/qcheck/circuit"
 )
 
@@ -19,6 +19,10 @@ const (
 	ruleContextOps  = 6 // at most this many ops before and after the rule
 )
 
+// ruleGateWeight is how much more often the rule's own gates appear around it than the common
+// gates: a matcher bug needs a gate of the pattern nearby to show.
+const ruleGateWeight = 4
+
 // ruleContextGates are the common gates CheckRule surrounds a rule with.
 var ruleContextGates = []string{"h", "x", "s", "t", "sdg", "rz", "rx", "cx", "cz"}
 
@@ -27,16 +31,16 @@ var ruleContextGates = []string{"h", "x", "s", "t", "sdg", "rz", "rx", "cx", "cz
 //  1. the rule itself: left and right must be equivalent under the options;
 //  2. the pass that applies it, in context: left is embedded at a random position of a random
 //     circuit on a wider register, its qubits mapped to random qubits of that register, and the
-//     pass must keep that circuit's meaning. The surrounding ops are drawn from common gates and
-//     from the rule's own gates, so that a matcher that ignores qubits, reads through
-//     intervening gates or misplaces its result is caught.
+//     pass must keep that circuit's meaning. The surrounding ops are drawn by gen.Circuit from
+//     common gates and the rule's own gates, so that a matcher that ignores qubits, reads
+//     through intervening gates or misplaces its result is caught.
 //
 // With a nil pass only the first step runs. The options apply to both steps; options that name
 // qubits (OutputPermutation, Ancillas, Measured) describe a whole register, not a rule, and are
 // refused. Like Preserves, a failure is shrunk and reported once, with rapid's replay line.
 func CheckRule(t TB, rule Rule, pass Pass, opts ...Option) {
 	t.Helper()
-	cfg, err := ruleConfig(opts)
+	cfg, err := ruleConfig(rule, opts)
 	if err != nil {
 		t.Fatalf("qcheck.CheckRule: %v", err)
 		return
@@ -47,14 +51,17 @@ func CheckRule(t TB, rule Rule, pass Pass, opts ...Option) {
 // RuleProperty returns the property CheckRule checks, for rapid.Check and rapid.MakeFuzz (see
 // Property for the fuzz target). Bad options fail every check with their error.
 func RuleProperty(rule Rule, pass Pass, opts ...Option) func(*rapid.T) {
-	cfg, err := ruleConfig(opts)
+	cfg, err := ruleConfig(rule, opts)
 	if err != nil {
 		return func(t *rapid.T) { t.Fatalf("qcheck: %v", err) }
 	}
 	return ruleProperty(cfg, rule, pass)
 }
 
-func ruleConfig(opts []Option) (*config, error) {
+func ruleConfig(rule Rule, opts []Option) (*config, error) {
+	if rule == nil {
+		return nil, fmt.Errorf("the rule is nil")
+	}
 	cfg, err := newConfig(opts)
 	if err != nil {
 		return nil, err
@@ -117,64 +124,53 @@ type placement struct {
 	qubits []int
 }
 
-// embed draws a wider register, a mapping of the rule's qubits into it, and random ops before and
-// after, and returns the circuit with left in the middle.
+// embed draws a wider register, a placement of the rule's qubits on it (gen.Embed) and random
+// circuits before and after (gen.Circuit), and returns the circuit with left in the middle.
 func embed(t *rapid.T, left *circuit.Circuit) (*circuit.Circuit, placement) {
-	k := left.Qubits()
-	w := k + rapid.IntRange(0, ruleExtraQubits).Draw(t, "extra qubits")
-	all := make([]int, w)
-	for i := range all {
-		all[i] = i
-	}
-	mapping := rapid.Permutation(all).Draw(t, "qubit mapping")[:k]
-	ops := rapid.Map(rapid.SliceOfN(contextOps(left, w), 0, ruleContextOps), func(ops []circuit.Op) drawn {
-		c := circuit.New(w)
-		c.Ops = ops
-		return drawn{c}
-	})
-	before := ops.Draw(t, "ops before").c
-	after := ops.Draw(t, "ops after").c
+	w := left.Qubits() + rapid.IntRange(0, ruleExtraQubits).Draw(t, "extra qubits")
+	placed := rapid.Map(gen.Embed(left, w), func(e gen.Embedding) drawnPlacement { return drawnPlacement(e) }).Draw(t, "placement")
+	around := rapid.Map(gen.Circuit(contextOptions(left, w)), func(c *circuit.Circuit) drawn { return drawn{c} })
+	before := around.Draw(t, "ops before").c
+	after := around.Draw(t, "ops after").c
 	c := circuit.New(w)
 	c.Ops = append(c.Ops, before.Ops...)
-	c.Ops = append(c.Ops, relabel(left, mapping, w).Ops...)
+	c.Ops = append(c.Ops, placed.Circuit.Ops...)
 	c.Ops = append(c.Ops, after.Ops...)
-	return c.Clone(), placement{start: before.Len(), qubits: mapping}
+	return c.Clone(), placement{start: before.Len(), qubits: placed.Qubits}
 }
 
-// contextOps generates single ops on a register of w qubits: common gates, and the gates of the
-// rule's left side with fresh angles.
-func contextOps(left *circuit.Circuit, w int) *rapid.Generator[circuit.Op] {
-	var gates []circuit.Gate
+// drawnPlacement logs a placement by where the rule's qubits went.
+type drawnPlacement gen.Embedding
+
+// GoString implements fmt.GoStringer for rapid's log of draws.
+func (d drawnPlacement) GoString() string { return fmt.Sprintf("rule qubits on %v", d.Qubits) }
+
+// contextOptions are the surroundings of a rule on w qubits: the rule's own gates (custom ones
+// included, listed first and drawn more often) and common gates, so that a matcher that ignores qubits, reads through
+// intervening gates or misplaces its result meets the situations that expose it.
+func contextOptions(left *circuit.Circuit, w int) gen.Options {
+	opts := gen.Options{Qubits: w, MaxOps: ruleContextOps}
 	seen := map[string]bool{}
-	for _, op := range left.Ops {
-		if op.Gate.Unitary() && !seen[op.Gate.Name] && op.Gate.Qubits() <= w {
-			seen[op.Gate.Name] = true
-			gates = append(gates, op.Gate)
+	add := func(g circuit.Gate) {
+		if seen[g.Name] || !g.Unitary() || g.Qubits() > w {
+			return
 		}
+		seen[g.Name] = true
+		if g.IsCustom() {
+			opts.Custom = append(opts.Custom, g)
+		} else {
+			opts.GateSet = append(opts.GateSet, g.Name)
+		}
+	}
+	opts.Weights = map[string]int{}
+	for _, op := range left.Ops {
+		add(op.Gate)
+		opts.Weights[op.Gate.Name] = ruleGateWeight
 	}
 	for _, name := range ruleContextGates {
 		spec, _ := circuit.Lookup(name)
-		if !seen[name] && spec.Qubits <= w {
-			g, _ := circuit.NewGate(name, make([]float64, spec.Params)...)
-			gates = append(gates, g)
-		}
+		g, _ := circuit.NewGate(name, make([]float64, spec.Params)...)
+		add(g)
 	}
-	return rapid.Custom(func(t *rapid.T) circuit.Op {
-		g := rapid.SampledFrom(gates).Draw(t, "gate").Clone()
-		for i := range g.Params {
-			g.Params[i] = contextAngle.Draw(t, "angle")
-		}
-		all := make([]int, w)
-		for i := range all {
-			all[i] = i
-		}
-		qs := rapid.Permutation(all).Draw(t, "qubits")[:g.Qubits()]
-		return circuit.Op{Gate: g, Qubits: qs}
-	})
+	return opts
 }
-
-// contextAngle draws multiples of π/4 (where rewrite rules have special cases) or any angle.
-var contextAngle = rapid.OneOf(
-	rapid.Map(rapid.IntRange(-8, 8), func(k int) float64 { return float64(k) * math.Pi / 4 }),
-	rapid.Float64Range(-2*math.Pi, 2*math.Pi),
-)

@@ -46,7 +46,6 @@ func TestCheckRuleAcceptsACorrectRuleAndPass(t *testing.T) {
 
 func TestCheckRuleCatchesAWrongRule(t *testing.T) {
 	withSeed(t, 6)
-	withoutFailFiles(t)
 	wrong := func(t *rapid.T) (*circuit.Circuit, *circuit.Circuit) {
 		a := rapid.Float64Range(-math.Pi, math.Pi).Draw(t, "a")
 		b := rapid.Float64Range(-math.Pi, math.Pi).Draw(t, "b")
@@ -63,7 +62,6 @@ func TestCheckRuleCatchesAWrongRule(t *testing.T) {
 // register with other rz ops nearby exposes it.
 func TestCheckRuleCatchesAMatcherBug(t *testing.T) {
 	withSeed(t, 7)
-	withoutFailFiles(t)
 	h := &searchTB{name: "matcher bug"}
 	CheckRule(h, mergeRZ, mergeRZAnyQubit)
 	if !h.failed {
@@ -78,7 +76,6 @@ func TestCheckRuleCatchesAMatcherBug(t *testing.T) {
 }
 
 func TestCheckRuleRefuses(t *testing.T) {
-	withoutFailFiles(t)
 	h := &searchTB{name: "bad options"}
 	CheckRule(h, mergeRZ, nil, OutputPermutation([]int{0}))
 	if !h.failed || !strings.Contains(strings.Join(h.errors, ""), "rule checks take no OutputPermutation") {

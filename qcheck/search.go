@@ -1,6 +1,7 @@
 package qcheck
 
 import (
+	"flag"
 	"fmt"
 	"reflect"
 	"regexp"
@@ -19,11 +20,12 @@ import (
 // generator, or a failure rapid could not reproduce).
 //
 // Search is rapid.Check with a test handle of its own, so rapid's settings apply as in a test:
-// the number of checks (-rapid.checks or RAPID_CHECKS, 100 by default), the seed (-rapid.seed or
-// RAPID_SEED, random by default) and the fail file. Like rapid.Check, it saves the shrunk failure
-// under testdata/rapid/ in the working directory (unless -rapid.nofailfile or RAPID_NOFAILFILE is
-// set), replays saved failures of the same pass first, and reports the seed and the file in the
-// Failure. It runs in the calling goroutine; calls must not overlap.
+// the number of checks (-rapid.checks or RAPID_CHECKS, 100 by default) and the seed
+// (-rapid.seed or RAPID_SEED, random by default); the Failure reports the seed, with which the
+// same pass and generator find the same failure again. Unlike rapid.Check, Search writes no fail
+// file into the working directory: it sets rapid's -rapid.nofailfile flag for its duration. It
+// runs in the calling goroutine; calls are serialised, and should not run beside rapid.Check in
+// parallel tests, which read the same flag.
 func Search(pass Pass, g *rapid.Generator[*circuit.Circuit], opts ...Option) (*Failure, error) {
 	return search(funcName(pass), pass.subject(), g, opts)
 }
@@ -37,12 +39,17 @@ func SearchLayout(pass LayoutPass, g *rapid.Generator[*circuit.Circuit], opts ..
 var searching sync.Mutex
 
 func search(name string, s subject, g *rapid.Generator[*circuit.Circuit], opts []Option) (*Failure, error) {
-	cfg, err := newConfig(opts)
+	cfg, err := checkedConfig(s, g, opts)
 	if err != nil {
-		return nil, err
+		return nil, fmt.Errorf("qcheck.Search: %w", err)
 	}
 	searching.Lock()
 	defer searching.Unlock()
+	if f := flag.Lookup("rapid.nofailfile"); f != nil {
+		old := f.Value.String()
+		_ = f.Value.Set("true")
+		defer func() { _ = f.Value.Set(old) }()
+	}
 	var last *Failure
 	prop := property(cfg, s, g, func(f *Failure) { last = f })
 	h := &searchTB{name: "qcheck.Search_" + name}
