@@ -170,7 +170,8 @@ With -json, one JSON object:
     basis            true: measure every qubit (or the -measured ones) in the computational
                      basis; false: test whether the output is want's output state
     outcome          with basis, the outcome index whose probability differs most; else null
-    want, got        the probability of that outcome (or of passing the test) after want, got`
+    want             the probability of that outcome (or of passing the test) after want
+    got              the same after got`
 
 func equiv(args []string, stdout, stderr io.Writer) int {
 	c := newCommand("equiv", "equiv [flags] A.qasm B.qasm", equivAbout, stdout, stderr)
