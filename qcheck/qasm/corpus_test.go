@@ -2,6 +2,7 @@ package qasm
 
 import (
 	"bufio"
+	"flag"
 	"math"
 	"math/rand/v2"
 	"os"
@@ -125,22 +126,31 @@ func TestCorpusDistances(t *testing.T) {
 	}
 }
 
-// Every pair of the corpus, embedded on a random choice of qubits of a 20-qubit register between
-// two random 40-gate Clifford circuits (the same context on both sides), keeps its verdict
-// under qcheck.Compare's automatic engine choice: the tableau for Clifford pairs, the matrix-free
-// estimate otherwise. Conjugating by a unitary and tensoring with the identity leave the
-// phase-free distance unchanged, so a non-Clifford pair must show the manifest's distance (NumPy)
-// again, and a differing Clifford pair a tableau lower bound no larger than it.
+// wideCorpus runs every pair of the corpus at width 20, the non-Clifford ones too (minutes of
+// statevector work); by default those run at width 14.
+var wideCorpus = flag.Bool("corpus.wide", false, "check every corpus pair at width 20 (slow)")
+
+// Every pair of the corpus, embedded on a random choice of qubits of a wide register between two
+// random 40-gate Clifford circuits (the same context on both sides), keeps its verdict under
+// qcheck.Compare's automatic engine choice: the tableau for Clifford pairs, at width 20, and the
+// matrix-free estimate otherwise, at width 14 (20 with -corpus.wide). Conjugating by a unitary
+// and tensoring with the identity leave the phase-free distance unchanged, so a non-Clifford pair
+// must show the manifest's distance (NumPy) again, and a differing Clifford pair a tableau lower
+// bound no larger than it.
 func TestCorpusAtWidth(t *testing.T) {
 	if testing.Short() {
-		t.Skip("20-qubit statevector runs")
+		t.Skip("statevector runs at width 14 and more")
 	}
-	const width = 20
 	rng := rand.New(rand.NewPCG(20, 26))
-	context := gen.Circuit(gen.Options{Qubits: width, MinOps: 40, MaxOps: 40, GateSet: []string{"h", "s", "sdg", "x", "cx", "cz", "swap"}})
+	engines := map[qcheck.Engine]int{}
 	for i, e := range readManifest(t) {
 		before := corpusCircuit(t, e.name+".before.qasm")
 		after := corpusCircuit(t, e.name+".after.qasm")
+		width := 20
+		if !*wideCorpus && !(sim.IsClifford(before) && sim.IsClifford(after)) {
+			width = 14
+		}
+		context := gen.Circuit(gen.Options{Qubits: width, MinOps: 40, MaxOps: 40, GateSet: []string{"h", "s", "sdg", "x", "cx", "cz", "swap"}})
 		where := rng.Perm(width)[:before.Qubits()]
 		pre := context.Example(2 * i)
 		post := context.Example(2*i + 1)
@@ -150,6 +160,7 @@ func TestCorpusAtWidth(t *testing.T) {
 		if err != nil {
 			t.Fatalf("%s: %v", e.name, err)
 		}
+		engines[r.Engine]++
 		if r.Equivalent != e.equivalent {
 			t.Errorf("%s at width %d (%v engine): equivalent %v, the manifest says %v (distance %.3g)", e.name, width, r.Engine, r.Equivalent, e.equivalent, r.Distance)
 			continue
@@ -161,6 +172,9 @@ func TestCorpusAtWidth(t *testing.T) {
 		case r.Engine == qcheck.MatrixFree && math.Abs(r.Distance-e.distance) > 1e-8:
 			t.Errorf("%s: matrix-free distance %.10g at width %d, NumPy gives %.10g", e.name, r.Distance, width, e.distance)
 		}
+	}
+	if engines[qcheck.Tableau] == 0 || engines[qcheck.MatrixFree] == 0 {
+		t.Errorf("engines used: %v; the corpus should exercise both the tableau and the matrix-free engine", engines)
 	}
 }
 
