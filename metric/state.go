@@ -43,7 +43,7 @@ func StateFidelity(a, b []complex128) float64 {
 // before its eigenvalues are taken.
 func TraceDistance(rho, sigma mat.CMatrix) float64 {
 	n := pairSize("TraceDistance", rho, sigma)
-	d := difference(rho, sigma)
+	d, k := difference(rho, sigma)
 	// Read column-major the buffer is (ρ − σ)ᵀ, Hermitian with the same
 	// eigenvalues; average it with its adjoint on the lower triangle.
 	for j := 0; j < n; j++ {
@@ -55,7 +55,7 @@ func TraceDistance(rho, sigma mat.CMatrix) float64 {
 	for _, x := range hermitianValues(d, n) {
 		sum += math.Abs(x)
 	}
-	return sum / 2
+	return math.Ldexp(sum/2, k)
 }
 
 // inner returns ⟨a|b⟩ = Σ conj(a_i)·b_i; for two matrices stored the same
