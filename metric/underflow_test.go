@@ -230,3 +230,33 @@ func minus(a, b mat.CMatrix) *mat.CDense {
 	}
 	return m
 }
+
+// ‖s·A‖ = |s|·‖A‖ (a norm is absolutely homogeneous) for s of any size, so
+// OperatorNorm(s·u) = |s| for a unitary u and Distance(s·u, s·v) =
+// |s|·Distance(u, v), from subnormal s to s near the largest float64. Where
+// s·u has subnormal entries they hold the product only to within 2^-1075
+// each, which moves the norm by at most 2·n·2^-1075 = n·2^-1074 (the
+// Frobenius bound, common practice);
+// the margin allows that on top of 1e-13 relative. Distance is checked up to
+// |s| = 2^1020, so that 2|s| stays representable.
+func TestPropertyNormOfAnyScale(t *testing.T) {
+	rapid.Check(t, func(t *rapid.T) {
+		n := 1 << rapid.IntRange(0, 3).Draw(t, "qubits")
+		u := drawUnitary(t, n, "u")
+		v := drawNear(t, u, "v")
+		s := math.Ldexp(rapid.Float64Range(0.5, 1).Draw(t, "mantissa"), rapid.IntRange(-1074, 1023).Draw(t, "exponent"))
+		if rapid.Bool().Draw(t, "negative") {
+			s = -s
+		}
+		margin := func(want float64) float64 { return 1e-13*want + float64(n)*0x1p-1074 }
+		if got, want := OperatorNorm(scale(complex(s, 0), u)), math.Abs(s); !(math.Abs(got-want) <= margin(want)) {
+			t.Fatalf("OperatorNorm(s·u) = %g, want |s| = %g", got, want)
+		}
+		if math.Abs(s) <= 0x1p1020 {
+			got, want := Distance(scale(complex(s, 0), u), scale(complex(s, 0), v)), math.Abs(s)*Distance(u, v)
+			if !(math.Abs(got-want) <= margin(want)+1e-13*math.Abs(s)) {
+				t.Fatalf("Distance(s·u, s·v) = %g, want |s|·Distance(u, v) = %g", got, want)
+			}
+		}
+	})
+}
