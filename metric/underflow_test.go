@@ -260,3 +260,42 @@ func TestPropertyNormOfAnyScale(t *testing.T) {
 		}
 	})
 }
+
+// StateDistance and StateFidelity depend only on the directions of the two
+// vectors (their doc comments; Nielsen & Chuang §9.2 define them on unit
+// states), so multiplying either state by any non-zero s, subnormal or near
+// the largest float64, changes nothing beyond rounding. (Scales go down to
+// 2^-1061: the largest amplitude of a unit state of 8 entries, at least
+// 1/√8, stays non-zero; below that a state can truly round to the zero
+// vector.) A state of tiny
+// entries used to have a squared length of 0 and be refused as the zero
+// vector.
+func TestPropertyStatesOfAnyScale(t *testing.T) {
+	scaleOf := func(t *rapid.T, label string) complex128 {
+		return complex(math.Ldexp(rapid.Float64Range(0.5, 1).Draw(t, label+" mantissa"), rapid.IntRange(-1060, 1023).Draw(t, label+" exponent")), 0)
+	}
+	rapid.Check(t, func(t *rapid.T) {
+		n := 1 << rapid.IntRange(0, 3).Draw(t, "qubits")
+		a := haarState(newRand(rapid.Uint64().Draw(t, "a")), n)
+		b := haarState(newRand(rapid.Uint64().Draw(t, "b")), n)
+		if rapid.Bool().Draw(t, "near") {
+			copy(b, a)
+			b[0] += 1e-9
+		}
+		sa, sb := scaleOf(t, "a"), scaleOf(t, "b")
+		xa, xb := make([]complex128, n), make([]complex128, n)
+		for i := range a {
+			xa[i], xb[i] = sa*a[i], sb*b[i]
+		}
+		// Subnormal scales keep only a few digits of each amplitude: the
+		// tolerance grows as the smallest scale nears 2^-1074 (relative
+		// rounding of an entry of size |s|/√n is at most 2^-1074·√n/|s|).
+		tol := 1e-13 + 4*float64(n)*0x1p-1074/math.Min(real(sa), real(sb))
+		if got, want := StateDistance(xa, xb), StateDistance(a, b); !(math.Abs(got-want) <= tol) {
+			t.Fatalf("StateDistance of scaled states = %g, want %g", got, want)
+		}
+		if got, want := StateFidelity(xa, xb), StateFidelity(a, b); !(math.Abs(got-want) <= tol) {
+			t.Fatalf("StateFidelity of scaled states = %g, want %g", got, want)
+		}
+	})
+}
