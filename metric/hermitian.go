@@ -28,12 +28,34 @@ const maxWorkers = 8
 // reduce overwrites t.a (n×n, column-major, Hermitian: only the lower triangle
 // is read) with the reflectors and fills diag, off and tau.
 //
+// The lower triangle is first scaled by a power of two into [0.5, 1) and its
+// negligible parts set to zero (see negligible); diag and off are scaled
+// back at the end, so T is that of the matrix given.
+func (t *tridiagonal) reduce() {
+	n, a := t.n, t.a
+	big := 0.0
+	for j := 0; j < n; j++ {
+		big = math.Max(big, largestPart(a[j*n+j:j*n+n]))
+	}
+	e := scaleExponent(big)
+	for j := 0; j < n; j++ {
+		scaleParts(a[j*n+j:j*n+n], -e)
+	}
+	t.reduceScaled()
+	if e != 0 {
+		scaleFloats(t.diag, e, false)
+		scaleFloats(t.off, e, false)
+	}
+}
+
+// reduceScaled is reduce on a matrix already scaled.
+//
 // Each step k applies reflector k to the trailing block as the rank-2 update
 // A −= v·wᴴ + w·vᴴ and, in the same pass over memory, multiplies the updated
 // block by reflector k+1 (which needs only the block's first column, updated
 // beforehand). One sweep of the block per step instead of two; for large
 // blocks the columns are shared out over the cores.
-func (t *tridiagonal) reduce() {
+func (t *tridiagonal) reduceScaled() {
 	n, a := t.n, t.a
 	t.diag[0] = real(a[0])
 	if n == 1 {
@@ -234,9 +256,19 @@ func reflector(x []complex128) (beta float64, tau complex128) {
 	sr, si := ar/scale, ai/scale
 	beta = -math.Copysign(scale*math.Sqrt(sr*sr+si*si+ss), ar)
 	tau = complex((beta-ar)/beta, -ai/beta)
-	s := 1 / (alpha - complex(beta, 0))
-	for i := range x[1:] {
-		x[i+1] *= s
+	// |alpha − beta| = |ar| + |beta| (in the real part) is at least |beta|,
+	// which is at least every part of x: each quotient is at most about 1.
+	// Its reciprocal overflows when beta is subnormal, so then divide.
+	d := alpha - complex(beta, 0)
+	if math.Abs(beta) >= 0x1p-1000 {
+		s := 1 / d
+		for i := range x[1:] {
+			x[i+1] *= s
+		}
+	} else {
+		for i := range x[1:] {
+			x[i+1] /= d
+		}
 	}
 	return beta, tau
 }
@@ -267,9 +299,20 @@ func hemvLower(m int, alpha complex128, a []complex128, lda int, x, y []complex1
 }
 
 // values returns the eigenvalues of T in ascending order, overwriting diag
-// and off. It reports false if the QR iteration did not converge.
+// and off. It reports false if the QR iteration did not converge, which for
+// finite entries it does not.
+//
+// T is handed to Dsterf scaled by a power of two into [0.5, 1) with its
+// negligible entries set to zero (see negligible), so that Dsterf never
+// rescales a block itself; the eigenvalues are scaled back.
 func (t *tridiagonal) values() ([]float64, bool) {
+	e := scaleExponent(math.Max(largestAbs(t.diag), largestAbs(t.off)))
+	scaleFloats(t.diag, -e, true)
+	scaleFloats(t.off, -e, true)
 	ok := lapackgonum.Implementation{}.Dsterf(t.n, t.diag, t.off)
+	if e != 0 {
+		scaleFloats(t.diag, e, false)
+	}
 	return t.diag, ok
 }
 

@@ -85,8 +85,14 @@ func inverseIteration(d, e []float64, lambda float64, prev [][]float64) []float6
 		}
 		normalize(y)
 	}
-	project(y, prev)
-	normalize(y)
+	// The last solve makes y nearly parallel to prev when λ sits in a
+	// cluster, so one projection cancels most of y and leaves its rounding
+	// along prev; a second one removes that ("twice is enough": Parlett, The
+	// Symmetric Eigenvalue Problem, §6-9, from memory).
+	for range 2 {
+		project(y, prev)
+		normalize(y)
+	}
 	return y
 }
 
