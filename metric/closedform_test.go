@@ -2,6 +2,7 @@ package metric
 
 import (
 	"math"
+	"math/cmplx"
 	"sort"
 	"testing"
 
@@ -71,7 +72,8 @@ func TestDistanceByHand(t *testing.T) {
 
 // Distinct Pauli operators are perfectly distinguishable channels: the
 // eigenvalues of P†Q are ±1 or ±i pairs whose hull holds 0, so the diamond
-// distance is 2 (Watrous 2018, Thm 3.55 applied to anticommuting Paulis).
+// distance is 2 (Watrous 2018, chapter 3, the unitary-channel theorem, 3.55 from memory,
+// applied to anticommuting Paulis).
 func TestDiamondPaulis(t *testing.T) {
 	paulis := map[string]*mat.CDense{"I": gateI, "X": gateX, "Y": gateY, "Z": gateZ}
 	for a, p := range paulis {
@@ -88,7 +90,7 @@ func TestDiamondPaulis(t *testing.T) {
 }
 
 // Average gate fidelity (d + |tr U†V|²)/(d(d+1)) (Nielsen, Phys. Lett. A 303
-// (2002) 249, eq. for unitary channels): for T against I, tr = 1 + e^{iπ/4},
+// (2002) 249, its formula for unitary channels): for T against I, tr = 1 + e^{iπ/4},
 // |tr|² = 2 + √2, d = 2.
 func TestFidelityByHand(t *testing.T) {
 	want := (2 + 2 + math.Sqrt2) / 6
@@ -108,6 +110,13 @@ func TestEigenphasesHardSpectra(t *testing.T) {
 		"wide":           {-3, -2, -1, 0, 1, 2, 3, 3.1},
 		"around -1":      {math.Pi - 1e-11, -math.Pi + 1e-11, math.Pi, math.Pi - 3e-11},
 		"pauli":          {1, -1, 1, -1},
+		// Traceless, so the first pole is the fixed angle 2.1, which here is
+		// an eigenphase: the transform is singular and must be rebuilt.
+		"on the first pole": {2.1, 2.1 - math.Pi},
+		// A pole 1e-6 from an eigenphase: accepted by the singularity check
+		// but beyond the |x| limit, so it is moved into the widest gap.
+		"near the first pole": {2.1 + 1e-6, 2.1 - math.Pi, 2.1 + math.Pi/2, 2.1 - math.Pi/2},
+		"trace pole":          tracePoleSpectrum(),
 	}
 	for name, ph := range cases {
 		for _, q := range []*mat.CDense{nil, haar(rng, len(ph))} {
@@ -120,4 +129,15 @@ func TestEigenphasesHardSpectra(t *testing.T) {
 			}
 		}
 	}
+}
+
+// tracePoleSpectrum returns eigenphases (0, 0, 0, x) where x is exactly the
+// first pole chosen from the trace, arg(3 + e^{ix}) + π + 0.3, found by
+// fixed-point iteration (the map is a contraction here).
+func tracePoleSpectrum() []float64 {
+	x := 3.0
+	for i := 0; i < 200; i++ {
+		x = wrapPhase(cmplx.Phase(complex(3, 0)+cmplx.Exp(complex(0, x))) + math.Pi + 0.3)
+	}
+	return []float64{0, 0, 0, x}
 }

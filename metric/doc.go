@@ -20,20 +20,37 @@
 // that names the function, the argument and the sizes or values it saw. Every function
 // in the package follows this rule. Inputs said to be unitary or unit vectors
 // are trusted to be so up to rounding; the package does not check it.
+// Entries that are NaN or infinite make the results NaN.
 //
 // # Numerics
 //
 // gonum has no complex LAPACK, so the package carries its own small complex
-// kernels (products, LU factorisation with partial pivoting, Householder
-// reduction of a Hermitian matrix to real tridiagonal form) and hands the
-// real tridiagonal eigenproblem to gonum's LAPACK (Dsterf, Dsteqr).
-// Eigenphases of a unitary W are found from the Hermitian matrix
+// kernels (a blocked product, LU factorisation with partial pivoting,
+// triangular solves, Householder reduction of a Hermitian matrix to real
+// tridiagonal form, inverse iteration for the few eigenvectors a witness
+// needs) and hands the real tridiagonal eigenvalues to gonum's LAPACK
+// (Dsterf). Matrices of any scale are handled: each Hermitian and
+// tridiagonal matrix is scaled by a power of two into [0.5, 1) and parts
+// below 2^-300 of its largest entry are set to zero before reduction, which
+// moves no eigenvalue by more than about 2^-280 of the norm (far below
+// rounding) and keeps tiny and subnormal entries out of the paths where they
+// would overflow or trip gonum's rescaling. On amd64 the innermost loops use AVX2 with FMA
+// when the processor has them; large products and reductions are shared out
+// over the available cores.
+//
+// Eigenphases of a unitary W come from the Hermitian matrix
 // C = i(I + cW)(I − cW)⁻¹, |c| = 1 (a Cayley transform), whose eigenvalue
 // x = −cot(φ/2) determines each eigenphase φ of cW one to one. Hermitian
-// eigensolvers are accurate for degenerate and clustered spectra; the point
-// c̄ is placed away from the spectrum (opposite the mean eigenvalue, and again
-// in the widest gap if the first choice fell too close to an eigenvalue), so
-// the eigenphases come out within a few units of rounding of 1e-16·n.
-// For a pair (U, V) the transform is built from V ± cU directly, so V†U is
-// never formed.
+// eigensolvers are backward stable and keep degenerate and clustered spectra
+// accurate. The accuracy of C itself falls like ε·‖C‖², and ‖C‖ grows as the
+// pole c̄ nears an eigenvalue, so the pole is placed opposite the mean
+// eigenvalue (ideal when U and V nearly agree, the usual case) and, if that
+// first choice falls within about 2e-3 of an eigenvalue, the transform is
+// built a second time with the pole in the middle of the widest gap of the
+// spectrum just found. Each eigenphase is then accurate to about 1e-14 for
+// the sizes of the tests (2.5e-14 at worst against NumPy up to 64×64). For a
+// pair (U, V) the transform is built from V ± cU directly, so V†U is never
+// formed. One transform costs about 2n³ complex multiply-adds: LU (n³/3),
+// the solve (n³) and the reduction (2n³/3); spread spectra of large unitaries
+// need the second transform about half the time.
 package metric

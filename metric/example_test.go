@@ -76,3 +76,29 @@ func ExampleStateDistance() {
 	// Output:
 	// 0.7071
 }
+
+// A diagonal unitary's eigenphases are the angles of its diagonal, sorted.
+func ExampleEigenphases() {
+	w := mat.NewCDense(3, 3, []complex128{
+		1i, 0, 0,
+		0, -1, 0,
+		0, 0, complex(math.Sqrt2/2, math.Sqrt2/2),
+	})
+	for _, p := range metric.Eigenphases(w) {
+		fmt.Printf("%.4f ", p)
+	}
+	fmt.Println()
+	// Output:
+	// 0.7854 1.5708 3.1416
+}
+
+// EquateStates compares state vectors up to global phase.
+func ExampleEquateStates() {
+	a := []complex128{1 / math.Sqrt2, 1i / math.Sqrt2}
+	b := []complex128{-1 / math.Sqrt2, -1i / math.Sqrt2}
+	fmt.Println(cmp.Equal(a, b, metric.EquateStates(1e-12)))
+	fmt.Println(cmp.Equal(a, b, metric.EquateStatesExactPhase(1e-12)))
+	// Output:
+	// true
+	// false
+}

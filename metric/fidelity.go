@@ -14,7 +14,7 @@ import (
 func AverageFidelity(u, v mat.CMatrix) float64 {
 	n := pairSize("AverageFidelity", u, v)
 	d := float64(n)
-	t := cmplx.Abs(traceInner(rowMajor(u, nil), rowMajor(v, nil)))
+	t := cmplx.Abs(inner(rowMajor(u, nil), rowMajor(v, nil)))
 	return (d + t*t) / (d * (d + 1))
 }
 
@@ -25,16 +25,6 @@ func AverageFidelity(u, v mat.CMatrix) float64 {
 func ProcessFidelity(u, v mat.CMatrix) float64 {
 	n := pairSize("ProcessFidelity", u, v)
 	d := float64(n)
-	t := cmplx.Abs(traceInner(rowMajor(u, nil), rowMajor(v, nil)))
+	t := cmplx.Abs(inner(rowMajor(u, nil), rowMajor(v, nil)))
 	return t * t / (d * d)
-}
-
-// traceInner returns tr(u†v) = Σ conj(u_ij)·v_ij for equal-size buffers.
-func traceInner(u, v []complex128) complex128 {
-	var t complex128
-	v = v[:len(u)]
-	for i, x := range u {
-		t += conj(x) * v[i]
-	}
-	return t
 }

@@ -5,7 +5,6 @@ import (
 	"runtime"
 	"sync"
 
-	"gonum.org/v1/gonum/lapack"
 	lapackgonum "gonum.org/v1/gonum/lapack/gonum"
 )
 
@@ -29,12 +28,34 @@ const maxWorkers = 8
 // reduce overwrites t.a (n×n, column-major, Hermitian: only the lower triangle
 // is read) with the reflectors and fills diag, off and tau.
 //
+// The lower triangle is first scaled by a power of two into [0.5, 1) and its
+// negligible parts set to zero (see negligible); diag and off are scaled
+// back at the end, so T is that of the matrix given.
+func (t *tridiagonal) reduce() {
+	n, a := t.n, t.a
+	big := 0.0
+	for j := 0; j < n; j++ {
+		big = math.Max(big, largestPart(a[j*n+j:j*n+n]))
+	}
+	e := scaleExponent(big)
+	for j := 0; j < n; j++ {
+		scaleParts(a[j*n+j:j*n+n], -e)
+	}
+	t.reduceScaled()
+	if e != 0 {
+		scaleFloats(t.diag, e, false)
+		scaleFloats(t.off, e, false)
+	}
+}
+
+// reduceScaled is reduce on a matrix already scaled.
+//
 // Each step k applies reflector k to the trailing block as the rank-2 update
 // A −= v·wᴴ + w·vᴴ and, in the same pass over memory, multiplies the updated
 // block by reflector k+1 (which needs only the block's first column, updated
 // beforehand). One sweep of the block per step instead of two; for large
 // blocks the columns are shared out over the cores.
-func (t *tridiagonal) reduce() {
+func (t *tridiagonal) reduceScaled() {
 	n, a := t.n, t.a
 	t.diag[0] = real(a[0])
 	if n == 1 {
@@ -207,14 +228,11 @@ func sweepKernelGo(col, v, w, y, x []complex128, p, q, r complex128) complex128 
 	return s
 }
 
-// tinyColumn is the size below which reflector treats a column as zero.
-const tinyColumn = 1e-200
-
 // reflector turns x into the vector v of a Householder reflector
 // H = I − tau·v·vᴴ with Hᴴ·x = (beta, 0, …, 0), beta real: x[0] is left for
-// the caller, x[1:] becomes v[1:] (v[0] = 1). It follows LAPACK's zlarfg
-// without the rescaling for tiny norms, which the unit-scale inputs of this
-// package do not need.
+// the caller, x[1:] becomes v[1:] (v[0] = 1). It follows LAPACK's zlarfg,
+// with the norm summed over entries scaled by the largest one instead of
+// zlarfg's repeated rescaling.
 func reflector(x []complex128) (beta float64, tau complex128) {
 	alpha := x[0]
 	ar, ai := real(alpha), imag(alpha)
@@ -224,11 +242,8 @@ func reflector(x []complex128) (beta float64, tau complex128) {
 	for _, z := range x[1:] {
 		scale = math.Max(scale, math.Max(math.Abs(real(z)), math.Abs(imag(z))))
 	}
-	if scale < tinyColumn {
-		// Below tinyColumn the column is treated as zero: 1/(alpha − beta) could overflow, and
-		// for the unit-scale matrices of this package the dropped entries move the eigenvalues
-		// by less than sqrt(n)·1e-200 (Weyl's inequality).
-		return ar, 0
+	if scale == 0 {
+		return 0, 0
 	}
 	var ss float64
 	for _, z := range x[1:] {
@@ -241,9 +256,19 @@ func reflector(x []complex128) (beta float64, tau complex128) {
 	sr, si := ar/scale, ai/scale
 	beta = -math.Copysign(scale*math.Sqrt(sr*sr+si*si+ss), ar)
 	tau = complex((beta-ar)/beta, -ai/beta)
-	s := 1 / (alpha - complex(beta, 0))
-	for i := range x[1:] {
-		x[i+1] *= s
+	// |alpha − beta| = |ar| + |beta| (in the real part) is at least |beta|,
+	// which is at least every part of x: each quotient is at most about 1.
+	// Its reciprocal overflows when beta is subnormal, so then divide.
+	d := alpha - complex(beta, 0)
+	if math.Abs(beta) >= 0x1p-1000 {
+		s := 1 / d
+		for i := range x[1:] {
+			x[i+1] *= s
+		}
+	} else {
+		for i := range x[1:] {
+			x[i+1] /= d
+		}
 	}
 	return beta, tau
 }
@@ -274,27 +299,29 @@ func hemvLower(m int, alpha complex128, a []complex128, lda int, x, y []complex1
 }
 
 // values returns the eigenvalues of T in ascending order, overwriting diag
-// and off. It reports false if the QR iteration did not converge.
+// and off. It reports false if the QR iteration did not converge, which for
+// finite entries it does not.
+//
+// T is handed to Dsterf scaled by a power of two into [0.5, 1) with its
+// negligible entries set to zero (see negligible), so that Dsterf never
+// rescales a block itself; the eigenvalues are scaled back.
 func (t *tridiagonal) values() ([]float64, bool) {
-	t.flushTiny()
+	e := scaleExponent(math.Max(largestAbs(t.diag), largestAbs(t.off)))
+	scaleFloats(t.diag, -e, true)
+	scaleFloats(t.off, -e, true)
 	ok := lapackgonum.Implementation{}.Dsterf(t.n, t.diag, t.off)
+	if e != 0 {
+		scaleFloats(t.diag, e, false)
+	}
 	return t.diag, ok
 }
 
-// vectors returns the eigenvalues of T in ascending order, overwriting diag
-// and off, and puts the eigenvectors of T into the columns of z (row-major
-// n×n). work needs length max(1, 2n−2).
-func (t *tridiagonal) vectors(z, work []float64) ([]float64, bool) {
-	ok := lapackgonum.Implementation{}.Dsteqr(lapack.EVTridiag, t.n, t.diag, t.off, z, t.n, work)
-	return t.diag, ok
-}
-
-// backTransform turns an eigenvector of T, given as column j of the
-// row-major real matrix z, into the eigenvector Q·y of the original matrix.
-func (t *tridiagonal) backTransform(z []float64, j int, dst []complex128) []complex128 {
+// backTransform turns an eigenvector y of T into the eigenvector Q·y of the
+// original matrix, written to dst.
+func (t *tridiagonal) backTransform(y []float64, dst []complex128) []complex128 {
 	n := t.n
 	for i := 0; i < n; i++ {
-		dst[i] = complex(z[i*n+j], 0)
+		dst[i] = complex(y[i], 0)
 	}
 	for k := n - 2; k >= 0; k-- {
 		tau := t.tau[k]
@@ -317,29 +344,3 @@ func (t *tridiagonal) backTransform(z []float64, j int, dst []complex128) []comp
 }
 
 func conj(z complex128) complex128 { return complex(real(z), -imag(z)) }
-
-// flushTiny sets to zero the entries of T below 1e-100 of its largest. gonum's Dsterf rescales a
-// split-off block whose norm is below about 1e-123 with a Dlascl call whose row-major stride
-// does not fit the vector, and panics (gonum v0.17.0, dsterf.go:104); a block this small
-// beside entries of order one arises from rounding in nearly equal unitaries. By Weyl's
-// inequality the eigenvalues move by at most 3·1e-100 of the largest entry, far below rounding.
-func (t *tridiagonal) flushTiny() {
-	top := 0.0
-	for _, v := range t.diag {
-		top = math.Max(top, math.Abs(v))
-	}
-	for _, v := range t.off {
-		top = math.Max(top, math.Abs(v))
-	}
-	floor := 1e-100 * top
-	for i, v := range t.diag {
-		if math.Abs(v) < floor {
-			t.diag[i] = 0
-		}
-	}
-	for i, v := range t.off {
-		if math.Abs(v) < floor {
-			t.off[i] = 0
-		}
-	}
-}

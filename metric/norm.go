@@ -25,37 +25,61 @@ func OperatorNorm(a mat.CMatrix) float64 {
 // PhaseDistance takes it out.
 func Distance(u, v mat.CMatrix) float64 {
 	n := pairSize("Distance", u, v)
-	d := rowMajor(u, nil)
-	w := rowMajor(v, nil)
-	for i, x := range w {
-		d[i] -= x
-	}
-	return operatorNorm(d, n, n)
+	d, k := difference(u, v)
+	return math.Ldexp(operatorNorm(d, n, n), k)
 }
 
-// operatorNorm is OperatorNorm of the r×c row-major matrix a.
-func operatorNorm(a []complex128, r, c int) float64 {
-	// Scale a to largest entry 1 and set entries below 1e-150 of the largest to zero before
-	// forming the Gram matrix, which squares them: a difference of nearly equal unitaries can hold
-	// a rounding error of 1e-16 beside terms of 1e-277, whose squares and products underflow and
-	// upset the eigenvalue iteration. Together the dropped entries move the norm by less than
-	// sqrt(r·c)·1e-150 of it, far below rounding. ‖a‖ = s·‖a/s‖.
-	scale := 0.0
-	for _, x := range a {
-		scale = math.Max(scale, math.Max(math.Abs(real(x)), math.Abs(imag(x))))
+// difference returns (a − b)/2^k row-major, for matrices of equal size, with
+// k = 0 unless a − b overflows, when k = 1.
+func difference(a, b mat.CMatrix) ([]complex128, int) {
+	d := subtract(a, b, 1)
+	if math.IsInf(largestPart(d), 0) {
+		return subtract(a, b, 0.5), 1
 	}
-	if scale == 0 {
-		return 0
-	}
-	scaled := make([]complex128, len(a))
-	for i, x := range a {
-		x /= complex(scale, 0)
-		if math.Abs(real(x)) < 1e-150 && math.Abs(imag(x)) < 1e-150 {
-			x = 0
+	return d, 0
+}
+
+// subtract returns s·a − s·b row-major.
+func subtract(a, b mat.CMatrix, s float64) []complex128 {
+	d := rowMajor(a, nil)
+	r, c := b.Dims()
+	if s != 1 {
+		for i, x := range d {
+			d[i] = complex(s*real(x), s*imag(x))
 		}
-		scaled[i] = x
 	}
-	a = scaled
+	if m, ok := b.(*mat.CDense); ok {
+		raw := m.RawCMatrix()
+		for i := 0; i < r; i++ {
+			row := raw.Data[i*raw.Stride : i*raw.Stride+c]
+			for j, x := range row {
+				d[i*c+j] -= complex(s*real(x), s*imag(x))
+			}
+		}
+		return d
+	}
+	for i := 0; i < r; i++ {
+		for j := 0; j < c; j++ {
+			x := b.At(i, j)
+			d[i*c+j] -= complex(s*real(x), s*imag(x))
+		}
+	}
+	return d
+}
+
+// operatorNorm is OperatorNorm of the r×c row-major matrix a, which it
+// overwrites.
+//
+// a is first scaled by a power of two into [0.5, 1) and its negligible parts
+// set to zero (see negligible): the Gram matrix then neither overflows nor
+// underflows, whatever the scale of a, and the norm is scaled back at the end.
+func operatorNorm(a []complex128, r, c int) float64 {
+	big := largestPart(a)
+	if math.IsNaN(big) || math.IsInf(big, 0) {
+		return math.NaN()
+	}
+	e := scaleExponent(big)
+	scaleParts(a, -e)
 	// Read column-major, a is B = aᵀ (c×r). Both B·Bᴴ = (a†a)ᵀ and
 	// Bᴴ·B = (aa†)ᵀ have the eigenvalues of the Gram matrices; Bᴴ stored
 	// column-major is conj(a) element by element.
@@ -81,7 +105,7 @@ func operatorNorm(a []complex128, r, c int) float64 {
 	if top < 0 {
 		return 0
 	}
-	return scale * math.Sqrt(top)
+	return math.Ldexp(math.Sqrt(top), e)
 }
 
 // hermitianValues returns the eigenvalues, ascending, of the k×k Hermitian
@@ -92,8 +116,10 @@ func hermitianValues(g []complex128, k int) []float64 {
 	vals, ok := t.values()
 	if !ok {
 		// Dsterf gives up only after 30·k QR sweeps, which a Hermitian
-		// matrix built from finite numbers does not need.
-		panic("metric: tridiagonal eigenvalue iteration did not converge")
+		// matrix of finite numbers does not need: the input held NaN or ±Inf.
+		for i := range vals {
+			vals[i] = math.NaN()
+		}
 	}
 	return vals
 }

@@ -8,9 +8,12 @@ import (
 
 // Eigenphases returns the eigenphases θ_k of the n×n unitary w, the angles of
 // its eigenvalues e^{iθ_k}, in ascending order in (−π, π], each repeated as
-// often as it occurs. They come from a Hermitian eigenproblem (see the package
-// comment), so degenerate and tightly clustered spectra keep their accuracy:
-// each phase is within a small multiple of n·1e-16 of the truth.
+// often as it occurs. They come from a Hermitian eigenproblem, the Cayley
+// transform described in the package comment, so degenerate and tightly
+// clustered spectra (the identity, −identity, eigenvalues within 1e-10 of
+// each other) keep their accuracy: each phase is within a small multiple of
+// n·1e-16 of the truth. w is trusted to be unitary; for other matrices the
+// result has no meaning.
 func Eigenphases(w mat.CMatrix) []float64 {
 	n := squareSize("Eigenphases", "matrix", w)
 	mem := spectrumScratch(n, false)
@@ -45,7 +48,7 @@ func PhaseAlign(u, v mat.CMatrix) (dist, phase float64) {
 // Diamond returns the diamond-norm distance between the unitary channels
 // ρ ↦ uρu† and ρ ↦ vρv†: 2·sqrt(1 − ν²), with ν the distance from 0 to the
 // convex hull of the eigenvalues of u†v (Watrous, The Theory of Quantum
-// Information, 2018, §3.3). With θ the shortest arc holding the eigenphases,
+// Information, 2018, chapter 3; the theorem is 3.55 if memory serves). With θ the shortest arc holding the eigenphases,
 // ν = cos(θ/2) when θ < π, so the distance is 2·sin(θ/2); otherwise the hull
 // holds 0 and the channels can be told apart perfectly: the distance is 2.
 // It ignores global phase, as channels do.

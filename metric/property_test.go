@@ -37,7 +37,7 @@ func probabilities(m mat.CMatrix, psi []complex128) []float64 {
 	return p
 }
 
-// Nielsen & Chuang §4.5.3 (eq. 4.63): if ‖U − V‖ ≤ ε then every measurement
+// Nielsen & Chuang §4.5.3: if ‖U − V‖ ≤ ε then every measurement
 // outcome's probability moves by at most 2ε. Probabilities ignore global
 // phase, so the bound holds with PhaseDistance as well.
 func TestPropertyProbabilityBound(t *testing.T) {
@@ -63,7 +63,7 @@ func TestPropertyProbabilityBound(t *testing.T) {
 	})
 }
 
-// Nielsen & Chuang §4.5.3 (eq. 4.69): ‖U_N⋯U_1 − V_N⋯V_1‖ ≤ Σ‖U_k − V_k‖, and
+// Nielsen & Chuang §4.5.3: ‖U_N⋯U_1 − V_N⋯V_1‖ ≤ Σ‖U_k − V_k‖, and
 // the same for the phase-free distance, since each factor's phase may be
 // chosen separately (DESIGN.md).
 func TestPropertyErrorsAddUp(t *testing.T) {
@@ -166,4 +166,30 @@ func TestAverageFidelityDefinition(t *testing.T) {
 		}
 		near(t, "Monte Carlo average fidelity", sum/samples, fa, 6*0.5/math.Sqrt(samples))
 	}
+}
+
+// Eigenphases of q·diag(e^{iθ})·q† give back θ, for spectra drawn to be
+// hard: repeated special angles (multiples of π/4, ±π, the solver's own
+// first pole 2.1 and its antipode), tight clusters (offsets down to 1e-12)
+// and arbitrary angles, in a random basis or none. The check is the
+// definition of an eigenvalue; the tolerance allows n·1e-16 with margin.
+func TestPropertyEigenphasesHard(t *testing.T) {
+	special := []float64{0, math.Pi, -math.Pi + 1e-12, math.Pi / 4, math.Pi / 2, -3 * math.Pi / 4, 2.1, 2.1 - math.Pi, 1.0}
+	rapid.Check(t, func(t *rapid.T) {
+		n := rapid.IntRange(1, 16).Draw(t, "n")
+		ph := make([]float64, n)
+		for i := range ph {
+			base := rapid.OneOf(rapid.SampledFrom(special), rapid.Float64Range(-math.Pi, math.Pi)).Draw(t, "angle")
+			off := rapid.SampledFrom([]float64{0, 0, 1e-12, -1e-10, 1e-7}).Draw(t, "offset")
+			ph[i] = wrapPhase(base + off)
+		}
+		var q *mat.CDense
+		if rapid.Bool().Draw(t, "rotate") {
+			q = drawUnitary(t, n, "basis")
+		}
+		got := Eigenphases(diagonal(q, ph...))
+		if e := phaseError(got, ph); e > 1e-12 {
+			t.Fatalf("eigenphases %v, want %v: error %.3g", got, ph, e)
+		}
+	})
 }

@@ -41,29 +41,17 @@ func getScratch(nc, nf, ni int) *scratch {
 // release returns s to the pool; nothing taken from it may be used after.
 func (s *scratch) release() { scratchPool.Put(s) }
 
-func (s *scratch) complexes(k int) []complex128 {
-	if s.nc+k > len(s.c) {
-		return make([]complex128, k) // more than reserved: fall back to the heap
-	}
-	out := s.c[s.nc : s.nc+k : s.nc+k]
-	s.nc += k
-	return out
-}
+func (s *scratch) complexes(k int) []complex128 { return take(s.c, &s.nc, k) }
+func (s *scratch) floats(k int) []float64       { return take(s.f, &s.nf, k) }
+func (s *scratch) ints(k int) []int             { return take(s.i, &s.ni, k) }
 
-func (s *scratch) floats(k int) []float64 {
-	if s.nf+k > len(s.f) {
-		return make([]float64, k)
+// take hands out the next k elements of buf, counting them in *used, or
+// fresh memory if buf has no room left.
+func take[T any](buf []T, used *int, k int) []T {
+	if *used+k > len(buf) {
+		return make([]T, k)
 	}
-	out := s.f[s.nf : s.nf+k : s.nf+k]
-	s.nf += k
-	return out
-}
-
-func (s *scratch) ints(k int) []int {
-	if s.ni+k > len(s.i) {
-		return make([]int, k)
-	}
-	out := s.i[s.ni : s.ni+k : s.ni+k]
-	s.ni += k
+	out := buf[*used : *used+k : *used+k]
+	*used += k
 	return out
 }

@@ -22,23 +22,31 @@ type spectrum struct {
 	tri    tridiagonal  // the reduced transform, kept for eigenvectors
 	trans  []float64    // eigenvalues of X in ascending order
 
-	withVectors bool      // whether to compute eigenvectors too
-	z           []float64 // eigenvectors of the tridiagonal form, row-major
+	withVectors bool        // whether to keep what eigenvectors need
+	diag, off   []float64   // copies of the tridiagonal form, for eigenvectors
+	found       [][]float64 // eigenvectors of the tridiagonal form made so far
 	mem         *scratch
 }
 
-// poleLimit bounds |x| for an accepted transform: beyond it the pole is
-// within 2e-4 of an eigenvalue and the Hermitian solver's absolute error
-// ε·‖X‖ would exceed about 1e-11 in the other eigenphases, so the transform
-// is built again with the pole in the widest gap of the spectrum found.
-const poleLimit = 1e4
+// poleLimit bounds |x| for a transform accepted at once. The error of the
+// computed X grows like ε·‖(I − cW)⁻¹‖·‖X‖, about ε·‖X‖²; with ‖X‖ ≤ 1e3
+// (the pole at least 2e-3 from every eigenvalue) the eigenphases stay within
+// about 1e-12. Beyond it the transform is built again with the pole in the
+// middle of the widest gap of the spectrum found, which is as far from the
+// spectrum as a pole can be, and that second result is kept.
+const poleLimit = 1e3
+
+// entryLimit bounds the entries of X before symmetrising. Beyond it the pole
+// is within about 1e-6 of an eigenvalue, close enough for rounding to have
+// moved part of X into its anti-Hermitian half, so the transform is not used.
+const entryLimit = 1e6
 
 // spectrumScratch returns scratch big enough for a spectrum of order n,
 // including room for copies of the two inputs.
 func spectrumScratch(n int, vectors bool) *scratch {
 	nf := 3 * n
 	if vectors {
-		nf += n*n + 2*n
+		nf += 2 * n
 	}
 	return getScratch(4*n*n+n*(maxWorkers+3), nf, 2*n)
 }
@@ -54,7 +62,7 @@ func (s *spectrum) compute(u, v []complex128, n int, vectors bool, mem *scratch)
 			trace += u[i*n+i]
 		}
 	} else {
-		trace = traceInner(v, u)
+		trace = inner(v, u) // tr(v†u) = Σ conj(v_ij)·u_ij
 	}
 	// Put the pole opposite the mean eigenvalue when the spectrum leans to
 	// one side (the usual case when U and V nearly agree), nudged off the
@@ -78,25 +86,47 @@ func (s *spectrum) compute(u, v []complex128, n int, vectors bool, mem *scratch)
 	s.order = mem.ints(n)
 	piv := mem.ints(n)
 	if vectors {
-		s.z = mem.floats(n * n)
+		s.diag, s.off = mem.floats(n), mem.floats(max(n-1, 0))
 	}
-	for attempt := 0; ; attempt++ {
-		ok := s.transform(alpha, m, p, piv)
-		if ok && (math.Abs(s.trans[0]) <= poleLimit && math.Abs(s.trans[n-1]) <= poleLimit || attempt >= 3) {
+	const attempts = 6
+	inGap := false // whether the pole sits in the middle of the widest gap
+	for attempt := 1; ; attempt++ {
+		status := s.transform(alpha, m, p, piv)
+		clear := status == transformDone && math.Abs(s.trans[0]) <= poleLimit && math.Abs(s.trans[n-1]) <= poleLimit
+		if clear || status == transformDone && (inGap || attempt == attempts) {
 			return
 		}
-		if ok {
-			alpha = shortestArc(s.phases).middle() + math.Pi // the middle of the widest gap
+		if attempt == attempts {
+			// Only input that is not unitary (non-finite entries, or a
+			// singular I − cW at six well-spread poles) gets here: say so
+			// with NaN.
+			for k := range s.phases {
+				s.phases[k] = math.NaN()
+				s.order[k] = k
+			}
+			s.trans = s.phases
+			return
+		}
+		if status == transformDone {
+			alpha = shortestArc(s.phases).middle() + math.Pi
+			inGap = true
 		} else {
 			alpha += 2.399963229728653 // the golden angle: never repeats a direction
+			inGap = false
 		}
 	}
 }
 
+// The outcomes of one Cayley transform.
+const (
+	transformDone    = iota // eigenvalues found; the caller checks them against poleLimit
+	transformTooNear        // the pole is so near an eigenvalue that X is not usable
+	transformFailed         // I − cW singular, non-finite entries, or no convergence
+)
+
 // transform builds and diagonalises the Cayley transform with its pole at
-// e^{iα}, using m and p (n² each) and piv. It reports false if I − cW was
-// singular to working precision or the eigenvalue iteration failed.
-func (s *spectrum) transform(alpha float64, m, p []complex128, piv []int) bool {
+// e^{iα}, using m and p (n² each) and piv, and says how it went.
+func (s *spectrum) transform(alpha float64, m, p []complex128, piv []int) int {
 	n := s.n
 	s.alpha = alpha
 	c := cmplx.Exp(complex(0, -alpha))
@@ -118,34 +148,40 @@ func (s *spectrum) transform(alpha float64, m, p []complex128, piv []int) bool {
 		}
 	}
 	if !luFactor(n, n, m, n, piv) {
-		return false
+		return transformFailed
 	}
 	swapRows(p, n, n, piv, 0)
 	solveLowerUnit(n, n, m, n, p, n)
 	solveUpper(n, n, m, n, p, n)
 	// p now holds (X/i)ᵀ column-major, which is X/i row-major; read
 	// column-major, i·p is Xᵀ = conj(X), Hermitian. Symmetrise its lower
-	// triangle to remove the rounding in the anti-Hermitian part.
+	// triangle to remove the rounding in the anti-Hermitian part. An entry
+	// above entryLimit means the pole is so near an eigenvalue that rounding
+	// may have put that eigenvalue's part of X into the anti-Hermitian half,
+	// where symmetrising would lose it: such a transform is rejected before
+	// its eigenvalues are taken.
+	largest := 0.0
 	for j := 0; j < n; j++ {
 		for i := j; i < n; i++ {
 			lo, up := p[i+j*n], p[j+i*n]
-			x := complex(0, 0.5) * (lo - conj(up))
-			if math.IsNaN(real(x)) || math.IsInf(real(x), 0) || math.IsNaN(imag(x)) || math.IsInf(imag(x), 0) {
-				return false
-			}
-			p[i+j*n] = x
+			largest = math.Max(largest, math.Max(abs1(lo), abs1(up)))
+			p[i+j*n] = complex(0, 0.5) * (lo - conj(up))
 		}
 	}
-	s.tri.reduce()
-	var vals []float64
-	var ok bool
-	if s.withVectors {
-		vals, ok = s.tri.vectors(s.z, s.mem.floats(max(1, 2*n-2)))
-	} else {
-		vals, ok = s.tri.values()
+	if math.IsNaN(largest) || math.IsInf(largest, 0) {
+		return transformFailed
 	}
+	if largest > entryLimit {
+		return transformTooNear
+	}
+	s.tri.reduce()
+	if s.withVectors {
+		copy(s.diag, s.tri.diag)
+		copy(s.off, s.tri.off)
+	}
+	vals, ok := s.tri.values()
 	if !ok {
-		return false
+		return transformFailed
 	}
 	s.trans = vals
 	// θ = α + π + 2·atan(x) increases with x over an interval of length 2π,
@@ -170,7 +206,7 @@ func (s *spectrum) transform(alpha float64, m, p []complex128, piv []int) bool {
 			s.order[j], s.order[j-1] = s.order[j-1], s.order[j]
 		}
 	}
-	return true
+	return transformDone
 }
 
 // rotate moves a[start:] to the front of a, in place.
@@ -186,12 +222,15 @@ func reverse(a []float64) {
 	}
 }
 
-// vector returns a unit eigenvector of W for phases[i]. Eigenvectors for
-// different i are orthonormal. The spectrum must have been computed with
-// vectors.
+// vector returns a unit eigenvector of W for phases[i], by inverse
+// iteration on the tridiagonal form. Vectors returned by successive calls are
+// orthonormal, also for equal phases. The spectrum must have been computed
+// with vectors.
 func (s *spectrum) vector(i int) []complex128 {
 	n := s.n
-	q := s.tri.backTransform(s.z, s.order[i], make([]complex128, n))
+	y := inverseIteration(s.diag, s.off, s.trans[s.order[i]], s.found)
+	s.found = append(s.found, y)
+	q := s.tri.backTransform(y, make([]complex128, n))
 	// q is an eigenvector of conj(X); conj(q) one of X = V·C·V†, so V†·conj(q)
 	// is one of C and hence of W.
 	for k := range q {

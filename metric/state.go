@@ -7,7 +7,7 @@ import (
 )
 
 // StateDistance returns the trace distance ½‖|a⟩⟨a| − |b⟩⟨b|‖₁ of two pure
-// states, sqrt(1 − |⟨a|b⟩|²) (Nielsen & Chuang §9.2.3). It bounds how much
+// states, sqrt(1 − |⟨a|b⟩|²) (Nielsen & Chuang §9.2, from memory). It bounds how much
 // any measurement's outcome probabilities can differ between the two states.
 // The vectors are normalised first, so only their directions matter; global
 // phase does not count. It is computed as the length of the part of b̂
@@ -16,7 +16,7 @@ import (
 func StateDistance(a, b []complex128) float64 {
 	statePair("StateDistance", a, b)
 	na, nb := stateNorms("StateDistance", a, b)
-	s := inner(a, b) / complex(na*nb, 0)
+	s := unitInner(a, b, na, nb)
 	var r2 float64
 	for i, x := range b {
 		d := x/complex(nb, 0) - s*a[i]/complex(na, 0)
@@ -31,23 +31,19 @@ func StateDistance(a, b []complex128) float64 {
 func StateFidelity(a, b []complex128) float64 {
 	statePair("StateFidelity", a, b)
 	na, nb := stateNorms("StateFidelity", a, b)
-	s := inner(a, b)
-	f := (real(s)*real(s) + imag(s)*imag(s)) / (na * na * nb * nb)
+	s := unitInner(a, b, na, nb)
+	f := real(s)*real(s) + imag(s)*imag(s)
 	return math.Min(f, 1)
 }
 
 // TraceDistance returns ½‖ρ − σ‖₁, half the sum of the absolute eigenvalues
-// of ρ − σ, for two n×n density matrices (Nielsen & Chuang §9.2.1). It is the
+// of ρ − σ, for two n×n density matrices (Nielsen & Chuang §9.2.1, from memory). It is the
 // largest difference in probability that any measurement can show between
 // them. Both are trusted to be Hermitian; their difference is symmetrised
 // before its eigenvalues are taken.
 func TraceDistance(rho, sigma mat.CMatrix) float64 {
 	n := pairSize("TraceDistance", rho, sigma)
-	d := rowMajor(rho, nil)
-	s := rowMajor(sigma, nil)
-	for i, x := range s {
-		d[i] -= x
-	}
+	d, k := difference(rho, sigma)
 	// Read column-major the buffer is (ρ − σ)ᵀ, Hermitian with the same
 	// eigenvalues; average it with its adjoint on the lower triangle.
 	for j := 0; j < n; j++ {
@@ -59,10 +55,11 @@ func TraceDistance(rho, sigma mat.CMatrix) float64 {
 	for _, x := range hermitianValues(d, n) {
 		sum += math.Abs(x)
 	}
-	return sum / 2
+	return math.Ldexp(sum/2, k)
 }
 
-// inner returns ⟨a|b⟩ = Σ conj(a_i)·b_i.
+// inner returns ⟨a|b⟩ = Σ conj(a_i)·b_i; for two matrices stored the same
+// way it is tr(a†b).
 func inner(a, b []complex128) complex128 {
 	var s complex128
 	b = b[:len(a)]
@@ -72,13 +69,36 @@ func inner(a, b []complex128) complex128 {
 	return s
 }
 
-// norm2 returns the Euclidean length of a.
+// unitInner returns ⟨â|b̂⟩ for the unit vectors â = a/na and b̂ = b/nb: each
+// entry is divided by its vector's length before the product, so that
+// states of any scale neither underflow nor overflow.
+func unitInner(a, b []complex128, na, nb float64) complex128 {
+	var s complex128
+	b = b[:len(a)]
+	for i, x := range a {
+		y := b[i]
+		s += complex(real(x)/na, -imag(x)/na) * complex(real(y)/nb, imag(y)/nb)
+	}
+	return s
+}
+
+// norm2 returns the Euclidean length of a. The sum of squares is taken with
+// a scaled by a power of two into [0.5, 1) (see scaleExponent), so that it
+// neither underflows for tiny vectors, which would make them look like the
+// zero vector, nor overflows for huge ones.
 func norm2(a []complex128) float64 {
+	big := largestPart(a)
+	if big == 0 || math.IsNaN(big) || math.IsInf(big, 0) {
+		return big
+	}
+	e := scaleExponent(big)
+	p, q := powerFactors(-e)
 	var s float64
 	for _, x := range a {
-		s += real(x)*real(x) + imag(x)*imag(x)
+		re, im := real(x)*p*q, imag(x)*p*q
+		s += re*re + im*im
 	}
-	return math.Sqrt(s)
+	return math.Ldexp(math.Sqrt(s), e)
 }
 
 // stateNorms returns the lengths of a and b, panicking if either is zero.

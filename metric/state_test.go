@@ -8,7 +8,7 @@ import (
 )
 
 // Pure-state trace distance sqrt(1 − |⟨a|b⟩|²) and fidelity |⟨a|b⟩|²
-// (Nielsen & Chuang §9.2.3, eq. 9.60 and §9.2.2) on states worked by hand.
+// (Nielsen & Chuang §9.2; section numbers from memory) on states worked by hand.
 func TestStateDistanceByHand(t *testing.T) {
 	s := 1 / math.Sqrt2
 	zero, one := []complex128{1, 0}, []complex128{0, 1}
@@ -25,8 +25,8 @@ func TestStateDistanceByHand(t *testing.T) {
 }
 
 // Trace distance of density matrices: ½ Σ|λ_i(ρ − σ)| (Nielsen & Chuang
-// §9.2.1). |0⟩⟨0| vs |1⟩⟨1| is 1; |0⟩⟨0| vs I/2 is ½; for pure states it
-// agrees with StateDistance (eq. 9.60).
+// §9.2.1, from memory). |0⟩⟨0| vs |1⟩⟨1| is 1; |0⟩⟨0| vs I/2 is ½; for pure
+// states it agrees with StateDistance (same section).
 func TestTraceDistance(t *testing.T) {
 	p0 := mat.NewCDense(2, 2, []complex128{1, 0, 0, 0})
 	p1 := mat.NewCDense(2, 2, []complex128{0, 0, 0, 1})
@@ -71,5 +71,62 @@ func TestInputErrors(t *testing.T) {
 			}()
 			f()
 		}()
+	}
+}
+
+// emptyMatrix is a 0×0 mat.CMatrix, which gonum's CDense cannot be.
+type emptyMatrix struct{}
+
+func (emptyMatrix) Dims() (int, int)                 { return 0, 0 }
+func (emptyMatrix) At(int, int) complex128           { panic("empty") }
+func (e emptyMatrix) H() mat.CMatrix                 { return e }
+func (e emptyMatrix) T() mat.CMatrix                 { return e }
+func (emptyMatrix) Conj(mat.CMatrix)                 {}
+func (emptyMatrix) IsEmpty() bool                    { return true }
+func (emptyMatrix) Slice(_, _, _, _ int) mat.CMatrix { return emptyMatrix{} }
+
+func TestEmptyInputs(t *testing.T) {
+	for name, f := range map[string]func(){
+		"OperatorNorm":  func() { OperatorNorm(emptyMatrix{}) },
+		"PhaseDistance": func() { PhaseDistance(emptyMatrix{}, emptyMatrix{}) },
+		"StateDistance": func() { StateDistance(nil, nil) },
+	} {
+		func() {
+			defer func() {
+				if _, ok := recover().(*InputError); !ok {
+					t.Errorf("%s on empty input did not panic with an *InputError", name)
+				}
+			}()
+			f()
+		}()
+	}
+}
+
+// Any mat.CMatrix serves, not only *mat.CDense: an adjoint view gives the
+// same distances as an explicit adjoint (a unitary and its adjoint have
+// conjugate spectra, so distances between adjoints are unchanged).
+func TestMatrixViews(t *testing.T) {
+	rng := newRand(21)
+	u, v := haar(rng, 8), haar(rng, 8)
+	near(t, "PhaseDistance of views", PhaseDistance(u.H(), v.H()), PhaseDistance(adjoint(u), adjoint(v)), 1e-15)
+	near(t, "Distance of views", Distance(u.H(), v.H()), Distance(u, v), 1e-14)
+	near(t, "PhaseDistance of adjoints", PhaseDistance(u.H(), v.H()), PhaseDistance(u, v), 1e-14)
+}
+
+// Non-finite entries give NaN, not a hang or a plausible number.
+func TestNonFinite(t *testing.T) {
+	bad := identity(4)
+	bad.Set(1, 2, complex(math.NaN(), 0))
+	for name, got := range map[string]float64{
+		"PhaseDistance": PhaseDistance(bad, identity(4)),
+		"Diamond":       Diamond(identity(4), bad),
+		"Distance":      Distance(bad, identity(4)),
+	} {
+		if !math.IsNaN(got) {
+			t.Errorf("%s with a NaN entry = %v, want NaN", name, got)
+		}
+	}
+	if _, d := Witness(bad, identity(4)); !math.IsNaN(d) {
+		t.Errorf("Witness with a NaN entry gives deviation %v, want NaN", d)
 	}
 }

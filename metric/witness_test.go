@@ -23,6 +23,8 @@ func TestWitnessDeviation(t *testing.T) {
 		{"beyond half", []float64{0, 2, 4}},
 		{"antipodal pair", []float64{0, math.Pi, 0, math.Pi}},
 		{"identity", []float64{0.4, 0.4, 0.4, 0.4}},
+		{"clusters 1e-10 at both ends", []float64{0.1, 0.1 + 1e-10, 0.1 - 1e-10, 0.5, 0.9, 0.9 + 1e-10, 0.9 + 2e-10, 0.3}},
+		{"clusters 1e-10 beyond half", []float64{0, 1e-10, 2, 2 + 1e-10, 4, 4 - 1e-10}},
 	} {
 		q := haar(rng, len(c.phases))
 		u := diagonal(q, c.phases...)
@@ -75,4 +77,20 @@ func apply(m mat.CMatrix, x []complex128) []complex128 {
 		}
 	}
 	return y
+}
+
+// One-dimensional "unitaries" are phases: every distance up to phase is 0,
+// and the witness is the only unit vector there is (up to phase).
+func TestOneByOne(t *testing.T) {
+	u := mat.NewCDense(1, 1, []complex128{cmplx.Exp(0.7i)})
+	v := mat.NewCDense(1, 1, []complex128{1})
+	near(t, "PhaseDistance 1×1", PhaseDistance(u, v), 0, 0)
+	near(t, "Diamond 1×1", Diamond(u, v), 0, 0)
+	near(t, "Distance 1×1", Distance(u, v), 2*math.Sin(0.35), 1e-15)
+	psi, dist := Witness(u, v)
+	near(t, "|witness|", cmplx.Abs(psi[0]), 1, 1e-15)
+	near(t, "witness deviation 1×1", dist, 0, 1e-15)
+	if got := Eigenphases(u); len(got) != 1 || math.Abs(got[0]-0.7) > 1e-15 {
+		t.Errorf("Eigenphases of e^{0.7i} = %v", got)
+	}
 }

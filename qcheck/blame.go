@@ -19,16 +19,9 @@ const (
 func blame(cfg *config, f *frame, want, got *circuit.Circuit) Blame {
 	b := Blame{FirstDiff: -1}
 	wo, gops := want.Ops, got.Ops
-	pre := 0
-	for pre < len(wo) && pre < len(gops) && wo[pre].Equal(gops[pre]) {
-		pre++
-	}
+	pre, suf := commonEnds(wo, gops)
 	if pre == len(wo) && pre == len(gops) {
 		return b
-	}
-	suf := 0
-	for suf < len(wo)-pre && suf < len(gops)-pre && wo[len(wo)-1-suf].Equal(gops[len(gops)-1-suf]) {
-		suf++
 	}
 	b.Found = true
 	b.FirstDiff = pre
@@ -39,6 +32,18 @@ func blame(cfg *config, f *frame, want, got *circuit.Circuit) Blame {
 		b.Prefix = firstDifferingPrefix(cfg, f.m, wo, gops, pre)
 	}
 	return b
+}
+
+// commonEnds returns the lengths of the longest common start and, in what is left, the longest
+// common end of two op lists.
+func commonEnds(a, b []circuit.Op) (pre, suf int) {
+	for pre < len(a) && pre < len(b) && a[pre].Equal(b[pre]) {
+		pre++
+	}
+	for suf < len(a)-pre && suf < len(b)-pre && a[len(a)-1-suf].Equal(b[len(b)-1-suf]) {
+		suf++
+	}
+	return pre, suf
 }
 
 // firstDifferingPrefix returns the smallest k such that the first k ops of got differ beyond the

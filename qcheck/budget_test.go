@@ -79,7 +79,7 @@ func TestCheckShares(t *testing.T) {
 		t.Fatalf("OverShare = %v, want entry 1 only", over)
 	}
 	err := l.CheckShares()
-	if err == nil || !strings.Contains(err.Error(), "entry 1 at op 1 → before op 0 on q1") {
+	if err == nil || !strings.Contains(err.Error(), "entry 1 at op 1 → removed (at op 0) on q1") {
 		t.Errorf("CheckShares = %v, want entry 1 named with its place", err)
 	}
 }
@@ -125,7 +125,7 @@ func TestWithinBudget(t *testing.T) {
 		}
 	}
 	// The largest first: entry 19, rz(0.02) with δ = 2 sin(0.005) ≈ 0.01, 20% of ε.
-	if !strings.Contains(strings.Join(strings.Fields(msg), " "), "19 0.01 20.00% - op 57 → before op 0 on q4 rz(0.02) q4 → (nothing) 18 0.0095") {
+	if !strings.Contains(strings.Join(strings.Fields(msg), " "), "19 0.01 20.00% - op 57 → removed (at op 0) on q4 rz(0.02) q4 → (nothing) 18 0.0095") {
 		t.Errorf("report does not start its table with entry 19:\n%s", msg)
 	}
 	var over fakeTB

@@ -384,3 +384,26 @@ func TestMeasureAndEngineEncodeAsText(t *testing.T) {
 		}
 	}
 }
+
+// The verdict-only path compares just the ops between the common start and end of the two
+// circuits; by the unitary invariance of the operator norm (and the similarity of V†U to B†A for
+// the diamond distance and the average fidelity) it must give the whole circuits' distance.
+func TestDifferingWindowsKeepTheDistance(t *testing.T) {
+	g := circuits(3, 8)
+	rapid.Check(t, func(rt *rapid.T) {
+		s, a, b, p := g.Draw(rt, "start"), g.Draw(rt, "a"), g.Draw(rt, "b"), g.Draw(rt, "end")
+		want := circuit.New(3).Compose(s).Compose(a).Compose(p)
+		got := circuit.New(3).Compose(s).Compose(b).Compose(p)
+		for _, opts := range [][]Option{nil, {ExactPhase()}, {UseMeasure(Diamond)}, {UseMeasure(AverageFidelity)}} {
+			cfg, _ := newConfig(opts)
+			quick, err := compare(cfg, want, got, false)
+			if err != nil {
+				rt.Fatal(err)
+			}
+			whole := mustCompare(t, want, got, opts...)
+			if math.Abs(quick.Distance-whole.Distance) > 1e-9 {
+				rt.Fatalf("%v: windows give %g, whole circuits %g", whole.Measure, quick.Distance, whole.Distance)
+			}
+		}
+	})
+}

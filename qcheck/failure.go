@@ -24,6 +24,7 @@ const (
 	BadOutput
 )
 
+// String returns how the pass failed, in words.
 func (k FailureKind) String() string {
 	switch k {
 	case NotEquivalent:
@@ -68,13 +69,21 @@ type Failure struct {
 type subject func(*circuit.Circuit) (*circuit.Circuit, []int, error)
 
 func (p Pass) subject() subject {
+	if p == nil {
+		return nil
+	}
 	return func(c *circuit.Circuit) (*circuit.Circuit, []int, error) {
 		out, err := p(c)
 		return out, nil, err
 	}
 }
 
-func (p LayoutPass) subject() subject { return subject(p) }
+func (p LayoutPass) subject() subject {
+	if p == nil {
+		return nil
+	}
+	return subject(p)
+}
 
 // trial runs the pass on one input and checks everything that can go wrong. It returns nil when
 // the pass is correct on this input.

@@ -40,17 +40,14 @@ func GoCode(c *circuit.Circuit) string {
 }
 
 // builderName is the name of the builder method for a standard gate (DESIGN.md: the upper-case
-// form of the OpenQASM name, with sdg, tdg and sxdg keeping "dg" lower-case).
+// form of the OpenQASM name, with a trailing "dg" kept lower-case, as in Sdg and ISWAPdg).
 func builderName(name string) string {
+	if stem, ok := strings.CutSuffix(name, "dg"); ok && stem != "" {
+		return strings.ToUpper(stem) + "dg"
+	}
 	switch name {
 	case "id":
 		return "I"
-	case "sdg":
-		return "Sdg"
-	case "tdg":
-		return "Tdg"
-	case "sxdg":
-		return "SXdg"
 	case "measure":
 		return "Measure"
 	case "reset":

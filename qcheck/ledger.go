@@ -2,6 +2,7 @@ package qcheck
 
 import (
 	"fmt"
+	"math"
 	"sort"
 	"sync"
 
@@ -90,8 +91,10 @@ func newEntry(r Rewrite) (Entry, error) {
 	if err := r.Window.check(); err != nil {
 		return Entry{}, err
 	}
-	if !(r.Share >= 0) {
-		return Entry{}, fmt.Errorf("qcheck: ledger: rewrite at %s has share %v; a share is a non-negative number", r.Window, r.Share)
+	// NaN fails the comparison; +Inf would be a share no δ can exceed, so OverShare would never
+	// flag the entry.
+	if !(r.Share >= 0) || math.IsInf(r.Share, 1) {
+		return Entry{}, fmt.Errorf("qcheck: ledger: rewrite at %s has share %v; a share is a finite non-negative number (0 for none)", r.Window, r.Share)
 	}
 	k := len(r.Window.Qubits)
 	if k > MaxPieceQubits {

@@ -115,6 +115,10 @@ func TestRecordRefusesBadRewrites(t *testing.T) {
 		{"nil", Rewrite{Window: Window{Qubits: []int{0}}, Piece: one}, "no replacement circuit"},
 		{"bad op", Rewrite{Window: Window{Qubits: []int{0}}, Piece: one, Replacement: circuit.New(1).RZ(math.NaN(), 0)}, "op 0 (rz)"},
 		{"share", Rewrite{Window: Window{Qubits: []int{0}}, Piece: one, Replacement: one, Share: -1}, "share -1"},
+		{"NaN share", Rewrite{Window: Window{Qubits: []int{0}}, Piece: one, Replacement: one, Share: math.NaN()}, "share NaN"},
+		// A share of +Inf used to be accepted, and OverShare could then never flag the entry.
+		{"infinite share", Rewrite{Window: Window{Qubits: []int{0}}, Piece: one, Replacement: one, Share: math.Inf(1)}, "share +Inf"},
+		{"-Inf share", Rewrite{Window: Window{Qubits: []int{0}}, Piece: one, Replacement: one, Share: math.Inf(-1)}, "share -Inf"},
 		{"too wide", Rewrite{Window: Window{Qubits: allQubits(MaxPieceQubits + 1)}, Piece: one, Replacement: one}, "over the limit"},
 	} {
 		var l Ledger

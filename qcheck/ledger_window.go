@@ -16,11 +16,11 @@ type Span struct {
 // Len returns the number of ops in the span.
 func (s Span) Len() int { return s.End - s.Start }
 
-// String writes the span for people: "op 7", "ops 7–9", or "before op 7" when empty.
+// String writes the span for people: "op 7", "ops 7–9", or "nothing (at op 7)" when empty.
 func (s Span) String() string {
 	switch s.Len() {
 	case 0:
-		return fmt.Sprintf("before op %d", s.Start)
+		return fmt.Sprintf("nothing (at op %d)", s.Start)
 	case 1:
 		return fmt.Sprintf("op %d", s.Start)
 	}
@@ -40,9 +40,17 @@ type Window struct {
 	Qubits []int
 }
 
-// String writes the window as "op 7 → ops 7–9 on q3", the place shown in budget reports.
+// String writes the window as "op 7 → ops 7–9 on q3", the place shown in budget reports; a side
+// that is empty reads "op 7 → removed (at op 6) on q3" or "inserted (at op 2) → op 2 on q1".
 func (w Window) String() string {
-	return fmt.Sprintf("%s → %s on %s", w.Before, w.After, qubitList(w.Qubits))
+	before, after := w.Before.String(), w.After.String()
+	if w.Before.Len() == 0 {
+		before = fmt.Sprintf("inserted (at op %d)", w.Before.Start)
+	}
+	if w.After.Len() == 0 {
+		after = fmt.Sprintf("removed (at op %d)", w.After.Start)
+	}
+	return fmt.Sprintf("%s → %s on %s", before, after, qubitList(w.Qubits))
 }
 
 // check reports a malformed window.

@@ -91,6 +91,7 @@ const (
 	Dirty
 )
 
+// String returns "clean" or "dirty".
 func (s AncillaState) String() string {
 	switch s {
 	case Clean:
@@ -159,6 +160,7 @@ const (
 	Distribution
 )
 
+// String returns the measure's name as reports write it.
 func (m Measure) String() string {
 	switch m {
 	case OperatorNorm:
@@ -207,6 +209,7 @@ const (
 	MatrixFree
 )
 
+// String returns the engine's name.
 func (e Engine) String() string {
 	switch e {
 	case Auto:

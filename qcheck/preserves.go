@@ -1,6 +1,8 @@
 package qcheck
 
 import (
+	"fmt"
+
 	"pgregory.net/rapid"
 	"qcheck.dev/qcheck/circuit"
 )
@@ -40,7 +42,7 @@ func PreservesLayout(t TB, pass LayoutPass, g *rapid.Generator[*circuit.Circuit]
 
 func preserves(t TB, s subject, g *rapid.Generator[*circuit.Circuit], opts []Option) {
 	t.Helper()
-	cfg, err := newConfig(opts)
+	cfg, err := checkedConfig(s, g, opts)
 	if err != nil {
 		t.Fatalf("qcheck.Preserves: %v", err)
 		return
@@ -80,11 +82,23 @@ func LayoutProperty(pass LayoutPass, g *rapid.Generator[*circuit.Circuit], opts 
 }
 
 func checkedProperty(s subject, g *rapid.Generator[*circuit.Circuit], opts []Option) func(*rapid.T) {
-	cfg, err := newConfig(opts)
+	cfg, err := checkedConfig(s, g, opts)
 	if err != nil {
 		return func(t *rapid.T) { t.Fatalf("qcheck: %v", err) }
 	}
 	return property(cfg, s, g, nil)
+}
+
+// checkedConfig resolves the options of a campaign after checking that it has a pass and a
+// generator.
+func checkedConfig(s subject, g *rapid.Generator[*circuit.Circuit], opts []Option) (*config, error) {
+	switch {
+	case s == nil:
+		return nil, fmt.Errorf("the pass is nil")
+	case g == nil:
+		return nil, fmt.Errorf("the circuit generator is nil")
+	}
+	return newConfig(opts)
 }
 
 // property draws one circuit, runs the pass and fails t with the report when it is wrong, after

@@ -212,3 +212,17 @@ func TestPreservesLayout(t *testing.T) {
 		t.Fatalf("a router that forgets its layout was not caught: %v %+v", err, f)
 	}
 }
+
+func TestNilPassOrGenerator(t *testing.T) {
+	if _, err := Search(nil, circuits(2, 5)); err == nil || !strings.Contains(err.Error(), "the pass is nil") {
+		t.Errorf("nil pass: %v", err)
+	}
+	if _, err := Search(cancelPairs, nil); err == nil || !strings.Contains(err.Error(), "generator is nil") {
+		t.Errorf("nil generator: %v", err)
+	}
+	h := &searchTB{name: "nil"}
+	CheckRule(h, nil, nil)
+	if !h.failed || !strings.Contains(strings.Join(h.errors, ""), "the rule is nil") {
+		t.Errorf("nil rule: %q", h.errors)
+	}
+}

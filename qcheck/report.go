@@ -2,6 +2,7 @@ package qcheck
 
 import (
 	"fmt"
+	"slices"
 	"strings"
 
 	"github.com/google/go-cmp/cmp"
@@ -13,9 +14,13 @@ import (
 const reportMaxOps = 60
 
 // Headline is the first line of the report: the verdict and the distance against the tolerance.
+// When the circuits are equivalent it is the whole verdict, so it also says what was compared
+// ("up to global phase", "global phase counts", or the measured qubits); on a difference the
+// report's next line says it.
 func (r Result) Headline() string {
 	if r.Equivalent {
-		return fmt.Sprintf("qcheck: got is equivalent to want: %s %.4g ≤ tolerance %g", r.Measure, r.Distance, r.Tolerance)
+		return fmt.Sprintf("qcheck: got is equivalent to want: %s %.4g ≤ tolerance %g (%s)",
+			r.Measure, r.Distance, r.Tolerance, r.phaseWords())
 	}
 	return fmt.Sprintf("qcheck: got differs from want: %s %.4g > tolerance %g", r.Measure, r.Distance, r.Tolerance)
 }
@@ -41,16 +46,21 @@ func (r Result) Report() string {
 	return b.String()
 }
 
-// writeSettings writes the measure, phase convention, engine and options.
-func (r Result) writeSettings(b *strings.Builder) {
-	phase := "up to global phase"
+// phaseWords says how the two circuits were compared: up to global phase, with the phase
+// counting, or by the distributions of measuring some qubits.
+func (r Result) phaseWords() string {
 	switch {
 	case r.Measure == Distribution:
-		phase = "distributions of measuring " + qubitList(r.Measured)
+		return "distributions of measuring " + qubitList(r.Measured)
 	case r.ExactPhase:
-		phase = "global phase counts"
+		return "global phase counts"
 	}
-	fmt.Fprintf(b, "  measure: %s, %s\n", r.Measure, phase)
+	return "up to global phase"
+}
+
+// writeSettings writes the measure, phase convention, engine and options.
+func (r Result) writeSettings(b *strings.Builder) {
+	fmt.Fprintf(b, "  measure: %s, %s\n", r.Measure, r.phaseWords())
 	b.WriteString(wrapList("  engine: ", strings.Fields(fmt.Sprintf("%s (%s)", r.Engine, r.Certifies)), " "))
 	if r.Options != "" {
 		fmt.Fprintf(b, "  options: %s\n", r.Options)
@@ -137,7 +147,8 @@ func (r Result) writeBlame(b *strings.Builder, wantName, gotName string) {
 	wl := fmt.Sprintf("    %-*s ", pad+1, wantName+":")
 	gl := fmt.Sprintf("    %-*s ", pad+1, gotName+":")
 	fmt.Fprintf(b, "  the op lists first differ at op %d; between their common start and end,\n", bl.FirstDiff)
-	fmt.Fprintf(b, "  %s has %s where %s has %s\n", wantName, rangeWords(bl.WantOps), gotName, rangeWords(bl.GotOps))
+	fmt.Fprintf(b, "  %s has %s where %s has %s\n",
+		wantName, rangeWords(bl.WantOps, "inserted"), gotName, rangeWords(bl.GotOps, "removed"))
 	if len(w)+len(g) <= 12 {
 		b.WriteString(wrapList(wl, opList(w, bl.WantOps[0]), " · "))
 		b.WriteString(wrapList(gl, opList(g, bl.GotOps[0]), " · "))
@@ -150,10 +161,14 @@ func (r Result) writeBlame(b *strings.Builder, wantName, gotName string) {
 	}
 }
 
-func rangeWords(r [2]int) string {
+// rangeWords writes a half-open range of op indices for the blame line: "1 op (op 3)",
+// "2 ops (ops 3–4)", or for an empty range "nothing (removed; at op 3)", where empty says what
+// got did there ("removed" on got's side, "inserted" on want's), so that the gap reads as a
+// deletion or an insertion at that place rather than as a position.
+func rangeWords(r [2]int, empty string) string {
 	switch r[1] - r[0] {
 	case 0:
-		return fmt.Sprintf("no ops (before op %d)", r[0])
+		return fmt.Sprintf("nothing (%s; at op %d)", empty, r[0])
 	case 1:
 		return fmt.Sprintf("1 op (op %d)", r[0])
 	}
@@ -210,7 +225,7 @@ func (r Result) writeEvidence(b *strings.Builder) {
 		input := Ket(m.Input, n)
 		if m.InputBasis >= 0 {
 			input = basisKet(m.InputBasis, n)
-		} else if r.Witness != nil && sameState(m.Input, r.Witness) {
+		} else if r.Witness != nil && slices.Equal(m.Input, r.Witness) {
 			input = "ψ, the witness above"
 		}
 		b.WriteString(wrapList("  prepare ", strings.Fields(input+" and run the circuit;"), " "))
@@ -242,18 +257,6 @@ func prob(p float64) string {
 		return "1"
 	}
 	return fmt.Sprintf("%.4g", p)
-}
-
-func sameState(a, c []complex128) bool {
-	if len(a) != len(c) {
-		return false
-	}
-	for i := range a {
-		if a[i] != c[i] {
-			return false
-		}
-	}
-	return true
 }
 
 // qubitList writes qubits as "q0, q2".
@@ -340,7 +343,7 @@ func (f *Failure) Report() string {
 	case f.Seed != 0:
 		fmt.Fprintf(&b, "-rapid.seed=%d\n", f.Seed)
 	default:
-		b.WriteString("rapid prints the -rapid.seed and the fail file under testdata/rapid/ to rerun with\n")
+		b.WriteString("rerun the test with the -rapid.seed (or -rapid.failfile) that rapid printed above\n")
 	}
 	return b.String()
 }

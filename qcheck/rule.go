@@ -19,6 +19,10 @@ const (
 	ruleContextOps  = 6 // at most this many ops before and after the rule
 )
 
+// ruleGateWeight is how much more often the rule's own gates appear around it than the common
+// gates: a matcher bug needs a gate of the pattern nearby to show.
+const ruleGateWeight = 4
+
 // ruleContextGates are the common gates CheckRule surrounds a rule with.
 var ruleContextGates = []string{"h", "x", "s", "t", "sdg", "rz", "rx", "cx", "cz"}
 
@@ -36,7 +40,7 @@ var ruleContextGates = []string{"h", "x", "s", "t", "sdg", "rz", "rx", "cx", "cz
 // refused. Like Preserves, a failure is shrunk and reported once, with rapid's replay line.
 func CheckRule(t TB, rule Rule, pass Pass, opts ...Option) {
 	t.Helper()
-	cfg, err := ruleConfig(opts)
+	cfg, err := ruleConfig(rule, opts)
 	if err != nil {
 		t.Fatalf("qcheck.CheckRule: %v", err)
 		return
@@ -47,14 +51,17 @@ func CheckRule(t TB, rule Rule, pass Pass, opts ...Option) {
 // RuleProperty returns the property CheckRule checks, for rapid.Check and rapid.MakeFuzz (see
 // Property for the fuzz target). Bad options fail every check with their error.
 func RuleProperty(rule Rule, pass Pass, opts ...Option) func(*rapid.T) {
-	cfg, err := ruleConfig(opts)
+	cfg, err := ruleConfig(rule, opts)
 	if err != nil {
 		return func(t *rapid.T) { t.Fatalf("qcheck: %v", err) }
 	}
 	return ruleProperty(cfg, rule, pass)
 }
 
-func ruleConfig(opts []Option) (*config, error) {
+func ruleConfig(rule Rule, opts []Option) (*config, error) {
+	if rule == nil {
+		return nil, fmt.Errorf("the rule is nil")
+	}
 	cfg, err := newConfig(opts)
 	if err != nil {
 		return nil, err
@@ -138,8 +145,8 @@ type drawnPlacement gen.Embedding
 // GoString implements fmt.GoStringer for rapid's log of draws.
 func (d drawnPlacement) GoString() string { return fmt.Sprintf("rule qubits on %v", d.Qubits) }
 
-// contextOptions are the surroundings of a rule on w qubits: common gates and the rule's own
-// gates (custom ones included), so that a matcher that ignores qubits, reads through
+// contextOptions are the surroundings of a rule on w qubits: the rule's own gates (custom ones
+// included, listed first and drawn more often) and common gates, so that a matcher that ignores qubits, reads through
 // intervening gates or misplaces its result meets the situations that expose it.
 func contextOptions(left *circuit.Circuit, w int) gen.Options {
 	opts := gen.Options{Qubits: w, MaxOps: ruleContextOps}
@@ -155,13 +162,15 @@ func contextOptions(left *circuit.Circuit, w int) gen.Options {
 			opts.GateSet = append(opts.GateSet, g.Name)
 		}
 	}
+	opts.Weights = map[string]int{}
+	for _, op := range left.Ops {
+		add(op.Gate)
+		opts.Weights[op.Gate.Name] = ruleGateWeight
+	}
 	for _, name := range ruleContextGates {
 		spec, _ := circuit.Lookup(name)
 		g, _ := circuit.NewGate(name, make([]float64, spec.Params)...)
 		add(g)
-	}
-	for _, op := range left.Ops {
-		add(op.Gate)
 	}
 	return opts
 }

@@ -39,9 +39,9 @@ func SearchLayout(pass LayoutPass, g *rapid.Generator[*circuit.Circuit], opts ..
 var searching sync.Mutex
 
 func search(name string, s subject, g *rapid.Generator[*circuit.Circuit], opts []Option) (*Failure, error) {
-	cfg, err := newConfig(opts)
+	cfg, err := checkedConfig(s, g, opts)
 	if err != nil {
-		return nil, err
+		return nil, fmt.Errorf("qcheck.Search: %w", err)
 	}
 	searching.Lock()
 	defer searching.Unlock()

@@ -2,6 +2,7 @@ package peephole
 
 import (
 	"math"
+	"slices"
 
 	"qcheck.dev/qcheck/circuit"
 )
@@ -50,7 +51,7 @@ func sameOperands(a, b circuit.Op) bool {
 	if len(a.Qubits) != len(b.Qubits) {
 		return false
 	}
-	if equalQubits(a.Qubits, b.Qubits) {
+	if slices.Equal(a.Qubits, b.Qubits) {
 		return true
 	}
 	if a.Gate.Name == "ccz" && b.Gate.Name == "ccz" {
@@ -63,7 +64,7 @@ func sameOperands(a, b circuit.Op) bool {
 	}
 	swapped := append([]int(nil), b.Qubits...)
 	swapped[sa[0]], swapped[sa[1]] = swapped[sa[1]], swapped[sa[0]]
-	return equalQubits(a.Qubits, swapped)
+	return slices.Equal(a.Qubits, swapped)
 }
 
 // CancelPair is the MergeFunc that removes a gate followed by its exact inverse on the same
@@ -148,18 +149,6 @@ func phaseOp(lambda float64, general string, named map[float64]string, qubits []
 }
 
 func clone(q []int) []int { return append([]int(nil), q...) }
-
-func equalQubits(a, b []int) bool {
-	if len(a) != len(b) {
-		return false
-	}
-	for i := range a {
-		if a[i] != b[i] {
-			return false
-		}
-	}
-	return true
-}
 
 func sameSet(a, b []int) bool {
 	if len(a) != len(b) {

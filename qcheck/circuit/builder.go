@@ -98,6 +98,10 @@ func (c *Circuit) SWAP(a, b int) *Circuit { return c.add("swap", nil, a, b) }
 // ISWAP adds the gate that maps |01⟩ → i|10⟩ and |10⟩ → i|01⟩.
 func (c *Circuit) ISWAP(a, b int) *Circuit { return c.add("iswap", nil, a, b) }
 
+// ISWAPdg adds the inverse of ISWAP, which maps |01⟩ → −i|10⟩ and |10⟩ → −i|01⟩; it is what
+// Inverse makes of an iswap.
+func (c *Circuit) ISWAPdg(a, b int) *Circuit { return c.add("iswapdg", nil, a, b) }
+
 // RXX adds exp(−iθ X⊗X/2) on a and b.
 func (c *Circuit) RXX(theta float64, a, b int) *Circuit { return c.add("rxx", []float64{theta}, a, b) }
 

@@ -3,6 +3,7 @@ package circuit
 import (
 	"fmt"
 	"math"
+	"slices"
 )
 
 // Op is one operation of a circuit: a gate and the qubits it acts on, in the gate's operand order.
@@ -25,7 +26,7 @@ func (o Op) Clone() Op {
 
 // Equal reports whether two ops are the same gate on the same qubits and bits.
 func (o Op) Equal(p Op) bool {
-	return o.Gate.Equal(p.Gate) && equalInts(o.Qubits, p.Qubits) && equalInts(o.Clbits, p.Clbits)
+	return o.Gate.Equal(p.Gate) && slices.Equal(o.Qubits, p.Qubits) && slices.Equal(o.Clbits, p.Clbits)
 }
 
 // String writes the op as in a gate list: "cx q0,q1", "rz(π/4) q2", "measure q0 -> c0".
@@ -203,7 +204,11 @@ func (c *Circuit) validateOp(op Op) string {
 	}
 	for k, p := range g.Params {
 		if math.IsNaN(p) || math.IsInf(p, 0) {
-			return fmt.Sprintf("angle %d is %v; angles must be finite", k, p)
+			// Angles are counted from 1 in messages, as package qasm counts them.
+			if name := (Spec{Name: g.Name}).AngleName(k); name != "" && g.custom == nil {
+				return fmt.Sprintf("angle %d (%s) is %v; angles must be finite", k+1, name, p)
+			}
+			return fmt.Sprintf("angle %d is %v; angles must be finite", k+1, p)
 		}
 	}
 	if want := g.Qubits(); g.Name != "barrier" && len(op.Qubits) != want {
@@ -246,16 +251,4 @@ func (c *Circuit) validateOp(op Op) string {
 		}
 	}
 	return ""
-}
-
-func equalInts(a, b []int) bool {
-	if len(a) != len(b) {
-		return false
-	}
-	for i := range a {
-		if a[i] != b[i] {
-			return false
-		}
-	}
-	return true
 }

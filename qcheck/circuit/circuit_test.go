@@ -26,9 +26,9 @@ func TestValidateNamesTheOp(t *testing.T) {
 		{"too few operands", New(3).Append(Gate{Name: "cx"}, 0), 0, "acts on 2 qubit(s), got 1"},
 		{"too many operands", New(3).H(0).Append(rz, 0, 1), 1, "acts on 1 qubit(s), got 2"},
 		{"missing angle", New(1).H(0).Append(Gate{Name: "rz"}, 0), 1, "takes 1 angle(s), got 0"},
-		{"NaN angle", New(1).RZ(0.1, 0).RZ(math.NaN(), 0), 1, "angle 0 is NaN"},
-		{"+Inf angle", New(2).U(0, 0, math.Inf(1), 1), 0, "angle 2 is +Inf"},
-		{"-Inf angle", New(2).H(0).H(1).CP(math.Inf(-1), 0, 1), 2, "angle 0 is -Inf"},
+		{"NaN angle", New(1).RZ(0.1, 0).RZ(math.NaN(), 0), 1, "angle 1 (θ) is NaN"},
+		{"+Inf angle", New(2).U(0, 0, math.Inf(1), 1), 0, "angle 3 (λ) is +Inf"},
+		{"-Inf angle", New(2).H(0).H(1).CP(math.Inf(-1), 0, 1), 2, "angle 1 (λ) is -Inf"},
 		{"unknown gate", New(1).H(0).H(0).Append(Gate{Name: "frobnicate"}, 0), 2, "unknown gate"},
 		{"nameless gate", New(1).Append(Gate{}, 0), 0, "no name"},
 		{"measure without bit", New(1).Append(Gate{Name: "measure"}, 0), 0, "one classical bit"},
@@ -139,5 +139,14 @@ func TestDrawGolden(t *testing.T) {
 	bad := New(2).H(0).CX(0, 5).String()
 	if !strings.Contains(bad, "op 1 (cx)") || !strings.Contains(bad, "1: cx q0,q5") {
 		t.Errorf("ill-formed circuit drawn as:\n%s", bad)
+	}
+}
+
+// A nil circuit draws as a short note instead of panicking, so that a failure report can always
+// print what a pass returned (common practice for String methods; no outside source).
+func TestDrawNil(t *testing.T) {
+	var c *Circuit
+	if got := c.String(); got != "(nil circuit)\n" {
+		t.Errorf("nil circuit drawn as %q", got)
 	}
 }

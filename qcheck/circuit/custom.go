@@ -4,6 +4,7 @@ import (
 	"fmt"
 	"math"
 	"math/cmplx"
+	"strings"
 
 	"gonum.org/v1/gonum/mat"
 )
@@ -20,13 +21,20 @@ type customGate struct {
 // Custom returns a gate with the user's own 2^k × 2^k matrix, k ≥ 1, given in the textbook order
 // of its operands (the first operand is the most significant bit). The matrix is copied. It fails
 // when the matrix is not square, its size is not a power of two, an entry is not finite, or it is
-// not unitary within UnitaryTolerance; the error gives the measured deviation ‖M†M − I‖.
+// not unitary within UnitaryTolerance (the error gives the measured deviation ‖M†M − I‖), or the
+// name or its inverse's name (see Gate.Inverse) is the name of a standard library gate.
 func Custom(name string, m mat.CMatrix) (Gate, error) {
 	if name == "" {
 		return Gate{}, fmt.Errorf("circuit: custom gate needs a name")
 	}
 	if _, ok := library[name]; ok {
 		return Gate{}, fmt.Errorf("circuit: custom gate name %q is taken by the standard library", name)
+	}
+	// The inverse of a custom gate is named by adding or removing "dg" (see inverseName); a name
+	// whose inverse would be a library gate's name is refused, so that no custom gate or inverse
+	// can be mistaken for a library gate.
+	if inv := inverseName(name); library[inv].spec.Name != "" {
+		return Gate{}, fmt.Errorf("circuit: custom gate name %q is refused: its inverse would be named %q, a gate of the standard library", name, inv)
 	}
 	if m == nil {
 		return Gate{}, fmt.Errorf("circuit: custom gate %s: nil matrix", name)
@@ -87,9 +95,14 @@ func (c *customGate) inverse(name string) Gate {
 			data[j*d+i] = cmplx.Conj(c.data[i*d+j])
 		}
 	}
-	inv := name + "dg"
-	if len(name) > 2 && name[len(name)-2:] == "dg" {
-		inv = name[:len(name)-2]
+	return Gate{Name: inverseName(name), custom: &customGate{qubits: c.qubits, data: data}}
+}
+
+// inverseName is the name of a custom gate's inverse: the name without a trailing "dg", or with
+// "dg" added when it has none ("mine" and "minedg" are each other's inverses).
+func inverseName(name string) string {
+	if stem, ok := strings.CutSuffix(name, "dg"); ok && stem != "" {
+		return stem
 	}
-	return Gate{Name: inv, custom: &customGate{qubits: c.qubits, data: data}}
+	return name + "dg"
 }

@@ -69,3 +69,39 @@ func TestCustomRefusesBadMatrices(t *testing.T) {
 		t.Error("Custom kept a reference to the caller's matrix")
 	}
 }
+
+// A custom gate's inverse is named by adding or removing "dg", so Custom refuses every name whose
+// inverse would be a library gate's name: the inverse of a custom "xdg" used to be a custom gate
+// called "x", indistinguishable by name from the Pauli X. The check runs over the whole library.
+func TestCustomNameCannotInvertIntoLibrary(t *testing.T) {
+	id := matrixOf([]complex128{1, 0, 0, 1})
+	for _, spec := range Standard() {
+		if _, err := Custom(spec.Name+"dg", id); err == nil {
+			t.Errorf("Custom accepted %q, whose inverse would be the library gate %q", spec.Name+"dg", spec.Name)
+		} else if err != nil && !strings.Contains(err.Error(), spec.Name+"dg") {
+			t.Errorf("Custom(%q): error %q does not name the gate", spec.Name+"dg", err)
+		}
+		if stem, ok := strings.CutSuffix(spec.Name, "dg"); ok {
+			if _, err := Custom(stem, id); err == nil {
+				t.Errorf("Custom accepted %q, whose inverse would be the library gate %q", stem, spec.Name)
+			}
+		}
+	}
+	for _, name := range []string{"xdg", "hdg", "rzdg", "sdgdg", "ccxdg"} {
+		_, err := Custom(name, id)
+		if err == nil || !strings.Contains(err.Error(), "inverse would be named") {
+			t.Errorf("Custom(%q): got %v, want a refusal naming the inverse", name, err)
+		}
+	}
+	// Names that stay clear of the library are accepted, and so are their inverses' names.
+	for _, name := range []string{"mine", "minedg", "dg", "xx", "hadamard"} {
+		g, err := Custom(name, id)
+		if err != nil {
+			t.Errorf("Custom(%q) refused: %v", name, err)
+			continue
+		}
+		if _, ok := Lookup(g.Inverse().Name); ok {
+			t.Errorf("inverse of custom %q is named %q, a library gate", name, g.Inverse().Name)
+		}
+	}
+}

@@ -12,8 +12,12 @@ const DrawWidth = 100
 
 // String draws the circuit as text, one row per qubit (qubit 0 on top) and time running left to
 // right, wrapped at DrawWidth columns. Controls are ●, swap ends ×, and a vertical bar joins the
-// operands of a multi-qubit gate. An ill-formed circuit is listed op by op instead.
+// operands of a multi-qubit gate. An ill-formed circuit is listed op by op instead, and a nil
+// circuit is written as "(nil circuit)" so that a failure report can always print it.
 func (c *Circuit) String() string {
+	if c == nil {
+		return "(nil circuit)\n"
+	}
 	if err := c.Validate(); err != nil {
 		var b strings.Builder
 		fmt.Fprintf(&b, "ill-formed circuit on %d qubits (%v):\n", c.qubits, err)

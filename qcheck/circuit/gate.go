@@ -43,6 +43,17 @@ func Standard() []Spec {
 	return out
 }
 
+// AngleName returns the textbook name of the gate's angle k, counting from 0 (θ, φ or λ), so that
+// an error can say which angle is wrong; it returns "" when the gate has no angle k. Messages
+// count angles from 1, as people do: "angle 1 (θ)".
+func (s Spec) AngleName(k int) string {
+	d, ok := library[s.Name]
+	if !ok || k < 0 || k >= len(d.angles) {
+		return ""
+	}
+	return d.angles[k]
+}
+
 // Lookup returns the spec of the standard gate with the given name.
 func Lookup(name string) (Spec, bool) {
 	d, ok := library[name]
@@ -118,8 +129,9 @@ func (g Gate) Elements() []complex128 {
 
 // Inverse returns the exact inverse of the gate: self-inverse gates return themselves, pairs such
 // as s and sdg swap, angles are negated where that inverts the gate, and u(θ, φ, λ) becomes
-// u(−θ, −λ, −φ). The inverse of a custom gate is a custom gate named name+"dg" holding the
-// conjugate transpose.
+// u(−θ, −λ, −φ). The inverse of a custom gate is a custom gate holding the conjugate transpose,
+// named name+"dg", or name without its "dg" when it ends so (Custom refuses names for which either
+// would be a library gate's name).
 func (g Gate) Inverse() Gate {
 	if g.custom != nil {
 		return g.custom.inverse(g.Name)

@@ -12,6 +12,8 @@ type gateDef struct {
 	matrix func(p []float64) []complex128
 	// inverse returns the name and angles of the inverse gate; nil for self-inverse gates.
 	inverse func(p []float64) (string, []float64)
+	// angles names the gate's angles in order, as the textbook writes them (θ, φ, λ).
+	angles []string
 }
 
 // The standard library. Each matrix is the textbook one, written out with its source:
@@ -38,8 +40,8 @@ func init() {
 			inverse: func([]float64) (string, []float64) { return a, nil }}
 	}
 	// rotation defines a gate of angles whose inverse negates every angle.
-	rotation := func(name string, qubits, params int, m func(p []float64) []complex128) {
-		library[name] = gateDef{spec: Spec{Name: name, Qubits: qubits, Params: params}, matrix: m,
+	rotation := func(name string, qubits int, angles []string, m func(p []float64) []complex128) {
+		library[name] = gateDef{spec: Spec{Name: name, Qubits: qubits, Params: len(angles)}, matrix: m, angles: angles,
 			inverse: func(p []float64) (string, []float64) {
 				q := make([]float64, len(p))
 				for i := range p {
@@ -48,6 +50,7 @@ func init() {
 				return name, q
 			}}
 	}
+	theta, lambda := []string{"θ"}, []string{"λ"}
 	directive := func(name string, qubits int) {
 		library[name] = gateDef{spec: Spec{Name: name, Qubits: qubits}}
 	}
@@ -66,12 +69,12 @@ func init() {
 	pair("sx", "sxdg", 1, true, sqrtX, conjugate(sqrtX))
 
 	// Rotations exp(−iθP/2): N&C eqs. 4.4–4.6.
-	rotation("rx", 1, 1, func(p []float64) []complex128 { return rx(p[0]) })
-	rotation("ry", 1, 1, func(p []float64) []complex128 { return ry(p[0]) })
-	rotation("rz", 1, 1, func(p []float64) []complex128 { return rz(p[0]) })
+	rotation("rx", 1, theta, func(p []float64) []complex128 { return rx(p[0]) })
+	rotation("ry", 1, theta, func(p []float64) []complex128 { return ry(p[0]) })
+	rotation("rz", 1, theta, func(p []float64) []complex128 { return rz(p[0]) })
 	// Phase gate p(λ) = diag(1, e^{iλ}); differs from rz(λ) by the global phase e^{iλ/2}.
-	rotation("p", 1, 1, func(p []float64) []complex128 { return phase(p[0]) })
-	library["u"] = gateDef{spec: Spec{Name: "u", Qubits: 1, Params: 3},
+	rotation("p", 1, lambda, func(p []float64) []complex128 { return phase(p[0]) })
+	library["u"] = gateDef{spec: Spec{Name: "u", Qubits: 1, Params: 3}, angles: []string{"θ", "φ", "λ"},
 		matrix: func(p []float64) []complex128 { return general(p[0], p[1], p[2]) },
 		// u(θ,φ,λ)† = u(−θ,−λ,−φ): transpose-conjugate the matrix above entry by entry.
 		inverse: func(p []float64) (string, []float64) { return "u", []float64{-p[0], -p[2], -p[1]} }}
@@ -82,10 +85,10 @@ func init() {
 	self("cy", 2, true, controlled(pauliY))
 	self("cz", 2, true, controlled(pauliZ))
 	self("ch", 2, false, controlled(hadamard))
-	rotation("cp", 2, 1, func(p []float64) []complex128 { return controlled(phase(p[0])) })
-	rotation("crx", 2, 1, func(p []float64) []complex128 { return controlled(rx(p[0])) })
-	rotation("cry", 2, 1, func(p []float64) []complex128 { return controlled(ry(p[0])) })
-	rotation("crz", 2, 1, func(p []float64) []complex128 { return controlled(rz(p[0])) })
+	rotation("cp", 2, lambda, func(p []float64) []complex128 { return controlled(phase(p[0])) })
+	rotation("crx", 2, theta, func(p []float64) []complex128 { return controlled(rx(p[0])) })
+	rotation("cry", 2, theta, func(p []float64) []complex128 { return controlled(ry(p[0])) })
+	rotation("crz", 2, theta, func(p []float64) []complex128 { return controlled(rz(p[0])) })
 
 	// SWAP exchanges the two qubits (N&C Fig. 1.7); iSWAP maps |01⟩ → i|10⟩ and |10⟩ → i|01⟩.
 	self("swap", 2, true, []complex128{1, 0, 0, 0, 0, 0, 1, 0, 0, 1, 0, 0, 0, 0, 0, 1})
@@ -93,9 +96,9 @@ func init() {
 		[]complex128{1, 0, 0, 0, 0, 0, 1i, 0, 0, 1i, 0, 0, 0, 0, 0, 1},
 		[]complex128{1, 0, 0, 0, 0, 0, -1i, 0, 0, -1i, 0, 0, 0, 0, 0, 1})
 	// Two-qubit Pauli rotations exp(−iθ P⊗P/2) = cos(θ/2) I − i sin(θ/2) P⊗P (P⊗P squares to I).
-	rotation("rxx", 2, 1, func(p []float64) []complex128 { return pauliRotation(p[0], kron(pauliX, pauliX)) })
-	rotation("ryy", 2, 1, func(p []float64) []complex128 { return pauliRotation(p[0], kron(pauliY, pauliY)) })
-	rotation("rzz", 2, 1, func(p []float64) []complex128 { return pauliRotation(p[0], kron(pauliZ, pauliZ)) })
+	rotation("rxx", 2, theta, func(p []float64) []complex128 { return pauliRotation(p[0], kron(pauliX, pauliX)) })
+	rotation("ryy", 2, theta, func(p []float64) []complex128 { return pauliRotation(p[0], kron(pauliY, pauliY)) })
+	rotation("rzz", 2, theta, func(p []float64) []complex128 { return pauliRotation(p[0], kron(pauliZ, pauliZ)) })
 
 	// Toffoli, doubly controlled Z and Fredkin: N&C §1.4.1 and Fig. 4.9.
 	self("ccx", 3, false, controlled(controlled(pauliX)))

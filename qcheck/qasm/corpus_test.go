@@ -2,7 +2,9 @@ package qasm
 
 import (
 	"bufio"
+	"flag"
 	"math"
+	"math/rand/v2"
 	"os"
 	"path/filepath"
 	"strconv"
@@ -10,7 +12,10 @@ import (
 	"testing"
 
 	"gonum.org/v1/gonum/mat"
+	"qcheck.dev/gen"
 	"qcheck.dev/metric"
+	"qcheck.dev/qcheck"
+	"qcheck.dev/qcheck/circuit"
 	"qcheck.dev/qcheck/sim"
 )
 
@@ -119,4 +124,83 @@ func TestCorpusDistances(t *testing.T) {
 			t.Errorf("%s: distance %.3g contradicts the verdict %v in the manifest", e.name, d, e.equivalent)
 		}
 	}
+}
+
+// wideCorpus runs every pair of the corpus at width 20, the non-Clifford ones too (minutes of
+// statevector work); by default those run at width 14.
+var wideCorpus = flag.Bool("corpus.wide", false, "check every corpus pair at width 20 (slow)")
+
+// Every pair of the corpus, embedded on a random choice of qubits of a wide register between two
+// random 40-gate Clifford circuits (the same context on both sides), keeps its verdict under
+// qcheck.Compare's automatic engine choice: the tableau for Clifford pairs, at width 20, and the
+// matrix-free estimate otherwise, at width 14 (20 with -corpus.wide). Conjugating by a unitary
+// and tensoring with the identity leave the phase-free distance unchanged, so a non-Clifford pair
+// must show the manifest's distance (NumPy) again, and a differing Clifford pair a tableau lower
+// bound no larger than it.
+func TestCorpusAtWidth(t *testing.T) {
+	if testing.Short() {
+		t.Skip("statevector runs at width 14 and more")
+	}
+	rng := rand.New(rand.NewPCG(20, 26))
+	engines := map[qcheck.Engine]int{}
+	for i, e := range readManifest(t) {
+		before := corpusCircuit(t, e.name+".before.qasm")
+		after := corpusCircuit(t, e.name+".after.qasm")
+		width := 20
+		if !*wideCorpus && !(sim.IsClifford(before) && sim.IsClifford(after)) {
+			width = 14
+		}
+		context := gen.Circuit(gen.Options{Qubits: width, MinOps: 40, MaxOps: 40, GateSet: []string{"h", "s", "sdg", "x", "cx", "cz", "swap"}})
+		where := rng.Perm(width)[:before.Qubits()]
+		pre := context.Example(2 * i)
+		post := context.Example(2*i + 1)
+		want := pre.Clone().Compose(embed(before, where, width)).Compose(post)
+		got := pre.Clone().Compose(embed(after, where, width)).Compose(post)
+		r, err := qcheck.Compare(want, got)
+		if err != nil {
+			t.Fatalf("%s: %v", e.name, err)
+		}
+		engines[r.Engine]++
+		if r.Equivalent != e.equivalent {
+			t.Errorf("%s at width %d (%v engine): equivalent %v, the manifest says %v (distance %.3g)", e.name, width, r.Engine, r.Equivalent, e.equivalent, r.Distance)
+			continue
+		}
+		switch {
+		case e.equivalent:
+		case r.Engine == qcheck.Tableau && r.Distance > e.distance+1e-9:
+			t.Errorf("%s: tableau lower bound %.6g exceeds the true distance %.6g", e.name, r.Distance, e.distance)
+		case r.Engine == qcheck.MatrixFree && math.Abs(r.Distance-e.distance) > 1e-8:
+			t.Errorf("%s: matrix-free distance %.10g at width %d, NumPy gives %.10g", e.name, r.Distance, width, e.distance)
+		}
+	}
+	if engines[qcheck.Tableau] == 0 || engines[qcheck.MatrixFree] == 0 {
+		t.Errorf("engines used: %v; the corpus should exercise both the tableau and the matrix-free engine", engines)
+	}
+}
+
+// corpusCircuit parses one file of the corpus.
+func corpusCircuit(t *testing.T, name string) *circuit.Circuit {
+	t.Helper()
+	src, err := os.ReadFile(filepath.Join(corpusDir, name))
+	if err != nil {
+		t.Fatal(err)
+	}
+	c, err := Parse(src)
+	if err != nil {
+		t.Fatalf("%s: %v", name, err)
+	}
+	return c
+}
+
+// embed returns c on a register of the given width, its qubit q placed on where[q].
+func embed(c *circuit.Circuit, where []int, width int) *circuit.Circuit {
+	out := circuit.New(width)
+	for _, op := range c.Ops {
+		op = op.Clone()
+		for k, q := range op.Qubits {
+			op.Qubits[k] = where[q]
+		}
+		out.AppendOp(op)
+	}
+	return out
 }

@@ -48,7 +48,7 @@ func (p *parser) gateDecl() error {
 	if err != nil {
 		return err
 	}
-	def.nparams, def.nqubits = len(params), len(qubits)
+	def.nparams, def.nqubits, def.params = len(params), len(qubits), params
 	if err := p.expect("{", "to open the gate body"); err != nil {
 		return err
 	}
@@ -61,6 +61,12 @@ func (p *parser) gateDecl() error {
 			return err
 		}
 		def.body = append(def.body, b)
+		switch {
+		case b.def != nil:
+			def.ops = addCount(def.ops, b.def.size())
+		case !p.cfg.dropBarriers:
+			def.ops = addCount(def.ops, 1)
+		}
 	}
 	end := p.tok.off + 1
 	if err := p.advance(); err != nil {
@@ -127,14 +133,14 @@ func (p *parser) bodyStatement(gate string, params, qubits []string) (bodyCall, 
 		if err := p.advance(); err != nil {
 			return b, err
 		}
-		args, err := p.angles(params)
+		args, at, err := p.angles(params)
 		if err != nil {
 			return b, err
 		}
 		if len(args) != def.nparams {
 			return b, p.errorf(t.off, "gate %s takes %d angle(s), got %d", t.text, def.nparams, len(args))
 		}
-		b.def, b.args, want = def, args, def.nqubits
+		b.def, b.args, b.at, want = def, args, at, def.nqubits
 	}
 	for {
 		q, err := p.ident("a qubit argument of " + gate)

@@ -11,7 +11,10 @@
 // broadcast over whole registers of equal size (h q; cx a, b;), and measure q -> c; pairs two
 // registers of equal size. Angles are expressions of numbers, pi, the parameters in scope,
 // + - * / ^ (power binds tightest and to the right; -2^2 is -4), unary minus, and sin, cos, tan,
-// exp, ln, sqrt. An angle that evaluates to NaN or ±Inf is an error at the call.
+// exp, ln, sqrt. An angle that evaluates to NaN or ±Inf is an error at its expression, naming
+// the angle as package circuit does, counted from 1 ("angle 1 (θ) of rz"): every angle of a call
+// must be finite, even one the gate ignores, and an angle computed in the body of the source's
+// own gate is reported at its expression in the body, with the line and column of the call.
 //
 // opaque, if, block comments, other includes and anything else the grammar does not have are
 // errors naming the construct at its line and column. Every error is an *Error. A source may
@@ -51,8 +54,10 @@
 // each with the flat index of its element 0, and the lookups Program.Qubit and Program.Clbit) and
 // the source line of every op (Program.Lines), so that a report about op k can point into the
 // file. Options: DropBarriers, and MaxOps, which bounds how many ops a source may expand to
-// (DefaultMaxOps; gate definitions can double the count at each level of nesting). Qelib1 lists
-// the gate names the include provides.
+// (DefaultMaxOps; gate definitions can double the count at each level of nesting). Each gate
+// definition's expanded size is counted when it is read, so a call that would pass the limit is
+// refused at its line and column before it is expanded. Qelib1 lists the gate names the include
+// provides.
 //
 // # Writing
 //

@@ -59,7 +59,11 @@ func builtins() map[string]*gateDef {
 		prim := map[string]*gateDef{}
 		for _, s := range circuit.Standard() {
 			if g, err := circuit.NewGate(s.Name, make([]float64, s.Params)...); err == nil && g.Unitary() {
-				prim[s.Name] = &gateDef{name: s.Name, native: s.Name, nparams: s.Params, nqubits: s.Qubits}
+				d := &gateDef{name: s.Name, native: s.Name, nparams: s.Params, nqubits: s.Qubits}
+				for k := range s.Params {
+					d.params = append(d.params, s.AngleName(k))
+				}
+				prim[s.Name] = d
 			}
 		}
 		p := &parser{src: []byte(prelude), lx: lexer{src: []byte(prelude)}, cfg: config{maxOps: 1},
@@ -71,7 +75,7 @@ func builtins() map[string]*gateDef {
 			panic("qasm: built-in prelude: " + err.Error())
 		}
 		out := map[string]*gateDef{
-			"U":  {name: "U", native: "u", nparams: 3, nqubits: 1, keyword: true},
+			"U":  {name: "U", native: "u", nparams: 3, nqubits: 1, params: prim["u"].params, keyword: true},
 			"CX": {name: "CX", native: "cx", nqubits: 2, keyword: true},
 		}
 		for _, name := range qelib1Native {

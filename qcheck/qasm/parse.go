@@ -83,7 +83,9 @@ type gateDef struct {
 	native  string // the circuit gate a call becomes; empty for a definition to expand
 	nparams int
 	nqubits int
+	params  []string // the names of the angles, for errors (θ for rz, theta for a source's own)
 	body    []bodyCall
+	ops     int  // how many ops one call expands to, saturating at maxCount; see size
 	keyword bool // U and CX, which exist without any include
 	hidden  bool // a helper of the built-in library that sources cannot call
 	user    bool // defined by the source itself
@@ -93,7 +95,45 @@ type gateDef struct {
 type bodyCall struct {
 	def    *gateDef
 	args   []*expr
+	at     []int // the source offset of each argument's expression
 	qubits []int // positions in the enclosing gate's qubit list
+}
+
+// maxCount is where op counts stop growing, far above any MaxOps, so that sums and products of
+// counts never overflow.
+const maxCount = math.MaxInt / 2
+
+// addCount and mulCount add and multiply op counts in [0, maxCount], saturating at maxCount.
+func addCount(a, b int) int {
+	if a > maxCount-b {
+		return maxCount
+	}
+	return a + b
+}
+
+func mulCount(a, b int) int {
+	if a != 0 && b > maxCount/a {
+		return maxCount
+	}
+	return a * b
+}
+
+// size returns how many ops one call of d expands to (barriers included): 1 for a gate of
+// package circuit, else the count worked out when d was defined.
+func (d *gateDef) size() int {
+	if d.native != "" {
+		return 1
+	}
+	return d.ops
+}
+
+// angleLabel names angle k of d for an error, counting from 1 as package circuit does:
+// "angle 1 (θ)".
+func (d *gateDef) angleLabel(k int) string {
+	if k < len(d.params) && d.params[k] != "" {
+		return fmt.Sprintf("angle %d (%s)", k+1, d.params[k])
+	}
+	return fmt.Sprintf("angle %d", k+1)
 }
 
 type parser struct {
@@ -470,7 +510,7 @@ func (p *parser) call() error {
 	if err := p.advance(); err != nil {
 		return err
 	}
-	angles, err := p.angles(nil)
+	angles, at, err := p.angles(nil)
 	if err != nil {
 		return err
 	}
@@ -479,7 +519,10 @@ func (p *parser) call() error {
 	}
 	vals := make([]float64, len(angles))
 	for i, a := range angles {
-		vals[i] = a.eval(nil)
+		// Every angle of a call must be finite, even one the gate's body ignores.
+		if vals[i] = a.eval(nil); math.IsNaN(vals[i]) || math.IsInf(vals[i], 0) {
+			return p.errorf(at[i], "%s of %s evaluates to %v; angles must be finite", def.angleLabel(i), name.text, vals[i])
+		}
 	}
 	args, err := p.operands(true, ";")
 	if err != nil {
@@ -491,6 +534,16 @@ func (p *parser) call() error {
 	n, err := p.broadcast(args)
 	if err != nil {
 		return err
+	}
+	// Refuse a call that would pass the op limit before expanding it: nested definitions can
+	// make one call worth billions of ops.
+	if need := mulCount(n, def.size()); addCount(len(p.ops), need) > p.cfg.maxOps {
+		count := strconv.Itoa(need)
+		if need == maxCount {
+			count = "at least " + strconv.Itoa(maxCount)
+		}
+		return p.errorf(name.off, "gate %s expands to %s ops here; with the %d before it the source expands to more than %d ops (see MaxOps)",
+			name.text, count, len(p.ops), p.cfg.maxOps)
 	}
 	for i := 0; i < n; i++ {
 		qubits := make([]int, len(args))
@@ -522,41 +575,42 @@ func (p *parser) unknownGate(t token) error {
 	return p.errorf(t.off, "unknown gate or statement %s", t.text)
 }
 
-// angles reads an optional parenthesised, comma-separated list of expressions.
-func (p *parser) angles(params []string) ([]*expr, error) {
+// angles reads an optional parenthesised, comma-separated list of expressions, and returns the
+// source offset where each begins.
+func (p *parser) angles(params []string) ([]*expr, []int, error) {
 	if !p.tok.is("(") {
-		return nil, nil
+		return nil, nil, nil
 	}
 	if err := p.advance(); err != nil {
-		return nil, err
+		return nil, nil, err
 	}
 	var out []*expr
+	var at []int
 	if p.tok.is(")") {
-		return nil, p.advance()
+		return nil, nil, p.advance()
 	}
 	for {
+		at = append(at, p.tok.off)
 		e, err := p.parseExpr(params, 0)
 		if err != nil {
-			return nil, err
+			return nil, nil, err
 		}
 		out = append(out, e)
 		if p.tok.is(")") {
-			return out, p.advance()
+			return out, at, p.advance()
 		}
 		if err := p.expect(",", "between angles"); err != nil {
-			return nil, err
+			return nil, nil, err
 		}
 	}
 }
 
-// expand appends the ops of one call of def with the given angles on the given flat qubits.
+// expand appends the ops of one call of def with the given angles on the given flat qubits. The
+// call's own angles are finite (call checks them); a body's arithmetic may still make a
+// non-finite angle, reported at its expression when the body is the source's own, else at the
+// call, whose gate name is at off.
 func (p *parser) expand(def *gateDef, vals []float64, qubits []int, off int) error {
 	if def.native != "" {
-		for k, v := range vals {
-			if math.IsNaN(v) || math.IsInf(v, 0) {
-				return p.errorf(off, "angle %d of %s evaluates to %v; angles must be finite", k+1, def.native, v)
-			}
-		}
 		var params []float64
 		if len(vals) > 0 {
 			params = append(params, vals...)
@@ -578,7 +632,16 @@ func (p *parser) expand(def *gateDef, vals []float64, qubits []int, off int) err
 		}
 		args := make([]float64, len(b.args))
 		for k, a := range b.args {
-			args[k] = a.eval(vals)
+			if args[k] = a.eval(vals); !math.IsNaN(args[k]) && !math.IsInf(args[k], 0) {
+				continue
+			}
+			line, col := position(p.src, off)
+			if def.user {
+				return p.errorf(b.at[k], "%s of %s evaluates to %v in the body of gate %s, for the call at %d:%d; angles must be finite",
+					b.def.angleLabel(k), b.def.name, args[k], def.name, line, col)
+			}
+			return p.errorf(off, "%s of %s evaluates to %v inside gate %s; angles must be finite",
+				b.def.angleLabel(k), b.def.name, args[k], def.name)
 		}
 		if err := p.expand(b.def, args, sub, off); err != nil {
 			return err

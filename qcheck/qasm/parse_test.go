@@ -3,8 +3,11 @@ package qasm
 import (
 	"errors"
 	"math"
+	"runtime"
+	"strconv"
 	"strings"
 	"testing"
+	"time"
 
 	"qcheck.dev/qcheck/circuit"
 )
@@ -170,8 +173,17 @@ func TestParseErrors(t *testing.T) {
 		{head + "qreg q[2];\nh q[2];", 4, 5, "out of range"},
 		{head + "qreg q[2];\nh r[0];", 4, 3, "unknown register r"},
 		{head + "qreg a[2];\nqreg b[3];\ncx a, b;", 5, 7, "different sizes"},
-		{head + "qreg q[1];\nrz(1/0) q[0];", 4, 1, "finite"},
-		{head + "qreg q[1];\nrz(ln(0)) q[0];", 4, 1, "finite"},
+		// Angles are counted from 1 and named, as in circuit.Validate, and the column is the
+		// offending expression's.
+		{head + "qreg q[1];\nrz(1/0) q[0];", 4, 4, "angle 1 (θ) of rz evaluates to +Inf; angles must be finite"},
+		{head + "qreg q[1];\nrz(ln(0)) q[0];", 4, 4, "angle 1 (θ) of rz evaluates to -Inf"},
+		{head + "qreg q[1];\nu(0, 0/0, 1) q[0];", 4, 6, "angle 2 (φ) of u evaluates to NaN"},
+		{head + "qreg q[1];\nU(0, 1, -sqrt(-1)) q[0];", 4, 9, "angle 3 (λ) of U evaluates to NaN"},
+		{head + "gate g(a, b) q { h q; }\nqreg q[1];\ng(0, 1/0) q[0];", 5, 6, "angle 2 (b) of g evaluates to +Inf"},
+		{head + "gate g(a) q { rz(ln(a)) q; }\nqreg q[1];\ng(0) q[0];", 3, 18,
+			"angle 1 (θ) of rz evaluates to -Inf in the body of gate g, for the call at 5:1"},
+		// A qelib1 body cannot be pointed at in the source: the error is at the call.
+		{head + "qreg q[2];\ncu3(0, 1e308, 1e308) q[0], q[1];", 4, 1, "angle 1 (λ) of p evaluates to +Inf inside gate cu3"},
 		{head + "qreg q[1];\nrz(theta) q[0];", 4, 4, "unknown name theta"},
 		{head + "qreg q[1];\nrz(1 +) q[0];", 4, 7, "expected an angle expression"},
 		{head + "qreg q[1];\nrz(1e) q[0];", 4, 4, "exponent"},
@@ -225,6 +237,85 @@ func TestParseExpansionLimit(t *testing.T) {
 	_, err := Parse([]byte(b.String()), MaxOps(1000))
 	if err == nil || !strings.Contains(err.Error(), "more than 1000 ops") {
 		t.Fatalf("error %v, want the op limit", err)
+	}
+}
+
+// The same nesting 40 levels deep at the default limit: g40 would expand to 2^40 ops. The reader
+// used to find that out one op at a time (12 s and 1.7 GB before failing); it must refuse the call
+// at once, at the call's line and column, naming the gate and its exact count 2^40 =
+// 1099511627776. At 70 levels the count, 2^70, is past what an int holds and is reported as a
+// lower bound. Parsing these files takes microseconds; the bounds below (1 s, 64 MB allocated)
+// leave room for a loaded machine.
+func TestParseExpansionLimitIsFast(t *testing.T) {
+	for _, tc := range []struct {
+		depth int
+		count string
+	}{
+		{40, "1099511627776"},
+		{70, "at least " + strconv.Itoa(math.MaxInt/2)},
+	} {
+		var b strings.Builder
+		b.WriteString(head + "gate g00 a { h a; }\n")
+		for i := 1; i <= tc.depth; i++ {
+			b.WriteString("gate g" + itoa(i) + " a { g" + itoa(i-1) + " a; g" + itoa(i-1) + " a; }\n")
+		}
+		b.WriteString("qreg q[1];\nh q[0];\ng" + itoa(tc.depth) + " q[0];")
+		var before, after runtime.MemStats
+		runtime.ReadMemStats(&before)
+		start := time.Now()
+		_, err := Parse([]byte(b.String()))
+		elapsed := time.Since(start)
+		runtime.ReadMemStats(&after)
+		var e *Error
+		if !errors.As(err, &e) {
+			t.Fatalf("depth %d: error %v, want an *Error at the call", tc.depth, err)
+		}
+		want := "gate g" + itoa(tc.depth) + " expands to " + tc.count + " ops here; with the 1 before it"
+		if e.Line != tc.depth+6 || e.Col != 1 || !strings.Contains(e.Msg, want) ||
+			!strings.Contains(e.Msg, "more than "+strconv.Itoa(DefaultMaxOps)+" ops") {
+			t.Errorf("depth %d: got %v, want %d:1: …%s… and the limit", tc.depth, err, tc.depth+6, want)
+		}
+		if elapsed > time.Second {
+			t.Errorf("depth %d: refusing the call took %v", tc.depth, elapsed)
+		}
+		if alloc := after.TotalAlloc - before.TotalAlloc; alloc > 64<<20 {
+			t.Errorf("depth %d: refusing the call allocated %d bytes", tc.depth, alloc)
+		}
+	}
+}
+
+// The count checked before expansion is exact: a call that fits the limit exactly is read, one op
+// more is refused. Broadcasting multiplies the count (g03 over a register of 3 is 3·2^3 = 24 ops),
+// barriers in bodies count unless dropped, and ops already read count against the limit.
+func TestParseExpansionLimitIsExact(t *testing.T) {
+	src := head + "gate g00 a { h a; barrier a; }\n"
+	for i := 1; i <= 3; i++ {
+		src += "gate g" + itoa(i) + " a { g" + itoa(i-1) + " a; g" + itoa(i-1) + " a; }\n"
+	}
+	src += "qreg q[3];\nx q[0];\ng03 q;"
+	for _, tc := range []struct {
+		max  int
+		drop bool
+		ops  int // the ops read, or 0 when the limit must refuse the call
+	}{
+		{1 + 3*16, false, 1 + 3*16},
+		{3 * 16, false, 0},
+		{1 + 3*8, true, 1 + 3*8},
+		{3 * 8, true, 0},
+	} {
+		opts := []Option{MaxOps(tc.max)}
+		if tc.drop {
+			opts = append(opts, DropBarriers())
+		}
+		c, err := Parse([]byte(src), opts...)
+		switch {
+		case tc.ops > 0 && err != nil:
+			t.Errorf("limit %d, drop %v: refused: %v", tc.max, tc.drop, err)
+		case tc.ops > 0 && c.Len() != tc.ops:
+			t.Errorf("limit %d, drop %v: %d ops, want %d", tc.max, tc.drop, c.Len(), tc.ops)
+		case tc.ops == 0 && (err == nil || !strings.Contains(err.Error(), "9:1: gate g03 expands to "+strconv.Itoa(tc.max)+" ops")):
+			t.Errorf("limit %d, drop %v: got %v, want a refusal of g03 at 9:1", tc.max, tc.drop, err)
+		}
 	}
 }
 

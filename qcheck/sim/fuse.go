@@ -55,6 +55,17 @@ func fuse(c *circuit.Circuit, sweepCost float64) []*block {
 	return out
 }
 
+// unfused turns the unitary ops of a valid circuit into one block each, with no merging.
+func unfused(c *circuit.Circuit) []*block {
+	blocks := make([]*block, 0, len(c.Ops))
+	for _, op := range c.Ops {
+		if op.Gate.Name != "barrier" {
+			blocks = append(blocks, &block{qubits: op.Qubits, m: op.Gate.Elements()})
+		}
+	}
+	return blocks
+}
+
 // mergeInto tries the two merges that keep the order of operations on every qubit:
 //   - g's qubits all lie in one earlier block b that is still the latest on each of them: then g
 //     is multiplied into b (nothing between b and g touches g's qubits, and what touches b's other

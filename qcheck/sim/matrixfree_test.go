@@ -236,6 +236,34 @@ func TestMatrixFreeHiddenDefectAtWidth(t *testing.T) {
 	}
 }
 
+// With a tolerance the run stops once the verdict is settled: a pair 5e-4 apart (one angle off by
+// 1e-3: D = 2·sin(1e-3/4), DESIGN.md) is told apart by the witness without certification, and a
+// pair equal up to rounding is certified as soon as the bound allows, in fewer steps than a full
+// run.
+func TestMatrixFreeStopsAtTolerance(t *testing.T) {
+	const n, tol = 8, 1e-9
+	u := circuit.New(n).H(0).CX(0, 1).RZ(0.3, 1).CX(1, 2).RY(0.2, 7).CZ(7, 3)
+	v := guard(circuit.New(n).H(0).CX(0, 1).RZ(0.301, 1).CX(1, 2).RY(0.2, 7).CZ(7, 3))
+	apart, err := MatrixFreeDistance(u, v, MatrixFreeOptions{Tolerance: tol})
+	if err != nil {
+		t.Fatal(err)
+	}
+	if want := 2 * math.Sin(1e-3/4); math.Abs(apart.Lower-want) > 1e-10 || !math.IsInf(apart.Upper, 1) {
+		t.Errorf("apart: Lower %.12g (want %.12g), Upper %v (want +Inf: no certification needed)", apart.Lower, want, apart.Upper)
+	}
+	full, err := MatrixFreeDistance(u, guard(u), MatrixFreeOptions{})
+	if err != nil {
+		t.Fatal(err)
+	}
+	same, err := MatrixFreeDistance(u, guard(u), MatrixFreeOptions{Tolerance: tol})
+	if err != nil {
+		t.Fatal(err)
+	}
+	if same.Upper > tol || same.Steps >= full.Steps || full.Upper > tol {
+		t.Errorf("equal pair: Upper %.3g in %d steps with the tolerance, %.3g in %d without", same.Upper, same.Steps, full.Upper, full.Steps)
+	}
+}
+
 func TestMatrixFreeRefusesBadInput(t *testing.T) {
 	cases := []struct {
 		u, v *circuit.Circuit
@@ -245,7 +273,7 @@ func TestMatrixFreeRefusesBadInput(t *testing.T) {
 		{circuit.New(2), circuit.New(3), MatrixFreeOptions{}, "different widths"},
 		{circuit.New(2).H(0), circuit.New(2).Measure(0, 0), MatrixFreeOptions{}, "second circuit: circuit: op 0 (measure)"},
 		{circuit.New(2).CX(0, 5), circuit.New(2), MatrixFreeOptions{}, "first circuit: circuit: op 0 (cx)"},
-		{circuit.New(10), circuit.New(10), MatrixFreeOptions{MemoryLimit: 1 << 14}, "needs at least 4 statevectors"},
+		{circuit.New(10), circuit.New(10), MatrixFreeOptions{MemoryLimit: 1 << 14}, "needs at least 6 statevectors"},
 		{circuit.New(1), circuit.New(1), MatrixFreeOptions{Failure: 2}, "bad matrix-free options"},
 	}
 	for _, tc := range cases {

@@ -85,11 +85,20 @@ func TestUnitaryAgreesWithNumPy(t *testing.T) {
 			seen[op.Gate] = true
 		}
 		u := unitaryOf(t, c)
+		// The same circuit on a register with idle qubits above it runs through gate fusion and
+		// the parallel column blocks (registers of up to smallUnitary qubits do not); its matrix
+		// is I ⊗ U, block diagonal with copies of NumPy's U.
+		wide := circuit.New(smallUnitary + 2).Compose(c)
+		uw := unitaryOf(t, wide)
 		dim := 1 << tc.Qubits
 		worst := 0.0
 		for r := 0; r < dim; r++ {
 			for col := 0; col < dim; col++ {
-				worst = math.Max(worst, cmplx.Abs(u.At(r, col)-tc.Unitary[r*dim+col].complex()))
+				want := tc.Unitary[r*dim+col].complex()
+				worst = math.Max(worst, cmplx.Abs(u.At(r, col)-want))
+				for blk := 0; blk < 1<<(wide.Qubits()-tc.Qubits); blk++ {
+					worst = math.Max(worst, cmplx.Abs(uw.At(blk*dim+r, blk*dim+col)-want))
+				}
 			}
 		}
 		if worst > 1e-12 {

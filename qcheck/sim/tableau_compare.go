@@ -52,7 +52,7 @@ func (t *Tableau) Compare(u *Tableau) CliffordResult {
 }
 
 // buildPair refuses a pair of circuits that cannot be compared (a missing one, or different
-// widths), then builds each with build; an error names the circuit by its role.
+// widths), then builds each with build, concurrently; an error names the circuit by its role.
 func buildPair[T any](a, b *circuit.Circuit, roleA, roleB string, build func(*circuit.Circuit) (T, error)) (ta, tb T, err error) {
 	if a == nil || b == nil {
 		return ta, tb, fmt.Errorf("sim: nil circuit")
@@ -60,11 +60,19 @@ func buildPair[T any](a, b *circuit.Circuit, roleA, roleB string, build func(*ci
 	if a.Qubits() != b.Qubits() {
 		return ta, tb, fmt.Errorf("sim: circuits have different widths: %d and %d qubits", a.Qubits(), b.Qubits())
 	}
-	if ta, err = build(a); err != nil {
+	var errB error
+	done := make(chan struct{})
+	go func() { // the two builds are independent: run them on two cores
+		defer close(done)
+		tb, errB = build(b)
+	}()
+	ta, err = build(a)
+	<-done
+	if err != nil {
 		return ta, tb, fmt.Errorf("sim: %s circuit: %w", roleA, err)
 	}
-	if tb, err = build(b); err != nil {
-		return ta, tb, fmt.Errorf("sim: %s circuit: %w", roleB, err)
+	if errB != nil {
+		return ta, tb, fmt.Errorf("sim: %s circuit: %w", roleB, errB)
 	}
 	return ta, tb, nil
 }

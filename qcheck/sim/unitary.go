@@ -43,6 +43,11 @@ func UnitaryWithin(c *circuit.Circuit, limit int64) (*mat.CDense, error) {
 // small enough to stay in a core's L2 cache while every gate of the circuit runs over it.
 const unitaryBlockBytes = 256 << 10
 
+// smallUnitary is the widest register whose matrix is built without fusion and on one goroutine:
+// at 16 × 16 and below, planning merges and starting goroutines costs more than running the gates,
+// and property tests build such matrices thousands of times a second.
+const smallUnitary = 4
+
 // unitarySweepCost weighs a pass over a block in cache against one complex multiply per amplitude.
 const unitarySweepCost = 1
 
@@ -52,15 +57,21 @@ const unitarySweepCost = 1
 // running every fused gate over the buffer before copying it out. Blocks go to workers goroutines.
 func buildUnitary(data []complex128, c *circuit.Circuit, n, workers int) {
 	dim := 1 << n
+	var gates []*block
+	if n <= smallUnitary {
+		gates, workers = unfused(c), 1
+	} else {
+		gates = fuse(c, unitarySweepCost)
+	}
 	b := uint(0)
 	for b < uint(n) && dim<<(b+1)*16 <= unitaryBlockBytes {
 		b++
 	}
-	for b > 0 && dim>>b < 4*workers { // enough blocks to keep every worker busy
+	for workers > 1 && b > 0 && dim>>b < 4*workers { // enough blocks to keep every worker busy
 		b--
 	}
 	width := 1 << b
-	kernels := kernelsOf(fuse(c, unitarySweepCost), b)
+	kernels := kernelsOf(gates, b)
 	blocks := dim / width
 	parallel(blocks, workers, func(lo, hi int) {
 		buf := make([]complex128, dim*width) // one per goroutine

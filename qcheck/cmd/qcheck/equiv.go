@@ -21,6 +21,7 @@ type compareFlags struct {
 	ancillas   string
 	dirty      bool
 	measure    string
+	engine     string
 }
 
 func (f *compareFlags) register(fs *flag.FlagSet) {
@@ -31,6 +32,13 @@ func (f *compareFlags) register(fs *flag.FlagSet) {
 	fs.StringVar(&f.ancillas, "ancillas", "", "qubits `Q,...` of B borrowed as ancillas (clean: start and end in |0⟩); A may omit them")
 	fs.BoolVar(&f.dirty, "dirty", false, "the -ancillas start in any state and must be restored")
 	fs.StringVar(&f.measure, "measure", "operator", "`MEASURE` that decides: operator (norm), diamond, or fidelity (average infidelity)")
+	fs.StringVar(&f.engine, "engine", "auto", "`ENGINE` that answers: auto, dense, tableau (Clifford circuits) or matrix-free (see above)")
+}
+
+// engines maps the -engine names to qcheck's engines.
+var engines = map[string]qcheck.Engine{
+	qcheck.Auto.String(): qcheck.Auto, qcheck.Dense.String(): qcheck.Dense,
+	qcheck.Tableau.String(): qcheck.Tableau, qcheck.MatrixFree.String(): qcheck.MatrixFree,
 }
 
 // options turns the flags into qcheck options.
@@ -70,6 +78,13 @@ func (f *compareFlags) options() ([]qcheck.Option, error) {
 		opts = append(opts, qcheck.UseMeasure(qcheck.AverageFidelity))
 	default:
 		return nil, fmt.Errorf("-measure %q: choose operator, diamond or fidelity", f.measure)
+	}
+	e, ok := engines[f.engine]
+	if !ok {
+		return nil, fmt.Errorf("-engine %q: choose auto, dense, tableau or matrix-free", f.engine)
+	}
+	if e != qcheck.Auto {
+		opts = append(opts, qcheck.UseEngine(e))
 	}
 	return opts, nil
 }
@@ -119,14 +134,44 @@ func (f *compareFlags) compareFiles(a, b string) (qcheck.Result, error) {
 }
 
 const equivAbout = `
-Compares the circuit of B.qasm with that of A.qasm (the reference) and exits 0 when they are
-equivalent within the tolerance, 1 when they are not, 2 on bad input or usage. By default the
-distance is the operator norm of the difference of the two unitaries, minimised over a global
-phase. Human output: the verdict and the distance, and on a difference a report with the input
-state that exposes it and a measurement whose probabilities differ. With -json, one JSON object:
-equivalent, distance, measure, tolerance, exact_phase, phase (want ≈ e^{i·phase}·got),
-operator_distance, witness (the input state, as [re, im] pairs, basis index Σ b_q·2^q),
-witness_gap (a certified lower bound on the distance), engine, certifies, measurement.`
+Compares the circuit of B.qasm (got) with that of A.qasm (want, the reference) and exits 0 when
+they are equivalent within the tolerance, 1 when they are not, 2 on bad input or usage. By
+default the distance is the operator norm of the difference of the two unitaries, minimised over
+a global phase. Human output: a line naming A (want) and B (got), then the verdict with the
+measure and distance; on a difference, a report with the input state that exposes it and a
+measurement whose probabilities differ.
+
+Cost: -engine auto (the default) uses the dense engine up to 12 qubits: exact, but it builds both
+2^n × 2^n unitaries, and at 11-12 qubits circuits that differ take seconds to minutes (the
+witness needs an eigendecomposition). Wider than 12 qubits it uses the tableau engine when both
+circuits are Clifford (exact, thousands of qubits), else the matrix-free estimate up to 24
+qubits (runs on statevectors; the witness certifies a lower bound, the upper bound holds with a
+stated probability). The wide engines compare in operator norm up to global phase only, without
+-exact-phase, -measured or clean -ancillas; -engine dense forces the dense engine at any width
+its memory allows (16·4^n bytes a matrix, at most 4 GiB: 14 qubits), which may take hours.
+
+With -json, one JSON object:
+  equivalent         true when distance ≤ tolerance
+  distance           the distance in the chosen measure
+  measure            "operator norm", "diamond norm" or "average infidelity" ("total variation"
+                     with -measured)
+  tolerance          the tolerance used
+  exact_phase        whether global phase counted
+  phase              φ in radians with want ≈ e^{iφ}·got (0 with -exact-phase)
+  operator_distance  the operator-norm distance whatever the measure
+  witness            an input state that exposes the difference, as [re, im] amplitude pairs
+                     indexed Σ b_q·2^q (qubit 0 is the least-significant bit); [] if none
+  witness_gap        the gap the witness shows: a certified lower bound on operator_distance
+  engine             "dense", "tableau" or "matrix-free": the engine that answered
+  certifies          in words, what the engine's answer guarantees
+  measurement        omitted when the circuits are equivalent or differ only by a global phase
+                     (no measurement tells them apart); else an experiment that does:
+    input_basis      basis index of the input state when it is a basis state, else null
+    basis            true: measure every qubit (or the -measured ones) in the computational
+                     basis; false: test whether the output is want's output state
+    outcome          with basis, the outcome index whose probability differs most; else null
+    want             the probability of that outcome (or of passing the test) after want
+    got              the same after got`
 
 func equiv(args []string, stdout, stderr io.Writer) int {
 	c := newCommand("equiv", "equiv [flags] A.qasm B.qasm", equivAbout, stdout, stderr)
@@ -147,10 +192,13 @@ func equiv(args []string, stdout, stderr io.Writer) int {
 			return c.fail("%v", err)
 		}
 		fmt.Fprintf(stdout, "%s\n", out)
-	} else if r.Equivalent {
-		fmt.Fprintln(stdout, r.Headline())
 	} else {
-		fmt.Fprint(stdout, r.Report())
+		fmt.Fprintf(stdout, "%s (want) vs %s (got):\n", files[0], files[1])
+		if r.Equivalent {
+			fmt.Fprintln(stdout, r.Headline())
+		} else {
+			fmt.Fprint(stdout, r.Report())
+		}
 	}
 	if !r.Equivalent {
 		return exitDiffer
@@ -174,13 +222,14 @@ type verdict struct {
 	Measurement      *measurement `json:"measurement,omitempty"`
 }
 
-// measurement is the JSON form of qcheck.Measurement: prepare input (input_basis when it is a
-// basis state, else −1), run, measure; basis tells a computational-basis measurement with outcome
-// seen with probability want and got, otherwise a projection onto want's output.
+// measurement is the JSON form of qcheck.Measurement: prepare the input (input_basis when it is
+// a basis state, else null), run, measure; basis tells a computational-basis measurement with
+// outcome seen with probability want and got, otherwise a projection onto want's output (and
+// outcome is null).
 type measurement struct {
-	InputBasis int     `json:"input_basis"`
+	InputBasis *int    `json:"input_basis"`
 	Basis      bool    `json:"basis"`
-	Outcome    int     `json:"outcome"`
+	Outcome    *int    `json:"outcome"`
 	Want       float64 `json:"want"`
 	Got        float64 `json:"got"`
 }
@@ -196,7 +245,13 @@ func resultJSON(r qcheck.Result) verdict {
 		v.Witness = append(v.Witness, [2]float64{real(a), imag(a)})
 	}
 	if m := r.Measurement; m.Input != nil {
-		v.Measurement = &measurement{InputBasis: m.InputBasis, Basis: m.Basis, Outcome: m.Outcome, Want: m.Want, Got: m.Got}
+		v.Measurement = &measurement{Basis: m.Basis, Want: m.Want, Got: m.Got}
+		if m.InputBasis >= 0 {
+			v.Measurement.InputBasis = &m.InputBasis
+		}
+		if m.Basis {
+			v.Measurement.Outcome = &m.Outcome
+		}
 	}
 	return v
 }

@@ -3,7 +3,7 @@
 // phase.
 //
 //	qcheck equiv [flags] A.qasm B.qasm     exit 0 when equivalent, 1 when not, 2 on bad input
-//	qcheck measures [-json] A.qasm B.qasm  every distance and fidelity of the two circuits
+//	qcheck measures [-json] A.qasm B.qasm  every distance and fidelity (up to 10 qubits)
 //	qcheck random [flags]                  random circuits as OpenQASM, to feed another compiler
 //	qcheck pairs [flags] DIR               every NAME.before.qasm against NAME.after.qasm in DIR
 //	qcheck demo [-seed N]                  the built-in scenario
@@ -32,7 +32,7 @@ const usage = `qcheck checks that quantum circuits written in OpenQASM 2.0 mean 
 
 Usage:
   qcheck equiv [flags] A.qasm B.qasm     exit 0 if equivalent, 1 if not, 2 on bad input
-  qcheck measures [-json] A.qasm B.qasm  print every distance and fidelity of the two circuits
+  qcheck measures [-json] A.qasm B.qasm  print every distance and fidelity (up to 10 qubits)
   qcheck random [flags]                  write random circuits as OpenQASM 2.0
   qcheck pairs [flags] DIR               check every NAME.before.qasm against NAME.after.qasm
   qcheck demo [-seed N]                  run the built-in scenario

@@ -5,10 +5,13 @@ import (
 	"bytes"
 	"encoding/json"
 	"errors"
+	"fmt"
 	"math"
 	"os"
 	"os/exec"
 	"path/filepath"
+	"reflect"
+	"regexp"
 	"strconv"
 	"strings"
 	"testing"
@@ -92,18 +95,113 @@ func TestEquivCorpus(t *testing.T) {
 	}
 }
 
-// Human output: the verdict line when equivalent; the report (headline first, then a witness and
-// a measurement) on a difference.
+// Human output: a line naming which file is want and which got, then the verdict line (with the
+// measure and the phase convention) when equivalent, or the report (headline first, then a
+// witness and a measurement) on a difference.
 func TestEquivHumanOutput(t *testing.T) {
 	a, b := pairFiles("toffoli")
 	code, out, _ := runCmd("equiv", a, b)
-	if code != exitOK || !strings.Contains(out, "equivalent") || strings.Count(out, "\n") != 1 {
+	lines := strings.Split(strings.TrimSuffix(out, "\n"), "\n")
+	if code != exitOK || len(lines) != 2 || lines[0] != a+" (want) vs "+b+" (got):" ||
+		!strings.HasPrefix(lines[1], "qcheck: got is equivalent to want: operator norm ") ||
+		!strings.HasSuffix(lines[1], "(up to global phase)") {
 		t.Errorf("toffoli: exit %d, output %q", code, out)
 	}
 	a, b = pairFiles("cp_in_place_of_crz")
 	code, out, _ = runCmd("equiv", a, b)
-	if code != exitDiffer || !strings.HasPrefix(out, "qcheck: got differs from want: operator norm 0.1748") {
+	if code != exitDiffer || !strings.HasPrefix(out, a+" (want) vs "+b+" (got):\nqcheck: got differs from want: operator norm 0.1748") {
 		t.Errorf("cp_in_place_of_crz: exit %d, output %q", code, out)
+	}
+}
+
+// The JSON measurement uses null, not a made-up index, where a field does not apply. Worked by
+// hand: cx q[0],q[1] against cx q[1],q[0] on the basis input |q1 q0⟩ = |01⟩ (index 1) gives |11⟩
+// (index 3) after want and |01⟩ after got, so measuring tells them apart with certainty. cp and
+// crz are both diagonal (Nielsen & Chuang §4.3), so no basis input and basis measurement can
+// tell them apart: the measurement is the projection onto want's output, with no outcome index.
+func TestEquivJSONMeasurement(t *testing.T) {
+	type meas struct {
+		InputBasis *int     `json:"input_basis"`
+		Basis      *bool    `json:"basis"`
+		Outcome    *int     `json:"outcome"`
+		Want       *float64 `json:"want"`
+		Got        *float64 `json:"got"`
+	}
+	read := func(name string) (*meas, map[string]json.RawMessage) {
+		t.Helper()
+		a, b := pairFiles(name)
+		code, out, errOut := runCmd("equiv", "-json", a, b)
+		var v struct {
+			Measurement *meas `json:"measurement"`
+		}
+		var raw map[string]json.RawMessage
+		if err := json.Unmarshal([]byte(out), &v); err != nil || code != exitDiffer || v.Measurement == nil {
+			t.Fatalf("%s: exit %d, %v, %s%s", name, code, err, out, errOut)
+		}
+		json.Unmarshal([]byte(out), &raw)
+		var rawMeas map[string]json.RawMessage
+		json.Unmarshal(raw["measurement"], &rawMeas)
+		return v.Measurement, rawMeas
+	}
+	m, _ := read("cnot_swapped_roles")
+	if m.InputBasis == nil || m.Outcome == nil || m.Basis == nil || !*m.Basis {
+		t.Fatalf("cnot_swapped_roles: %+v", m)
+	}
+	// want: b1 ^= b0; got: b0 ^= b1 (index Σ b_q·2^q).
+	wantOut := *m.InputBasis ^ (*m.InputBasis & 1 << 1)
+	gotOut := *m.InputBasis ^ (*m.InputBasis >> 1 & 1)
+	indicator := func(ok bool) float64 {
+		if ok {
+			return 1
+		}
+		return 0
+	}
+	if math.Abs(*m.Want-indicator(wantOut == *m.Outcome)) > 1e-12 || math.Abs(*m.Got-indicator(gotOut == *m.Outcome)) > 1e-12 || *m.Want == *m.Got {
+		t.Errorf("cnot_swapped_roles: input %d outcome %d: want %g got %g", *m.InputBasis, *m.Outcome, *m.Want, *m.Got)
+	}
+	m, raw := read("cp_in_place_of_crz")
+	if *m.Basis || string(raw["input_basis"]) != "null" || string(raw["outcome"]) != "null" || *m.Want != 1 || *m.Got >= 1 {
+		t.Errorf("cp_in_place_of_crz: %s %s %+v", raw["input_basis"], raw["outcome"], m)
+	}
+}
+
+// -engine picks qcheck's engine: tableau on Clifford circuits (CX is Clifford, Gottesman 1998),
+// refused on a circuit with T, which is not; the verdicts agree with the dense engine's.
+func TestEquivEngineFlag(t *testing.T) {
+	engineOf := func(args ...string) (int, string, string) {
+		code, out, errOut := runCmd(append([]string{"equiv", "-json"}, args...)...)
+		var v struct {
+			Engine string `json:"engine"`
+		}
+		json.Unmarshal([]byte(out), &v)
+		return code, v.Engine, errOut
+	}
+	ca, cb := pairFiles("cnot_swapped_roles")
+	ta, tb := pairFiles("toffoli")
+	for _, c := range []struct {
+		args   []string
+		code   int
+		engine string
+	}{
+		{[]string{ca, cb}, exitDiffer, "dense"},
+		{[]string{"-engine", "tableau", ca, cb}, exitDiffer, "tableau"},
+		{[]string{"-engine", "matrix-free", ta, tb}, exitOK, "matrix-free"},
+		{[]string{"-engine", "dense", ta, tb}, exitOK, "dense"},
+	} {
+		if code, engine, errOut := engineOf(c.args...); code != c.code || engine != c.engine {
+			t.Errorf("equiv %v: exit %d engine %q (%s); want exit %d engine %q", c.args, code, engine, errOut, c.code, c.engine)
+		}
+	}
+	for _, c := range []struct {
+		args   []string
+		stderr string
+	}{
+		{[]string{"-engine", "tableau", ta, tb}, "Clifford"},
+		{[]string{"-engine", "fast", ta, tb}, "-engine \"fast\": choose auto, dense, tableau or matrix-free"},
+	} {
+		if code, _, errOut := engineOf(c.args...); code != exitBadUsed || !strings.Contains(errOut, c.stderr) {
+			t.Errorf("equiv %v: exit %d, stderr %q; want exit 2 and …%s…", c.args, code, errOut, c.stderr)
+		}
 	}
 }
 
@@ -215,6 +313,37 @@ func TestMeasures(t *testing.T) {
 	if code, _, errOut := runCmd("measures", filepath.Join(dir, "m.qasm"), a); code != exitBadUsed || !strings.Contains(errOut, "m.qasm:5: measure") {
 		t.Errorf("measure in input: exit %d, stderr %q", code, errOut)
 	}
+	// The φ of the 3-cycle's eigenvalues: ±2π/3 (either attains the minimum, by the symmetry of
+	// 1, ω, ω² about the real axis).
+	code, out, _ = runCmd("measures", a, b)
+	if code != exitOK || !strings.Contains(out, "phase-free  1.73205  (φ = ") || !strings.Contains(out, "2.0944: U ≈ e^{iφ}V)\n") {
+		t.Errorf("phase-free line (exit %d):\n%s", code, out)
+	}
+}
+
+// measures refuses circuits wider than its limit before building any matrix, and accepts the
+// limit itself.
+func TestMeasuresWidthLimit(t *testing.T) {
+	dir := writeFiles(t, map[string]string{
+		"wide.qasm":  "qreg q[11];\nh q[0];\n",
+		"wide2.qasm": "qreg q[11];\nx q[10];\n",
+		"edge.qasm":  "qreg q[10];\nh q[0];\n",
+		"edge2.qasm": "qreg q[10];\nh q[0];\nx q[9];\nx q[9];\n",
+	})
+	f := func(name string) string { return filepath.Join(dir, name) }
+	code, out, errOut := runCmd("measures", f("wide.qasm"), f("wide2.qasm"))
+	if code != exitBadUsed || out != "" || !strings.Contains(errOut, "11 qubits, more than the 10 that measures handles") {
+		t.Errorf("11 qubits: exit %d, stdout %q, stderr %q", code, out, errOut)
+	}
+	if testing.Short() {
+		return
+	}
+	// X·X = I (Nielsen & Chuang §2.1.3), so the two 10-qubit circuits are equal: distance 0.
+	code, out, errOut = runCmd("measures", "-json", f("edge.qasm"), f("edge2.qasm"))
+	var m allMeasures
+	if err := json.Unmarshal([]byte(out), &m); code != exitOK || err != nil || m.Operator > 1e-9 || math.Abs(m.ProcessFidelity-1) > 1e-9 {
+		t.Errorf("10 qubits: exit %d, %+v, %v, %s", code, m, err, errOut)
+	}
 }
 
 // pairs over the corpus: with the manifest as expectation every pair passes; without it the
@@ -312,6 +441,40 @@ func TestHelp(t *testing.T) {
 	}
 	if code, out, _ := runCmd("-h"); code != exitOK || !strings.Contains(out, "qcheck pairs") {
 		t.Errorf("-h: exit %d, %q", code, out)
+	}
+}
+
+// Every JSON field that equiv and measures write is described in their -h (equiv lists one field
+// a line), and so are their costs (the widths at which each engine takes over, from
+// qcheck/engine.go).
+func TestHelpDescribesJSONAndCost(t *testing.T) {
+	fieldsOf := func(v any, linePattern string) []string {
+		var out []string
+		ty := reflect.TypeOf(v)
+		for i := range ty.NumField() {
+			name, _, _ := strings.Cut(ty.Field(i).Tag.Get("json"), ",")
+			out = append(out, fmt.Sprintf(linePattern, regexp.QuoteMeta(name)))
+		}
+		return out
+	}
+	const listed, inline = `(?m)^ +%s[ ,]`, `[\s(]%s[\s,.)]`
+	for _, c := range []struct {
+		cmd  string
+		want []string
+	}{
+		{"equiv", append(append(fieldsOf(verdict{}, listed), fieldsOf(measurement{}, listed)...),
+			"else null", "up to 12 qubits", "tableau engine when both circuits are Clifford",
+			"matrix-free estimate up to 24 qubits", "-engine dense")},
+		{"measures", append(fieldsOf(allMeasures{}, inline), "wider than 10 qubits")},
+	} {
+		_, out, _ := runCmd(c.cmd, "-h")
+		about, _, _ := strings.Cut(out, "\nflags:")
+		words := strings.Join(strings.Fields(about), " ")
+		for _, w := range c.want {
+			if re := regexp.MustCompile(w); !re.MatchString(about) && !strings.Contains(words, w) {
+				t.Errorf("%s -h does not mention %q", c.cmd, w)
+			}
+		}
 	}
 }
 
