@@ -9,6 +9,7 @@ import (
 	"strconv"
 	"strings"
 	"sync"
+	"testing"
 
 	"pgregory.net/rapid"
 	"qcheck.dev/qcheck/circuit"
@@ -45,6 +46,9 @@ func search(name string, s subject, g *rapid.Generator[*circuit.Circuit], opts [
 	}
 	searching.Lock()
 	defer searching.Unlock()
+	if err := testingFlags(); err != nil {
+		return nil, err
+	}
 	if f := flag.Lookup("rapid.nofailfile"); f != nil {
 		old := f.Value.String()
 		_ = f.Value.Set("true")
@@ -74,6 +78,22 @@ func search(name string, s subject, g *rapid.Generator[*circuit.Circuit], opts [
 		last.Passed, _ = strconv.Atoi(m[1])
 	}
 	return last, nil
+}
+
+// testingFlags makes rapid usable outside a test binary: rapid reads testing.Short, which panics
+// unless the testing flags are registered (testing.Init) and the command line is parsed. In a
+// program that has not parsed its command line, an empty one is parsed.
+func testingFlags() error {
+	if testing.Testing() {
+		return nil
+	}
+	testing.Init()
+	if !flag.Parsed() {
+		if err := flag.CommandLine.Parse(nil); err != nil {
+			return fmt.Errorf("qcheck.Search: %v", err)
+		}
+	}
+	return nil
 }
 
 var (

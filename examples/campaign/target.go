@@ -4,7 +4,6 @@ import (
 	"flag"
 	"fmt"
 	"strconv"
-	"testing"
 
 	"pgregory.net/rapid"
 	"qcheck.dev/qcheck"
@@ -34,22 +33,12 @@ const DefaultChecks = 100
 // without fail files (so that nothing is written to, or replayed from, testdata/rapid/). It
 // returns the shrunk failure, or nil when all checks passed. Hunt sets rapid's command-line
 // settings for the duration of the call and restores them; like Search, calls must not overlap.
-//
-// rapid reads testing.Short, which panics in a program that is not a test unless the testing
-// flags are registered and parsed; Hunt registers them (testing.Init) and, when the program has
-// not parsed its command line, parses an empty one.
 func Hunt(t Target, seed uint64, checks int) (*qcheck.Failure, error) {
 	if seed == 0 {
 		return nil, fmt.Errorf("campaign: seed 0 asks rapid for a random seed; give a nonzero seed")
 	}
 	if checks < 1 {
 		return nil, fmt.Errorf("campaign: %d checks; want at least 1", checks)
-	}
-	testing.Init()
-	if !flag.Parsed() {
-		if err := flag.CommandLine.Parse(nil); err != nil {
-			return nil, fmt.Errorf("campaign: %v", err)
-		}
 	}
 	restore, err := setFlags(map[string]string{
 		"rapid.seed":       strconv.FormatUint(seed, 10),
