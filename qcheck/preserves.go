@@ -104,9 +104,8 @@ func checkedConfig(s subject, g *rapid.Generator[*circuit.Circuit], opts []Optio
 // property draws one circuit, runs the pass and fails t with the report when it is wrong, after
 // handing the failure to seen (when not nil).
 func property(cfg *config, s subject, g *rapid.Generator[*circuit.Circuit], seen func(*Failure)) func(*rapid.T) {
-	wrapped := rapid.Map(g, func(c *circuit.Circuit) drawn { return drawn{c} })
 	return func(t *rapid.T) {
-		in := wrapped.Draw(t, "circuit").c
+		in := g.Draw(t, "circuit")
 		if f := trial(cfg, s, in); f != nil {
 			if seen != nil {
 				seen(f)

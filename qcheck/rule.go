@@ -129,9 +129,9 @@ type placement struct {
 func embed(t *rapid.T, left *circuit.Circuit) (*circuit.Circuit, placement) {
 	w := left.Qubits() + rapid.IntRange(0, ruleExtraQubits).Draw(t, "extra qubits")
 	placed := rapid.Map(gen.Embed(left, w), func(e gen.Embedding) drawnPlacement { return drawnPlacement(e) }).Draw(t, "placement")
-	around := rapid.Map(gen.Circuit(contextOptions(left, w)), func(c *circuit.Circuit) drawn { return drawn{c} })
-	before := around.Draw(t, "ops before").c
-	after := around.Draw(t, "ops after").c
+	around := gen.Circuit(contextOptions(left, w))
+	before := around.Draw(t, "ops before")
+	after := around.Draw(t, "ops after")
 	c := circuit.New(w)
 	c.Ops = append(c.Ops, before.Ops...)
 	c.Ops = append(c.Ops, placed.Circuit.Ops...)
