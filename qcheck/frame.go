@@ -14,7 +14,8 @@ type frame struct {
 	// data[i] is the qubit of got's register that carries want's qubit i; nil when want is as
 	// wide as got and used as it is.
 	data []int
-	// anc lists the ancilla qubits of got's register, sorted; ancMask has their bits set.
+	// anc lists the ancilla qubits of got's register, sorted; ancMask has their bits set (those below
+	// 63, which covers every register the dense engine holds).
 	anc     []int
 	ancMask int
 	clean   bool
@@ -80,17 +81,21 @@ func (f *frame) setAncillas(cfg *config) error {
 		if i > 0 && f.anc[i-1] == q {
 			return fmt.Errorf("qcheck: ancilla qubit %d is declared twice", q)
 		}
-		f.ancMask |= 1 << q
+		if q < 63 { // the mask serves the dense engine, whose registers are far narrower
+			f.ancMask |= 1 << q
+		}
 	}
 	switch f.n {
 	case f.m:
 		// Same register: both circuits see the same ancillas.
 	case f.m - k:
 		f.data = make([]int, 0, f.n)
-		for q := 0; q < f.m; q++ {
-			if f.ancMask>>q&1 == 0 {
-				f.data = append(f.data, q)
+		for q, a := 0, 0; q < f.m; q++ {
+			if a < k && f.anc[a] == q {
+				a++
+				continue
 			}
+			f.data = append(f.data, q)
 		}
 	default:
 		return fmt.Errorf("qcheck: want has %d qubit(s) and got has %d with %d ancilla(s) %v; want must have %d qubits (got's without the ancillas) or %d (the same register)", f.n, f.m, k, f.anc, f.m-k, f.m)

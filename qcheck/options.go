@@ -72,7 +72,7 @@ func ExactPhase() Option {
 // permutation is the one it reports. perm must have one entry per qubit of got and be a
 // permutation of 0..n−1. Passes that compute their layout report it through a LayoutPass.
 func OutputPermutation(perm []int) Option {
-	p := append([]int(nil), perm...)
+	p := append(make([]int, 0, len(perm)), perm...) // never nil, so an empty perm is checked too
 	return optionFunc(func(c *config) error {
 		c.perm = p
 		return nil

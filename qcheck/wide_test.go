@@ -280,3 +280,32 @@ func invert(p []int) []int {
 	}
 	return q
 }
+
+// Ancillas above qubit 63 keep their place: a dirty ancilla on qubit 65 of a 70-qubit register
+// moves want's qubits 65–68 up by one (the tableau engine answers at this width).
+func TestAncillasBeyondAWord(t *testing.T) {
+	want := circuit.New(69).X(68)
+	good := circuit.New(70).X(69)
+	bad := circuit.New(70).X(68)
+	r, err := Compare(want, good, Ancillas([]int{65}, Dirty))
+	if err != nil {
+		t.Fatal(err)
+	}
+	if !r.Equivalent {
+		t.Errorf("X on want's qubit 68, which is got's 69, was not accepted (engine %v, distance %.3g)", r.Engine, r.Distance)
+	}
+	r, err = Compare(want, bad, Ancillas([]int{65}, Dirty))
+	if err != nil {
+		t.Fatal(err)
+	}
+	if r.Equivalent {
+		t.Errorf("X on got's qubit 68, which carries want's 67, was accepted")
+	}
+}
+
+func TestEmptyPermutationIsRefused(t *testing.T) {
+	c := circuit.New(2).H(0)
+	if _, err := Compare(c, c, OutputPermutation([]int{})); err == nil {
+		t.Error("an empty output permutation on 2 qubits was accepted")
+	}
+}
