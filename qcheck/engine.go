@@ -2,7 +2,9 @@ package qcheck
 
 import (
 	"fmt"
+	"math"
 
+	"qcheck.dev/qcheck/circuit"
 	"qcheck.dev/qcheck/sim"
 )
 
@@ -64,8 +66,37 @@ func wideEngineFits(cfg *config, f *frame, e Engine) error {
 		if !sim.IsClifford(f.got) {
 			return fmt.Errorf("got is not a Clifford circuit, which the tableau engine needs")
 		}
+		b, ok := cliffordRounding(f.want, f.got)
+		if !ok {
+			return fmt.Errorf("the tableau engine cannot bound how far custom gates are from the Cliffords it computes with")
+		}
+		if b >= cfg.tol {
+			return fmt.Errorf("the angles are off exact Clifford angles by %.3g in total, not below the tolerance %g, so the tableau's exact answer would not settle it", b, cfg.tol)
+		}
 	}
 	return nil
+}
+
+// cliffordRounding bounds how far the circuits the tableau accepts are, in operator norm, from
+// the exact Clifford circuits it computes with. The tableau accepts a gate whose angles lie within
+// sim.CliffordTolerance of Clifford ones; an angle off by δ moves its gate by at most |δ| (every
+// gate's derivative in each of its angles has norm at most 1: ½ for the rotations exp(−iθP/2),
+// 1 for p, cp and u), and such deviations add up over a circuit (Nielsen & Chuang §4.5.3). It
+// reports false for custom gates, which have no angle to measure by.
+func cliffordRounding(cs ...*circuit.Circuit) (float64, bool) {
+	const quarter = math.Pi / 2
+	b := 0.0
+	for _, c := range cs {
+		for _, op := range c.Ops {
+			if op.Gate.IsCustom() {
+				return 0, false
+			}
+			for _, p := range op.Gate.Params {
+				b += math.Abs(p - math.Round(p/quarter)*quarter)
+			}
+		}
+	}
+	return b, true
 }
 
 // certifies says in words what an engine's verdict guarantees.

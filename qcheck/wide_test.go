@@ -309,3 +309,39 @@ func TestEmptyPermutationIsRefused(t *testing.T) {
 		t.Error("an empty output permutation on 2 qubits was accepted")
 	}
 }
+
+// Angles a hair off Clifford ones (review): the tableau rounds them to exact Cliffords, so it may
+// answer only while their total offset is below the tolerance. 4000 rz(π/2 + 9e-13) are 3.6e-9
+// off in total, far above 1e-9: Auto must not trust the tableau, and the matrix-free engine finds
+// the accumulated difference from the identity.
+func TestTableauRefusesRoundedAnglesBeyondTolerance(t *testing.T) {
+	const n = 14
+	want := circuit.New(n)
+	got := circuit.New(n)
+	for range 4000 {
+		got.RZ(math.Pi/2+9e-13, 0)
+	}
+	if _, err := Compare(want, got, UseEngine(Tableau)); err == nil {
+		t.Fatal("the tableau answered although the angles are off Clifford ones by more than the tolerance")
+	}
+	r, err := Compare(want, got)
+	if err != nil {
+		t.Fatal(err)
+	}
+	if r.Engine == Tableau {
+		t.Fatalf("Auto chose the tableau")
+	}
+	// rz(π/2 + δ)^4000 = rz(2000π + 4000δ) = rz(4000δ) up to phase: distance 2 sin(4000δ/4).
+	if want := 2 * math.Sin(4000*9e-13/4); r.Equivalent || math.Abs(r.Distance-want) > 1e-12 {
+		t.Errorf("engine %v: equivalent %v, distance %.4g, want %.4g", r.Engine, r.Equivalent, r.Distance, want)
+	}
+	// A few such gates stay well below the tolerance: the tableau answers and says so.
+	few := circuit.New(n).RZ(math.Pi/2+1e-13, 0).RZ(-math.Pi/2, 0)
+	r, err = Compare(circuit.New(n), few)
+	if err != nil {
+		t.Fatal(err)
+	}
+	if r.Engine != Tableau || !r.Equivalent || !strings.Contains(r.Certifies, "off Clifford") {
+		t.Errorf("engine %v, equivalent %v, certifies %q", r.Engine, r.Equivalent, r.Certifies)
+	}
+}
