@@ -12,9 +12,10 @@ import (
 // 512 MiB and a few seconds.
 const denseAuto = 12
 
-// matrixFreeAuto is the widest register Auto gives to the matrix-free engine: its Krylov basis
-// of a few dozen statevectors of 2^24 amplitudes (256 MiB each) is what fits in memory.
-const matrixFreeAuto = 24
+// matrixFreeAuto is the widest register Auto gives to the matrix-free engine: the widest at which
+// its default 4 GiB of Krylov vectors (64 MiB each at 22 qubits) holds the few dozen steps its
+// probabilistic upper bound needs to settle an equivalence.
+const matrixFreeAuto = 22
 
 // chooseEngine decides which engine answers a comparison: the one asked for with UseEngine, or
 // for Auto the cheapest one that answers exactly: dense up to denseAuto qubits, the tableau for

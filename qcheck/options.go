@@ -204,7 +204,7 @@ const (
 	// Clifford circuits only.
 	Tableau
 	// MatrixFree estimates the phase-free distance from runs of both circuits on statevectors
-	// (a Krylov iteration on V†U), without forming either matrix: for 13 to about 24 qubits. Its
+	// (a Krylov iteration on V†U), without forming either matrix: Auto uses it for 13 to 22 qubits. Its
 	// witness certifies a lower bound; its upper bound holds with a stated probability.
 	MatrixFree
 )

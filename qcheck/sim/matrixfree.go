@@ -145,13 +145,20 @@ func MatrixFreeDistance(u, v *circuit.Circuit, opts MatrixFreeOptions) (MatrixFr
 
 	// Certify: an upper bound at the phase found, from an independent random state.
 	ce := newArnoldi(w, randomState(rng, dim), opts.CertifySteps)
+	// With a Tolerance the bound is tested after every step and the run stops at the first
+	// success, so each test gets an equal part of the failure probability (a union bound over at
+	// most CertifySteps tests) and the stated Failure holds for the run as a whole.
+	perTest := opts.Failure
+	if opts.Tolerance > 0 && opts.CertifySteps > 1 {
+		perTest /= float64(opts.CertifySteps)
+	}
 	upper := func() (float64, float64) {
 		xi := ce.deviation(res.Phase)
 		if ce.invariant {
 			return xi + rounding, 0
 		}
 		k := (ce.steps()-1)/2 + 1
-		sq := math.Log(1.648*math.Sqrt(2*float64(dim))/opts.Failure) / float64(2*k-1)
+		sq := math.Log(1.648*math.Sqrt(2*float64(dim))/perTest) / float64(2*k-1)
 		if eps := sq * sq; eps < 1 {
 			return xi/math.Sqrt(1-eps) + rounding, opts.Failure
 		}

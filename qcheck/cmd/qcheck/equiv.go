@@ -144,9 +144,9 @@ measurement whose probabilities differ.
 Cost: -engine auto (the default) uses the dense engine up to 12 qubits: exact, but it builds both
 2^n × 2^n unitaries, and at 11-12 qubits circuits that differ take seconds to minutes (the
 witness needs an eigendecomposition). Wider than 12 qubits it uses the tableau engine when both
-circuits are Clifford (exact, thousands of qubits), else the matrix-free estimate up to 24
+circuits are Clifford (exact, thousands of qubits), else the matrix-free estimate up to 22
 qubits (runs on statevectors; the witness certifies a lower bound, the upper bound holds with a
-stated probability). The wide engines compare in operator norm up to global phase only, without
+stated probability, and a pair neither bound settles is not counted as equivalent). The wide engines compare in operator norm up to global phase only, without
 -exact-phase, -measured or clean -ancillas; -engine dense forces the dense engine at any width
 its memory allows (16·4^n bytes a matrix, at most 4 GiB: 14 qubits), which may take hours.
 

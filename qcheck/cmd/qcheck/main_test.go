@@ -464,7 +464,7 @@ func TestHelpDescribesJSONAndCost(t *testing.T) {
 	}{
 		{"equiv", append(append(fieldsOf(verdict{}, listed), fieldsOf(measurement{}, listed)...),
 			"else null", "up to 12 qubits", "tableau engine when both circuits are Clifford",
-			"matrix-free estimate up to 24 qubits", "-engine dense")},
+			"matrix-free estimate up to 22 qubits", "-engine dense")},
 		{"measures", append(fieldsOf(allMeasures{}, inline), "wider than 10 qubits")},
 	} {
 		_, out, _ := runCmd(c.cmd, "-h")
