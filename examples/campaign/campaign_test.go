@@ -3,6 +3,7 @@ package campaign_test
 import (
 	"bytes"
 	"flag"
+	"math"
 	"os"
 	"path/filepath"
 	"strings"
@@ -148,4 +149,27 @@ func keeps(t *testing.T, pass qcheck.LayoutPass, in *circuit.Circuit, opts []qch
 	}
 	r, err := qcheck.Compare(in, out, opts...)
 	return err == nil && r.Equivalent
+}
+
+// The demo's shrunk counterexample is a real bug, checked by hand: a Z on the target of a CX
+// does not slide through it, since CX·(I ⊗ Z_t) = (Z_c ⊗ Z_t)·CX (Nielsen & Chuang §10.5.2,
+// conjugation of Paulis by CNOT). So Z_t·CX·Z_t = Z_c·CX, while the wrong pass cancels the two
+// Zs and keeps CX alone: the two differ by Z on the control, whose eigenphases 0 and π span a
+// half circle, a phase-free distance of 2·sin(π/4) = √2 (DESIGN.md's closed form).
+func TestDemoCounterexampleIsReal(t *testing.T) {
+	f, err := campaign.Hunt(campaign.Peephole(), 1, campaign.DefaultChecks)
+	if err != nil {
+		t.Fatal(err)
+	}
+	if f == nil || f.Result == nil {
+		t.Fatalf("seed 1 found no meaning change: %v", f)
+	}
+	in := f.Input
+	if len(in.Ops) != 3 || in.Ops[0].Gate.Name != "z" || in.Ops[1].Gate.Name != "cx" || in.Ops[2].Gate.Name != "z" ||
+		in.Ops[0].Qubits[0] != in.Ops[1].Qubits[1] || in.Ops[2].Qubits[0] != in.Ops[1].Qubits[1] {
+		t.Fatalf("shrunk input is not Z_t·CX·Z_t: %#v", in)
+	}
+	if d := f.Result.Distance; math.Abs(d-math.Sqrt2) > 1e-12 {
+		t.Errorf("distance %.15g, want √2 = %.15g", d, math.Sqrt2)
+	}
 }
