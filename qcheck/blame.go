@@ -62,8 +62,6 @@ func firstDifferingPrefix(cfg *config, n int, wo, gops []circuit.Op, from int) i
 		}
 		columnsTo(u, ud)
 		columnsTo(v, vd)
-		flushTiny(ud)
-		flushTiny(vd)
 		um, vm := mat.NewCDense(dim, dim, ud), mat.NewCDense(dim, dim, vd)
 		var d float64
 		if cfg.exactPhase {

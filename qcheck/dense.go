@@ -40,8 +40,6 @@ func compareDense(cfg *config, f *frame, r *Result, full bool) error {
 	if f.perm != nil {
 		v = undoPermutation(v, f.perm)
 	}
-	flushTiny(u.RawCMatrix().Data)
-	flushTiny(v.RawCMatrix().Data)
 	p := &densePair{u: u, v: v, ud: u.RawCMatrix().Data, vd: v.RawCMatrix().Data, dim: 1 << f.m, f: f, exact: cfg.exactPhase}
 
 	var iso *isometryFit
@@ -112,29 +110,6 @@ func differingWindows(want, got *circuit.Circuit) (*circuit.Circuit, *circuit.Ci
 	a, b := circuit.New(want.Qubits()), circuit.New(got.Qubits())
 	a.Ops, b.Ops = wo[pre:len(wo)-suf], gops[pre:len(gops)-suf]
 	return a, b, true
-}
-
-// tinyEntry is the size below which matrix entries are set to zero before any eigen-solver sees
-// them. Angles such as 1e-279, which rapid draws at the edges of a float range, otherwise leave
-// entries whose products underflow to subnormal numbers, on which gonum's tridiagonal QR
-// iteration (Dsterf) has been seen to loop without end. Changing entries of this size moves a
-// distance by at most 2^n·1e-30, far below any tolerance.
-const tinyEntry = 1e-30
-
-// flushTiny sets the real and imaginary parts below tinyEntry to zero.
-func flushTiny(data []complex128) {
-	for i, z := range data {
-		re, im := real(z), imag(z)
-		if math.Abs(re) < tinyEntry || math.Abs(im) < tinyEntry {
-			if math.Abs(re) < tinyEntry {
-				re = 0
-			}
-			if math.Abs(im) < tinyEntry {
-				im = 0
-			}
-			data[i] = complex(re, im)
-		}
-	}
 }
 
 // undoPermutation returns the unitary of got followed by the relabelling that puts logical qubit
