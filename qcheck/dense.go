@@ -271,7 +271,15 @@ func (p *densePair) measurement(psi []complex128) Measurement {
 	if psi == nil {
 		return best
 	}
-	a, b := apply(p.ud, p.dim, psi), apply(p.vd, p.dim, psi)
+	return outputMeasurement(psi, apply(p.ud, p.dim, psi), apply(p.vd, p.dim, psi), best, bestGap)
+}
+
+// outputMeasurement improves on best, whose outcome probabilities differ by bestGap, with the
+// measurements of a and b, the outputs of want and got on the input psi: the computational-basis
+// outcome whose probabilities differ most, or the test whether the output is want's output state
+// when that tells them apart better. When nothing tells them apart (only a global phase
+// separates the circuits), it returns a Measurement with no Input.
+func outputMeasurement(psi, a, b []complex128, best Measurement, bestGap float64) Measurement {
 	for y := range a {
 		pu, pv := abs2(a[y]), abs2(b[y])
 		if g := math.Abs(pu - pv); g > bestGap+1e-12 {
@@ -291,7 +299,6 @@ func (p *densePair) measurement(psi []complex128) Measurement {
 		best, bestGap = Measurement{Input: psi, InputBasis: -1, Want: 1, Got: proj}, 1-proj
 	}
 	if bestGap < indistinguishable {
-		// Only a global phase separates the circuits: no measurement of them alone can.
 		return Measurement{InputBasis: -1}
 	}
 	return best

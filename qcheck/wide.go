@@ -120,9 +120,8 @@ func compareMatrixFree(cfg *config, f *frame, r *Result, full bool) error {
 	return nil
 }
 
-// wideMeasurement runs both circuits on the witness and returns the computational-basis outcome
-// whose probabilities differ most, or, when the outcome probabilities agree to 1e-9, the test of
-// whether the output is want's output state.
+// wideMeasurement runs both circuits on the witness and picks the measurement of their outputs
+// that tells them apart best.
 func wideMeasurement(want, got *circuit.Circuit, psi []complex128) (Measurement, error) {
 	a := append([]complex128(nil), psi...)
 	b := append([]complex128(nil), psi...)
@@ -132,25 +131,8 @@ func wideMeasurement(want, got *circuit.Circuit, psi []complex128) (Measurement,
 	if err := sim.Apply(got, b); err != nil {
 		return Measurement{}, err
 	}
-	m := Measurement{Input: psi, InputBasis: -1, Basis: true}
-	best := -1.0
-	for x := range a {
-		pa, pb := abs2(a[x]), abs2(b[x])
-		if d := math.Abs(pa - pb); d > best {
-			best, m.Outcome, m.Want, m.Got = d, x, pa, pb
-		}
-	}
-	if best < 1e-9 {
-		var overlap complex128
-		for x := range a {
-			overlap += conj(a[x]) * b[x]
-		}
-		m.Basis, m.Outcome, m.Want, m.Got = false, 0, 1, abs2(overlap)
-	}
-	return m, nil
+	return outputMeasurement(psi, a, b, Measurement{InputBasis: -1}, -1), nil
 }
-
-func conj(z complex128) complex128 { return complex(real(z), -imag(z)) }
 
 // undoLayout returns got followed by the SWAPs that bring logical qubit i, which got leaves on
 // physical qubit perm[i], back to qubit i; got itself when perm is nil. The wide engines compare

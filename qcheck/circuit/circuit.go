@@ -4,6 +4,8 @@ import (
 	"fmt"
 	"math"
 	"slices"
+	"strconv"
+	"strings"
 )
 
 // Op is one operation of a circuit: a gate and the qubits it acts on, in the gate's operand order.
@@ -32,23 +34,22 @@ func (o Op) Equal(p Op) bool {
 // String writes the op as in a gate list: "cx q0,q1", "rz(π/4) q2", "measure q0 -> c0".
 func (o Op) String() string {
 	s := o.Gate.String()
-	for i, q := range o.Qubits {
-		if i == 0 {
-			s += " "
-		} else {
-			s += ","
-		}
-		s += fmt.Sprintf("q%d", q)
+	if len(o.Qubits) > 0 {
+		s += bitList(" ", "q", o.Qubits)
 	}
-	for i, b := range o.Clbits {
-		if i == 0 {
-			s += " -> "
-		} else {
-			s += ","
-		}
-		s += fmt.Sprintf("c%d", b)
+	if len(o.Clbits) > 0 {
+		s += bitList(" -> ", "c", o.Clbits)
 	}
 	return s
+}
+
+// bitList writes bits as prefix followed by "q0,q2" (with the given letter).
+func bitList(prefix, letter string, bits []int) string {
+	parts := make([]string, len(bits))
+	for i, b := range bits {
+		parts[i] = letter + strconv.Itoa(b)
+	}
+	return prefix + strings.Join(parts, ",")
 }
 
 // Circuit is a register of qubits and the ops that act on it, first op first. Passes may read and

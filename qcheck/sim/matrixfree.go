@@ -223,9 +223,14 @@ func (wc *witnessCheck) measure(psi []complex128) float64 {
 	if wc.u.Apply(a) != nil || wc.v.Apply(b) != nil {
 		return 0
 	}
-	z := dot(b, a)
+	return alignedGap(a, b)
+}
+
+// alignedGap returns min over φ of ‖a − e^{iφ}b‖, attained at the phase of ⟨b|a⟩; it
+// overwrites a.
+func alignedGap(a, b []complex128) float64 {
 	rot := complex(1, 0)
-	if cmplx.Abs(z) > 0 {
+	if z := dot(b, a); cmplx.Abs(z) > 0 {
 		rot = z / complex(cmplx.Abs(z), 0)
 	}
 	axpy(-rot, b, a)
@@ -445,13 +450,7 @@ func (a *arnoldi) predictedDeviation(y []complex128) float64 {
 	if ny == 0 {
 		return 0
 	}
-	c := dot(yy, z)
-	rot := complex(1, 0)
-	if cmplx.Abs(c) > 0 {
-		rot = c / complex(cmplx.Abs(c), 0)
-	}
-	axpy(-rot, yy, z)
-	return norm(z) / ny
+	return alignedGap(z, yy) / ny
 }
 
 // lift returns Q y.
