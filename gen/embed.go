@@ -37,7 +37,7 @@ func Embed(c *circuit.Circuit, width int) *rapid.Generator[Embedding] {
 	small := c.Clone()
 	return rapid.Map(Layout(width), func(layout []int) Embedding {
 		e := Embedding{Circuit: circuit.New(width), Qubits: layout[:small.Qubits()]}
-		e.Circuit.SetClbits(small.Clbits())
+		e.Circuit.SetBits(small.Bits())
 		for _, op := range small.Ops {
 			op = op.Clone()
 			for k, q := range op.Qubits {

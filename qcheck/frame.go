@@ -208,7 +208,7 @@ func relabel(c *circuit.Circuit, to []int, m int) *circuit.Circuit {
 		for k, q := range op.Qubits {
 			qs[k] = to[q]
 		}
-		d.Ops[i] = circuit.Op{Gate: op.Gate, Qubits: qs, Clbits: op.Clbits}
+		d.Ops[i] = circuit.Op{Gate: op.Gate, Qubits: qs, Bits: op.Bits}
 	}
 	return d
 }

@@ -126,7 +126,7 @@ func pieceUnitary(w Window, side string, c *circuit.Circuit, k int) (*mat.CDense
 		return nil, fmt.Errorf("qcheck: ledger: rewrite at %s: %s: %w", w, side, err)
 	}
 	for i, op := range c.Ops {
-		if !op.Gate.Unitary() && op.Gate.Name != "barrier" {
+		if !op.Unitary() && op.Gate.Name != "barrier" {
 			return nil, fmt.Errorf("qcheck: ledger: rewrite at %s: %s op %d (%s) is not unitary; the linear error bound holds only for unitary pieces", w, side, i, op)
 		}
 	}

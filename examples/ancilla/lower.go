@@ -30,7 +30,7 @@ func (l Lowering) Apply(c *circuit.Circuit) (*circuit.Circuit, error) {
 		return nil, fmt.Errorf("ancilla: %w", err)
 	}
 	n := c.Qubits()
-	out := circuit.New(n + l.Ancillas).SetClbits(c.Clbits())
+	out := circuit.New(n + l.Ancillas).SetBits(c.Bits())
 	for i, op := range c.Ops {
 		k := controlsOf(op)
 		if k == 0 {

@@ -71,7 +71,7 @@ func sameOperands(a, b circuit.Op) bool {
 // qubits: h·h, cx·cx, s·sdg, sx·sxdg, rz(θ)·rz(−θ), u·u†, and a custom gate followed by its
 // conjugate transpose.
 func CancelPair(first, second circuit.Op) ([]circuit.Op, bool) {
-	if !first.Gate.Unitary() || !second.Gate.Unitary() || !sameOperands(first, second) {
+	if !first.Unitary() || !second.Unitary() || !sameOperands(first, second) {
 		return nil, false
 	}
 	if first.Gate.Inverse().Equal(second.Gate) {

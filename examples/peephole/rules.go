@@ -47,7 +47,7 @@ func (r Rules) Apply(c *circuit.Circuit) (*circuit.Circuit, error) {
 			break
 		}
 	}
-	out := circuit.New(c.Qubits()).SetClbits(c.Clbits())
+	out := circuit.New(c.Qubits()).SetBits(c.Bits())
 	out.Ops = ops
 	return out, nil
 }
@@ -57,7 +57,7 @@ func (r Rules) sweep(ops []circuit.Op) ([]circuit.Op, bool, error) {
 	dead := make([]bool, len(ops))
 	changed := false
 	for i := range ops {
-		if dead[i] || !ops[i].Gate.Unitary() {
+		if dead[i] || !ops[i].Unitary() {
 			continue
 		}
 		j := r.partner(ops, dead, i)
@@ -100,12 +100,12 @@ func (r Rules) partner(ops []circuit.Op, dead []bool, i int) int {
 		if dead[j] || !overlaps(a, b) {
 			continue
 		}
-		if b.Gate.Unitary() && sameSet(a.Qubits, b.Qubits) {
+		if b.Unitary() && sameSet(a.Qubits, b.Qubits) {
 			if _, ok := r.Merge(a, b); ok {
 				return j
 			}
 		}
-		if !b.Gate.Unitary() || !r.Commutes(a, b) {
+		if !b.Unitary() || !r.Commutes(a, b) {
 			return -1
 		}
 	}

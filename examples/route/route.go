@@ -40,7 +40,7 @@ func Route(c *circuit.Circuit, g *Coupling) (*circuit.Circuit, []int, error) {
 		logi[p], logi[q] = lq, lp
 		phys[lp], phys[lq] = q, p
 	}
-	out := circuit.New(n).SetClbits(c.Clbits())
+	out := circuit.New(n).SetBits(c.Bits())
 	for i, op := range c.Ops {
 		if op.Gate.Name != "barrier" && len(op.Qubits) > 2 {
 			return nil, nil, &circuit.OpError{Index: i, Gate: op.Gate.Name,

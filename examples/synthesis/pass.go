@@ -99,7 +99,7 @@ func (p Pass) Run(c *circuit.Circuit, rec qcheck.Recorder) (*circuit.Circuit, er
 		total += len(r.w)
 	}
 	out := circuit.New(c.Qubits())
-	out.SetClbits(c.Clbits())
+	out.SetBits(c.Bits())
 	out.Ops = make([]circuit.Op, 0, total)
 	rewrites := make([]qcheck.Rewrite, len(todo))
 	k := 0

@@ -128,9 +128,9 @@ func (c *Circuit) Barrier(qubits ...int) *Circuit {
 
 // Measure adds a measurement of q in the computational basis into classical bit b.
 func (c *Circuit) Measure(q, b int) *Circuit {
-	c.Ops = append(c.Ops, Op{Gate: Gate{Name: "measure"}, Qubits: []int{q}, Clbits: []int{b}})
-	if b >= c.clbits {
-		c.clbits = b + 1
+	c.Ops = append(c.Ops, Op{Gate: Gate{Name: "measure"}, Qubits: []int{q}, Bits: []int{b}})
+	if b >= c.bits {
+		c.bits = b + 1
 	}
 	return c
 }

@@ -9,36 +9,83 @@ import (
 )
 
 // Op is one operation of a circuit: a gate and the qubits it acts on, in the gate's operand order.
-// Clbits is used only by measure, which records the classical bit it writes.
+// Bits is used only by measure, which records the classical bit it writes. If, when not nil, makes
+// the op classically controlled: it takes effect only when its Condition holds at that point of
+// the program.
 type Op struct {
 	Gate   Gate
 	Qubits []int
-	Clbits []int
+	Bits   []int
+	If     *Condition
 }
+
+// Condition is a test on classical bits, as OpenQASM's if statement makes: the bits, read as an
+// unsigned integer with Bits[0] least significant, equal Value (or, with Not, differ from it).
+// Not expresses an else branch.
+type Condition struct {
+	Bits  []int
+	Value uint64
+	Not   bool
+}
+
+// Holds reports whether the condition is true of the classical bits, given as a function from a
+// bit's index to its value.
+func (c *Condition) Holds(bit func(int) bool) bool {
+	var v uint64
+	for i, b := range c.Bits {
+		if bit(b) {
+			v |= 1 << i
+		}
+	}
+	return (v == c.Value) != c.Not
+}
+
+// Unitary reports whether the op acts by a unitary matrix on its qubits: a unitary gate that no
+// classical condition controls.
+func (o Op) Unitary() bool { return o.If == nil && o.Gate.Unitary() }
 
 // Clone returns a deep copy of the op.
 func (o Op) Clone() Op {
 	o.Gate = o.Gate.Clone()
 	o.Qubits = append([]int(nil), o.Qubits...)
-	if o.Clbits != nil {
-		o.Clbits = append([]int(nil), o.Clbits...)
+	if o.Bits != nil {
+		o.Bits = append([]int(nil), o.Bits...)
+	}
+	if o.If != nil {
+		c := *o.If
+		c.Bits = append([]int(nil), c.Bits...)
+		o.If = &c
 	}
 	return o
 }
 
 // Equal reports whether two ops are the same gate on the same qubits and bits.
 func (o Op) Equal(p Op) bool {
-	return o.Gate.Equal(p.Gate) && slices.Equal(o.Qubits, p.Qubits) && slices.Equal(o.Clbits, p.Clbits)
+	if (o.If == nil) != (p.If == nil) {
+		return false
+	}
+	if o.If != nil && (o.If.Value != p.If.Value || o.If.Not != p.If.Not || !slices.Equal(o.If.Bits, p.If.Bits)) {
+		return false
+	}
+	return o.Gate.Equal(p.Gate) && slices.Equal(o.Qubits, p.Qubits) && slices.Equal(o.Bits, p.Bits)
 }
 
-// String writes the op as in a gate list: "cx q0,q1", "rz(π/4) q2", "measure q0 -> c0".
+// String writes the op as in a gate list: "cx q0,q1", "rz(π/4) q2", "measure q0 -> c0",
+// "if c0,c1==2: x q0".
 func (o Op) String() string {
 	s := o.Gate.String()
+	if o.If != nil {
+		cmp := "=="
+		if o.If.Not {
+			cmp = "!="
+		}
+		s = "if" + bitList(" ", "c", o.If.Bits) + cmp + strconv.FormatUint(o.If.Value, 10) + ": " + s
+	}
 	if len(o.Qubits) > 0 {
 		s += bitList(" ", "q", o.Qubits)
 	}
-	if len(o.Clbits) > 0 {
-		s += bitList(" -> ", "c", o.Clbits)
+	if len(o.Bits) > 0 {
+		s += bitList(" -> ", "c", o.Bits)
 	}
 	return s
 }
@@ -56,7 +103,7 @@ func bitList(prefix, letter string, bits []int) string {
 // rewrite Ops directly; Validate tells whether the result is well formed.
 type Circuit struct {
 	qubits int
-	clbits int
+	bits   int
 	// Ops are the circuit's operations in the order they are applied.
 	Ops []Op
 }
@@ -68,14 +115,14 @@ func New(qubits int) *Circuit { return &Circuit{qubits: qubits} }
 // Qubits returns the width of the circuit's register.
 func (c *Circuit) Qubits() int { return c.qubits }
 
-// Clbits returns the number of classical bits: one more than the highest bit a measure writes, or
-// the number set by SetClbits, whichever is larger.
-func (c *Circuit) Clbits() int { return c.clbits }
+// Bits returns the number of classical bits: one more than the highest bit a measure writes or a
+// condition reads, or the number set by SetBits, whichever is larger.
+func (c *Circuit) Bits() int { return c.bits }
 
-// SetClbits declares the size of the classical register.
-func (c *Circuit) SetClbits(n int) *Circuit {
-	if n > c.clbits {
-		c.clbits = n
+// SetBits declares the size of the classical register.
+func (c *Circuit) SetBits(n int) *Circuit {
+	if n > c.bits {
+		c.bits = n
 	}
 	return c
 }
@@ -93,9 +140,16 @@ func (c *Circuit) Append(g Gate, qubits ...int) *Circuit {
 // AppendOp adds a copy of op.
 func (c *Circuit) AppendOp(op Op) *Circuit {
 	op = op.Clone()
-	for _, b := range op.Clbits {
-		if b >= c.clbits {
-			c.clbits = b + 1
+	for _, b := range op.Bits {
+		if b >= c.bits {
+			c.bits = b + 1
+		}
+	}
+	if op.If != nil {
+		for _, b := range op.If.Bits {
+			if b >= c.bits {
+				c.bits = b + 1
+			}
 		}
 	}
 	c.Ops = append(c.Ops, op)
@@ -108,13 +162,13 @@ func (c *Circuit) Compose(d *Circuit) *Circuit {
 	for _, op := range d.Ops {
 		c.AppendOp(op)
 	}
-	c.SetClbits(d.clbits)
+	c.SetBits(d.bits)
 	return c
 }
 
 // Clone returns a deep copy of the circuit.
 func (c *Circuit) Clone() *Circuit {
-	d := &Circuit{qubits: c.qubits, clbits: c.clbits, Ops: make([]Op, len(c.Ops))}
+	d := &Circuit{qubits: c.qubits, bits: c.bits, Ops: make([]Op, len(c.Ops))}
 	for i, op := range c.Ops {
 		d.Ops[i] = op.Clone()
 	}
@@ -135,13 +189,14 @@ func (c *Circuit) Equal(d *Circuit) bool {
 }
 
 // Inverse returns the circuit that undoes c: the ops in reverse order, each replaced by its exact
-// inverse. Barriers are kept in place; a circuit with measure or reset has no inverse and those
-// ops are kept as they are, so Validate still accepts it but unitary engines refuse it.
+// inverse. Barriers are kept in place; a circuit with measure, reset or classically controlled ops
+// has no inverse and those ops are kept as they are, so Validate still accepts it but unitary
+// engines refuse it.
 func (c *Circuit) Inverse() *Circuit {
-	d := &Circuit{qubits: c.qubits, clbits: c.clbits, Ops: make([]Op, 0, len(c.Ops))}
+	d := &Circuit{qubits: c.qubits, bits: c.bits, Ops: make([]Op, 0, len(c.Ops))}
 	for i := len(c.Ops) - 1; i >= 0; i-- {
 		op := c.Ops[i].Clone()
-		if op.Gate.Unitary() {
+		if op.Unitary() {
 			op.Gate = op.Gate.Inverse()
 		}
 		d.Ops = append(d.Ops, op)
@@ -149,11 +204,11 @@ func (c *Circuit) Inverse() *Circuit {
 	return d
 }
 
-// Unitary reports whether every op is a unitary gate or a barrier, so that the circuit has a
-// unitary matrix.
+// Unitary reports whether every op is a unitary gate without a classical condition, or a barrier,
+// so that the circuit has a unitary matrix.
 func (c *Circuit) Unitary() bool {
 	for _, op := range c.Ops {
-		if !op.Gate.Unitary() && op.Gate.Name != "barrier" {
+		if !op.Unitary() && op.Gate.Name != "barrier" {
 			return false
 		}
 	}
@@ -241,14 +296,34 @@ func (c *Circuit) validateOp(op Op) string {
 		}
 	}
 	switch {
-	case g.Name == "measure" && len(op.Clbits) != 1:
-		return fmt.Sprintf("measure writes one classical bit, got %d", len(op.Clbits))
-	case g.Name != "measure" && len(op.Clbits) != 0:
+	case g.Name == "measure" && len(op.Bits) != 1:
+		return fmt.Sprintf("measure writes one classical bit, got %d", len(op.Bits))
+	case g.Name != "measure" && len(op.Bits) != 0:
 		return "only measure writes classical bits"
 	}
-	for _, b := range op.Clbits {
+	for _, b := range op.Bits {
 		if b < 0 {
 			return fmt.Sprintf("classical bit %d out of range", b)
+		}
+	}
+	if cond := op.If; cond != nil {
+		switch {
+		case g.Name == "barrier":
+			return "a barrier cannot be classically controlled"
+		case len(cond.Bits) == 0:
+			return "condition reads no classical bits"
+		case len(cond.Bits) > 64:
+			return fmt.Sprintf("condition reads %d classical bits, more than 64", len(cond.Bits))
+		case len(cond.Bits) < 64 && cond.Value>>len(cond.Bits) != 0:
+			return fmt.Sprintf("condition compares %d bit(s) with %d, which they cannot hold", len(cond.Bits), cond.Value)
+		}
+		for k, b := range cond.Bits {
+			if b < 0 {
+				return fmt.Sprintf("condition reads classical bit %d, out of range", b)
+			}
+			if slices.Contains(cond.Bits[:k], b) {
+				return fmt.Sprintf("condition reads classical bit %d twice", b)
+			}
 		}
 	}
 	return ""

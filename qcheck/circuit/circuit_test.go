@@ -65,15 +65,15 @@ func TestValidateNamesTheOp(t *testing.T) {
 func TestCloneIsDeep(t *testing.T) {
 	c := New(2).RZ(0.5, 0).CX(0, 1).Measure(1, 0)
 	d := c.Clone()
-	if !d.Equal(c) || d.Qubits() != 2 || d.Clbits() != 1 {
+	if !d.Equal(c) || d.Qubits() != 2 || d.Bits() != 1 {
 		t.Fatalf("clone differs from the original:\n%v\n%v", c, d)
 	}
 	d.Ops[0].Gate.Params[0] = 9
 	d.Ops[1].Qubits[0] = 1
 	d.Ops[1].Qubits[1] = 0
-	d.Ops[2].Clbits[0] = 5
+	d.Ops[2].Bits[0] = 5
 	d.Ops = append(d.Ops[:1], d.Ops[2:]...)
-	if c.Ops[0].Gate.Params[0] != 0.5 || c.Ops[1].Qubits[0] != 0 || c.Ops[1].Qubits[1] != 1 || c.Ops[2].Clbits[0] != 0 || len(c.Ops) != 3 {
+	if c.Ops[0].Gate.Params[0] != 0.5 || c.Ops[1].Qubits[0] != 0 || c.Ops[1].Qubits[1] != 1 || c.Ops[2].Bits[0] != 0 || len(c.Ops) != 3 {
 		t.Errorf("changing the clone changed the original: %v", c.Ops)
 	}
 	// Append copies its operands and the gate's angles too.

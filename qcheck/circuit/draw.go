@@ -145,7 +145,7 @@ func opLabels(op Op) []string {
 	case "cswap":
 		out[0], out[1], out[2] = "●", "×", "×"
 	case "measure":
-		out[0] = fmt.Sprintf("M→c%d", op.Clbits[0])
+		out[0] = fmt.Sprintf("M→c%d", op.Bits[0])
 	case "reset":
 		out[0] = "|0⟩"
 	case "barrier":

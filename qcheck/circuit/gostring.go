@@ -18,6 +18,10 @@ func (c *Circuit) GoString() string {
 	fmt.Fprintf(&b, "circuit.New(%d)", c.qubits)
 	for _, op := range c.Ops {
 		g := op.Gate
+		if op.If != nil {
+			fmt.Fprintf(&b, ".AppendOp(%#v)", op)
+			continue
+		}
 		if g.IsCustom() {
 			fmt.Fprintf(&b, ".Append(/* custom gate %q */, %s)", g.Name, joinInts(op.Qubits))
 			continue
@@ -29,7 +33,7 @@ func (c *Circuit) GoString() string {
 		for _, q := range op.Qubits {
 			args = append(args, strconv.Itoa(q))
 		}
-		for _, cb := range op.Clbits {
+		for _, cb := range op.Bits {
 			args = append(args, strconv.Itoa(cb))
 		}
 		fmt.Fprintf(&b, ".%s(%s)", builderName(g.Name), strings.Join(args, ", "))

@@ -51,7 +51,7 @@
 // # Entry points
 //
 // Parse returns the circuit; ParseProgram also returns the registers (Program.Qregs and Cregs,
-// each with the flat index of its element 0, and the lookups Program.Qubit and Program.Clbit) and
+// each with the flat index of its element 0, and the lookups Program.Qubit and Program.Bit) and
 // the source line of every op (Program.Lines), so that a report about op k can point into the
 // file. Options: DropBarriers, and MaxOps, which bounds how many ops a source may expand to
 // (DefaultMaxOps; gate definitions can double the count at each level of nesting). Each gate

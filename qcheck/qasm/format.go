@@ -28,10 +28,10 @@ func Format(c *circuit.Circuit) ([]byte, error) {
 	if c.Qubits() > 0 {
 		q = []Register{{Name: "q", Size: c.Qubits()}}
 	}
-	// Ops may be set directly, so a measure can write past Clbits(); size c to hold every bit.
-	nc := c.Clbits()
+	// Ops may be set directly, so a measure can write past Bits(); size c to hold every bit.
+	nc := c.Bits()
 	for _, op := range c.Ops {
-		for _, b := range op.Clbits {
+		for _, b := range op.Bits {
 			nc = max(nc, b+1)
 		}
 	}
@@ -86,12 +86,12 @@ func write(c *circuit.Circuit, qregs, cregs []Register) ([]byte, error) {
 	for _, r := range cregs {
 		nc = max(nc, r.Start+r.Size)
 	}
-	cn, err := flat(cregs, max(nc, c.Clbits()), "classical bit")
+	cn, err := flat(cregs, max(nc, c.Bits()), "classical bit")
 	if err != nil {
 		return nil, err
 	}
 	for i, op := range c.Ops {
-		for _, b := range op.Clbits {
+		for _, b := range op.Bits {
 			if b >= len(cn) {
 				return nil, fmt.Errorf("qasm: op %d (%s) writes classical bit %d, outside the classical registers", i, op.Gate.Name, b)
 			}
@@ -164,7 +164,7 @@ func write(c *circuit.Circuit, qregs, cregs []Register) ([]byte, error) {
 		}
 		if op.Gate.Name == "measure" {
 			b.WriteString(" -> ")
-			b.WriteString(cn[op.Clbits[0]])
+			b.WriteString(cn[op.Bits[0]])
 		}
 		b.WriteString(";\n")
 	}

@@ -47,7 +47,7 @@ func ParseProgram(src []byte, opts ...Option) (*Program, error) {
 	}
 	c := circuit.New(p.nq)
 	c.Ops = p.ops
-	c.SetClbits(p.nc)
+	c.SetBits(p.nc)
 	prog := &Program{Circuit: c, Lines: make([]int, len(p.offs))}
 	for _, r := range p.order {
 		reg := Register{Name: r.name, Size: r.size, Start: r.start}
@@ -445,7 +445,7 @@ func (p *parser) measure() error {
 		n = q.reg.size
 	}
 	for i := 0; i < n; i++ {
-		if err := p.add(circuit.Op{Gate: circuit.Gate{Name: "measure"}, Qubits: []int{q.at(i)}, Clbits: []int{b.at(i)}}); err != nil {
+		if err := p.add(circuit.Op{Gate: circuit.Gate{Name: "measure"}, Qubits: []int{q.at(i)}, Bits: []int{b.at(i)}}); err != nil {
 			return err
 		}
 	}

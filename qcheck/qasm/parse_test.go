@@ -125,11 +125,11 @@ func TestProgramRegisters(t *testing.T) {
 	if _, ok := p.Qubit("b", 3); ok {
 		t.Error("Qubit(b, 3) exists; b has 3 qubits")
 	}
-	if b, ok := p.Clbit("n", 1); !ok || b != 2 {
-		t.Errorf("Clbit(n, 1) = %d, %v; want 2, true", b, ok)
+	if b, ok := p.Bit("n", 1); !ok || b != 2 {
+		t.Errorf("Bit(n, 1) = %d, %v; want 2, true", b, ok)
 	}
-	if p.Circuit.Qubits() != 5 || p.Circuit.Clbits() != 3 {
-		t.Errorf("circuit is %d qubits, %d bits; want 5, 3", p.Circuit.Qubits(), p.Circuit.Clbits())
+	if p.Circuit.Qubits() != 5 || p.Circuit.Bits() != 3 {
+		t.Errorf("circuit is %d qubits, %d bits; want 5, 3", p.Circuit.Qubits(), p.Circuit.Bits())
 	}
 	if !p.Circuit.Equal(circuit.New(5).X(4).Measure(4, 2)) {
 		t.Errorf("ops %v", p.Circuit.Ops)

@@ -25,8 +25,8 @@ type Register struct {
 // Qubit returns the circuit's qubit for reg[i], and false when there is no such qubit.
 func (p *Program) Qubit(reg string, i int) (int, bool) { return find(p.Qregs, reg, i) }
 
-// Clbit returns the circuit's classical bit for reg[i], and false when there is no such bit.
-func (p *Program) Clbit(reg string, i int) (int, bool) { return find(p.Cregs, reg, i) }
+// Bit returns the circuit's classical bit for reg[i], and false when there is no such bit.
+func (p *Program) Bit(reg string, i int) (int, bool) { return find(p.Cregs, reg, i) }
 
 func find(regs []Register, name string, i int) (int, bool) {
 	for _, r := range regs {

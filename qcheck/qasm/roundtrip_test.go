@@ -70,7 +70,7 @@ func roundTrip(t interface{ Fatalf(string, ...any) }, c *circuit.Circuit) {
 	if err != nil {
 		t.Fatalf("Parse: %v\n%s", err, src)
 	}
-	if !back.Equal(c) || back.Clbits() != c.Clbits() {
+	if !back.Equal(c) || back.Bits() != c.Bits() {
 		t.Fatalf("round trip changed the circuit\nbefore: %v\nwrote:\n%s\nread back: %v", c.Ops, src, back.Ops)
 	}
 }
@@ -222,11 +222,11 @@ func TestFormatRoundTripGen(t *testing.T) {
 	})
 }
 
-// A measure set into Ops directly may write past Clbits(); Format sizes the classical register to
+// A measure set into Ops directly may write past Bits(); Format sizes the classical register to
 // hold it, and FormatProgram refuses a bit outside the registers it is given.
 func TestFormatClassicalBits(t *testing.T) {
 	c := circuit.New(1)
-	c.Ops = append(c.Ops, circuit.Op{Gate: circuit.Gate{Name: "measure"}, Qubits: []int{0}, Clbits: []int{3}})
+	c.Ops = append(c.Ops, circuit.Op{Gate: circuit.Gate{Name: "measure"}, Qubits: []int{0}, Bits: []int{3}})
 	src, err := Format(c)
 	if err != nil || !strings.Contains(string(src), "creg c[4];\nmeasure q[0] -> c[3];") {
 		t.Errorf("Format: %v\n%s", err, src)

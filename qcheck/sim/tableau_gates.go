@@ -223,8 +223,8 @@ func (mc mapCache) lookup(i int, op circuit.Op) (*pauliMap, error) {
 	if g.Name == "barrier" {
 		return nil, nil
 	}
-	if !g.Unitary() {
-		return nil, refuse("not a unitary operation; a tableau describes unitary Clifford circuits only")
+	if !op.Unitary() {
+		return nil, refuse("not a unitary operation (a measure, a reset or a classically controlled gate); a tableau describes unitary Clifford circuits only")
 	}
 	if pm, ok := fixedMaps()[g.Name]; ok && !g.IsCustom() {
 		if pm.identity {

@@ -97,7 +97,7 @@ func checkUnitary(c *circuit.Circuit) error {
 		return err
 	}
 	for i, op := range c.Ops {
-		if !op.Gate.Unitary() && op.Gate.Name != "barrier" {
+		if !op.Unitary() && op.Gate.Name != "barrier" {
 			return &circuit.OpError{Index: i, Gate: op.Gate.Name, Err: "not a unitary operation; remove it or compare measured distributions"}
 		}
 	}
