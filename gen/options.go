@@ -60,7 +60,7 @@ func DefaultGateSet() []string {
 const (
 	defaultQubits = 3
 	defaultMaxOps = 20
-	defaultMotifs = 30
+	defaultMotifs = 85
 )
 
 // choice is one gate Circuit may draw.
@@ -80,7 +80,8 @@ type plan struct {
 	minOps, maxOps int
 	choices        []choice
 	weights        []int
-	chunkWeights   []int // single op, then each motif kind
+	chunkWeights   []int     // single op, then each motif kind
+	patterns       []pattern // the identities whose gates are all in the set
 }
 
 // diagonalGates are the standard gates whose matrices are diagonal
@@ -183,7 +184,20 @@ func (o Options) resolve() (*plan, error) {
 	case motifs > 100:
 		return nil, fmt.Errorf("gen.Options: Motifs = %d, want a percentage ≤ 100", o.Motifs)
 	}
-	p.chunkWeights = []int{4 * (100 - motifs), motifs, motifs, motifs, motifs}
+	p.patterns = p.available()
+	// Of the motifs, patterns get four tenths, sandwiches three and the
+	// other kinds one each.
+	p.chunkWeights = make([]int, chunkKinds)
+	p.chunkWeights[chunkOp] = 10 * (100 - motifs)
+	p.chunkWeights[chunkSandwich] = 3 * motifs
+	p.chunkWeights[chunkPattern] = 4 * motifs
+	p.chunkWeights[chunkSameRun] = motifs
+	p.chunkWeights[chunkCommute] = motifs
+	p.chunkWeights[chunkRepeat] = motifs
+	if len(p.patterns) == 0 {
+		p.chunkWeights[chunkSandwich] += p.chunkWeights[chunkPattern]
+		p.chunkWeights[chunkPattern] = 0
+	}
 	return p, nil
 }
 
