@@ -104,7 +104,7 @@ const maxMotif = 5
 // chunkOp keeps every later draw aligned: the motif becomes a plain op.
 func (b *building) chunk(t *rapid.T) bool {
 	n := len(b.c.Ops)
-	stop := drawBelow(t, b.maxOps-n+1) == 0
+	stop := drawBelow(t, b.stopRange(b.maxOps-n)) == 0
 	if stop && n >= b.minOps {
 		return false
 	}
@@ -154,6 +154,17 @@ func (b *building) chunk(t *rapid.T) bool {
 	}
 	b.add(ops...)
 	return true
+}
+
+// stopRange returns the range of the stop mark with room for left more ops:
+// left+1 without motifs, so that lengths are even over [MinOps, MaxOps];
+// 2·left+1 with them, which leans lengths toward MaxOps, where more
+// structure fits (a failure still shrinks to the shortest circuit).
+func (b *building) stopRange(left int) int {
+	if b.motifs {
+		return 2*left + 1
+	}
+	return left + 1
 }
 
 // again returns the sandwich's first op, choice i of the set, written again

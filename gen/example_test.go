@@ -19,12 +19,12 @@ func ExampleCircuit() {
 		fmt.Println(op)
 	}
 	// Output:
-	// h q0
-	// rz(-3π/4) q0
-	// rz(-3π/4) q0
-	// rz(-3π/4) q0
-	// rz(-3π/4) q0
-	// h q0
+	// cx q1,q2
+	// h q2
+	// h q2
+	// h q2
+	// rz(-4π) q2
+	// h q2
 }
 
 // The zero Options draw up to 20 ops on 3 qubits from DefaultGateSet.

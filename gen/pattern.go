@@ -152,6 +152,26 @@ func (b *building) drawPattern(t *rapid.T) []circuit.Op {
 		}
 		ops[i] = op
 	}
+	switch miss {
+	case missMove:
+		// An inner op of a longer pattern: moving what a matcher finds
+		// between two ops is the near miss that tests whether it checks
+		// where that op is.
+		if len(ops) >= 3 {
+			k = 1 + k%(len(ops)-2)
+		}
+	case missReverse:
+		// A multi-qubit op, whose operands have roles.
+		var multi []int
+		for i, op := range ops {
+			if len(op.Qubits) > 1 {
+				multi = append(multi, i)
+			}
+		}
+		if len(multi) > 0 {
+			k = multi[k%len(multi)]
+		}
+	}
 	switch op := &ops[k]; miss {
 	case missMove:
 		j := drawBelow(t, len(op.Qubits))
