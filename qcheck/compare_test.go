@@ -99,7 +99,7 @@ func TestBadInput(t *testing.T) {
 		{"exact phase with diamond", c2, c2, []Option{ExactPhase(), UseMeasure(Diamond)}, "ExactPhase with the diamond norm"},
 		{"measure ops without Measured", circuit.New(1).H(0).Measure(0, 0), circuit.New(1).H(0).Measure(0, 0), nil, "op 1 (measure): not a unitary"},
 		{"unknown measure", c2, c2, []Option{UseMeasure(Measure(42))}, "UseMeasure(Measure(42))"},
-		{"too wide for auto", circuit.New(25).T(0), circuit.New(25).T(0), nil, "25 qubits is too wide for every engine that handles non-Clifford circuits"},
+		{"too wide for auto", circuit.New(25).T(0), circuit.New(25).T(0), nil, "25 qubits is wider than the matrix-free engine takes automatically"},
 		{"measured at width", circuit.New(13).T(0), circuit.New(13).T(0), []Option{Measured(0)}, "13 qubits is wider than the dense engine"},
 	}
 	for _, tc := range cases {
@@ -294,8 +294,23 @@ func TestEngine(t *testing.T) {
 	if r.Engine != Dense || r.Certifies == "" {
 		t.Errorf("engine %v, certifies %q", r.Engine, r.Certifies)
 	}
-	if _, err := Compare(circuit.New(1), circuit.New(1), UseEngine(Engine(9))); err == nil {
+	if _, err := Compare(circuit.New(1), circuit.New(1), UseEngine(Engine("nine"))); err == nil {
 		t.Error("unknown engine accepted")
+	}
+	// Every engine of the table is reachable by its name, and answers a comparison it takes.
+	for _, eng := range engines {
+		var e Engine
+		if err := e.UnmarshalText([]byte(eng.name())); err != nil || e != eng.name() {
+			t.Errorf("%s: read back as %q, %v", eng.name(), e, err)
+		}
+		r := mustCompare(t, circuit.New(2).H(0).CX(0, 1), circuit.New(2).H(0).CX(0, 1), UseEngine(e))
+		if r.Engine != e || !r.Equivalent {
+			t.Errorf("%s: engine %v, equivalent %v", e, r.Engine, r.Equivalent)
+		}
+	}
+	var e Engine
+	if err := e.UnmarshalText([]byte("fast")); err == nil || !strings.Contains(err.Error(), "choose auto, dense") {
+		t.Errorf("unknown name read as %q, %v", e, err)
 	}
 }
 

@@ -11,6 +11,38 @@ import (
 	"qcheck.dev/qcheck/sim"
 )
 
+// denseAuto is the widest register Auto gives to the dense engine: two 2^12 × 2^12 unitaries take
+// 512 MiB and a few seconds.
+const denseAuto = 12
+
+// denseEngine builds both unitaries as full matrices (package sim's Unitary) and compares them
+// with package metric: every measure, exact phase, clean and dirty ancillas and measured
+// distributions, exact to floating-point rounding. Its width is limited by memory (16·4^n bytes
+// a matrix); Auto gives it registers up to denseAuto qubits.
+type denseEngine struct{}
+
+var _ engine = denseEngine{}
+
+func (denseEngine) name() Engine { return Dense }
+
+func (denseEngine) refuses(cfg *config, f *frame, auto bool) error {
+	if auto && f.m > denseAuto {
+		return fmt.Errorf("%d qubits is wider than the dense engine takes automatically (%d)", f.m, denseAuto)
+	}
+	return nil
+}
+
+func (denseEngine) certifies(cfg *config, f *frame) string {
+	if f.measured != nil {
+		return "exact unitaries; distributions from every basis input, the witness and 4 fixed random inputs, so a lower bound on the largest over all inputs"
+	}
+	return "exact: both full unitaries, to floating-point rounding"
+}
+
+func (denseEngine) compare(cfg *config, f *frame, r *Result, full bool) error {
+	return compareDense(cfg, f, r, full)
+}
+
 // densePair holds the two unitaries of a dense comparison on got's register: u of want (moved
 // onto got's register) and v of got (with its output permutation undone), both row-major
 // dim × dim.

@@ -10,8 +10,11 @@ import "qcheck.dev/qcheck/circuit"
 // significant bit). With an output permutation, outcomes are read after undoing it, so bit i is
 // logical qubit i.
 type Result struct {
-	// Equivalent reports whether Distance ≤ Tolerance.
+	// Equivalent reports whether Distance ≤ Tolerance, as the engine certifies it.
 	Equivalent bool
+	// Undecided, when not empty, says why the engine's answer settles neither way (its bounds
+	// straddle the tolerance); Equivalent is then false, meaning "not shown equivalent".
+	Undecided string
 	// Distance is the distance of the two circuits in Measure.
 	Distance float64
 	// Measure is the measure of Distance and Tolerance.

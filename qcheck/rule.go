@@ -66,8 +66,8 @@ func ruleConfig(rule Rule, opts []Option) (*config, error) {
 	if err != nil {
 		return nil, err
 	}
-	if cfg.perm != nil || len(cfg.ancillas) > 0 || cfg.measuredSet {
-		return nil, fmt.Errorf("rule checks take no OutputPermutation, Ancillas or Measured option: a rule's qubits are mapped onto random registers")
+	if err := cfg.registerFree(); err != nil {
+		return nil, err
 	}
 	return cfg, nil
 }

@@ -21,7 +21,7 @@ type compareFlags struct {
 	ancillas   string
 	dirty      bool
 	measure    string
-	engine     string
+	engine     qcheck.Engine
 }
 
 func (f *compareFlags) register(fs *flag.FlagSet) {
@@ -32,13 +32,7 @@ func (f *compareFlags) register(fs *flag.FlagSet) {
 	fs.StringVar(&f.ancillas, "ancillas", "", "qubits `Q,...` of B borrowed as ancillas (clean: start and end in |0⟩); A may omit them")
 	fs.BoolVar(&f.dirty, "dirty", false, "the -ancillas start in any state and must be restored")
 	fs.StringVar(&f.measure, "measure", "operator", "`MEASURE` that decides: operator (norm), diamond, or fidelity (average infidelity)")
-	fs.StringVar(&f.engine, "engine", "auto", "`ENGINE` that answers: auto, dense, tableau (Clifford circuits) or matrix-free (see above)")
-}
-
-// engines maps the -engine names to qcheck's engines.
-var engines = map[string]qcheck.Engine{
-	qcheck.Auto.String(): qcheck.Auto, qcheck.Dense.String(): qcheck.Dense,
-	qcheck.Tableau.String(): qcheck.Tableau, qcheck.MatrixFree.String(): qcheck.MatrixFree,
+	fs.TextVar(&f.engine, "engine", qcheck.Auto, "`ENGINE` that answers: auto, dense, tableau (Clifford circuits) or matrix-free (see above)")
 }
 
 // options turns the flags into qcheck options.
@@ -79,12 +73,8 @@ func (f *compareFlags) options() ([]qcheck.Option, error) {
 	default:
 		return nil, fmt.Errorf("-measure %q: choose operator, diamond or fidelity", f.measure)
 	}
-	e, ok := engines[f.engine]
-	if !ok {
-		return nil, fmt.Errorf("-engine %q: choose auto, dense, tableau or matrix-free", f.engine)
-	}
-	if e != qcheck.Auto {
-		opts = append(opts, qcheck.UseEngine(e))
+	if f.engine != qcheck.Auto {
+		opts = append(opts, qcheck.UseEngine(f.engine))
 	}
 	return opts, nil
 }
@@ -239,7 +229,7 @@ func resultJSON(r qcheck.Result) verdict {
 		Equivalent: r.Equivalent, Distance: r.Distance, Measure: r.Measure.String(),
 		Tolerance: r.Tolerance, ExactPhase: r.ExactPhase, Phase: r.Phase,
 		OperatorDistance: r.OperatorDistance, WitnessGap: r.WitnessGap,
-		Engine: r.Engine.String(), Certifies: r.Certifies, Witness: [][2]float64{},
+		Engine: string(r.Engine), Certifies: r.Certifies, Witness: [][2]float64{},
 	}
 	for _, a := range r.Witness {
 		v.Witness = append(v.Witness, [2]float64{real(a), imag(a)})
