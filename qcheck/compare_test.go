@@ -318,14 +318,14 @@ func TestBlamePrefix(t *testing.T) {
 	want := circuit.New(2).H(0).CX(0, 1).T(1).H(1)
 	got := circuit.New(2).H(0).CX(0, 1).Tdg(1).H(1)
 	b := mustCompare(t, want, got).Blame
-	if b.FirstDiff != 2 || b.WantOps != [2]int{2, 3} || b.GotOps != [2]int{2, 3} || b.Prefix != 3 {
+	if b.FirstDiff != 2 || b.WantOps != (circuit.Span{Start: 2, End: 3}) || b.GotOps != (circuit.Span{Start: 2, End: 3}) || b.Prefix != 3 {
 		t.Errorf("blame %+v", b)
 	}
 	// After a reordering the first prefixes already differ, though the whole would not without
 	// the final change: the prefix blame points at the first differing op, as it is defined to.
 	want = circuit.New(2).Z(0).X(1).T(1)
 	got = circuit.New(2).X(1).Z(0).Tdg(1)
-	if b := mustCompare(t, want, got).Blame; b.Prefix != 1 || b.FirstDiff != 0 || b.WantOps != [2]int{0, 3} {
+	if b := mustCompare(t, want, got).Blame; b.Prefix != 1 || b.FirstDiff != 0 || b.WantOps != (circuit.Span{Start: 0, End: 3}) {
 		t.Errorf("blame %+v", b)
 	}
 	if b := mustCompare(t, want, want).Blame; b.Found || b.FirstDiff != -1 {

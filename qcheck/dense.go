@@ -134,13 +134,12 @@ func compareDense(cfg *config, f *frame, r *Result, full bool) error {
 // on the windows is a verdict on the circuits, at the cost of the ops a pass actually changed.
 // It applies on one register without output permutation, ancillas or measurement.
 func differingWindows(want, got *circuit.Circuit) (*circuit.Circuit, *circuit.Circuit, bool) {
-	wo, gops := want.Ops, got.Ops
-	pre, suf := commonEnds(wo, gops)
+	pre, suf := circuit.CommonEnds(want, got)
 	if pre == 0 && suf == 0 {
 		return want, got, false
 	}
 	a, b := circuit.New(want.Qubits()), circuit.New(got.Qubits())
-	a.Ops, b.Ops = wo[pre:len(wo)-suf], gops[pre:len(gops)-suf]
+	a.Ops, b.Ops = want.Ops[pre:want.Len()-suf], got.Ops[pre:got.Len()-suf]
 	return a, b, true
 }
 

@@ -141,7 +141,7 @@ func (r Result) writeBlame(b *strings.Builder, wantName, gotName string) {
 	if !bl.Found || r.Want == nil || r.Got == nil {
 		return
 	}
-	w, g := r.Want.Ops[bl.WantOps[0]:bl.WantOps[1]], r.Got.Ops[bl.GotOps[0]:bl.GotOps[1]]
+	w, g := r.Want.Ops[bl.WantOps.Start:bl.WantOps.End], r.Got.Ops[bl.GotOps.Start:bl.GotOps.End]
 	b.WriteString("\nblame:\n")
 	pad := max(len(wantName), len(gotName))
 	wl := fmt.Sprintf("    %-*s ", pad+1, wantName+":")
@@ -150,8 +150,8 @@ func (r Result) writeBlame(b *strings.Builder, wantName, gotName string) {
 	fmt.Fprintf(b, "  %s has %s where %s has %s\n",
 		wantName, rangeWords(bl.WantOps, "inserted"), gotName, rangeWords(bl.GotOps, "removed"))
 	if len(w)+len(g) <= 12 {
-		b.WriteString(wrapList(wl, opList(w, bl.WantOps[0]), " · "))
-		b.WriteString(wrapList(gl, opList(g, bl.GotOps[0]), " · "))
+		b.WriteString(wrapList(wl, opList(w, bl.WantOps.Start), " · "))
+		b.WriteString(wrapList(gl, opList(g, bl.GotOps.Start), " · "))
 	}
 	if bl.Prefix > 0 {
 		k := bl.Prefix
@@ -165,14 +165,14 @@ func (r Result) writeBlame(b *strings.Builder, wantName, gotName string) {
 // "2 ops (ops 3–4)", or for an empty range "nothing (removed; at op 3)", where empty says what
 // got did there ("removed" on got's side, "inserted" on want's), so that the gap reads as a
 // deletion or an insertion at that place rather than as a position.
-func rangeWords(r [2]int, empty string) string {
-	switch r[1] - r[0] {
+func rangeWords(s circuit.Span, empty string) string {
+	switch s.Len() {
 	case 0:
-		return fmt.Sprintf("nothing (%s; at op %d)", empty, r[0])
+		return fmt.Sprintf("nothing (%s; at op %d)", empty, s.Start)
 	case 1:
-		return fmt.Sprintf("1 op (op %d)", r[0])
+		return fmt.Sprintf("1 op (%s)", s)
 	}
-	return fmt.Sprintf("%d ops (ops %d–%d)", r[1]-r[0], r[0], r[1]-1)
+	return fmt.Sprintf("%d ops (%s)", s.Len(), s)
 }
 
 // ketOrder names the qubits of a ket of n qubits, highest first: "|q2 q1 q0⟩".

@@ -91,10 +91,9 @@ type Blame struct {
 	// FirstDiff is the first op index at which want and got differ structurally (different op,
 	// or one circuit ends), or −1 when they are structurally equal.
 	FirstDiff int
-	// WantOps and GotOps are the half-open ranges of op indices that differ once the longest
-	// common prefix and suffix are removed: want.Ops[WantOps[0]:WantOps[1]] became
-	// got.Ops[GotOps[0]:GotOps[1]].
-	WantOps, GotOps [2]int
+	// WantOps and GotOps are the spans of ops that differ once the longest common start and
+	// end are removed (circuit.CommonEnds): want's ops in WantOps became got's ops in GotOps.
+	WantOps, GotOps circuit.Span
 	// Prefix, when positive, is the length of the shortest prefix of got that already differs
 	// (beyond the tolerance) from the prefix of want of the same length, so op Prefix−1 is where
 	// the meaning first changes. It is computed only when both circuits have the same length and

@@ -1,7 +1,7 @@
 // Package synthesis is an approximate synthesis pass with its error accounted for: it replaces
 // every single-qubit rotation of a circuit (rx, ry, rz, p, u) by a word over {H, S, T} and their
 // inverses, within a share of a total error budget ε, and records each replacement in a
-// qcheck.Ledger so that a test can certify the whole circuit's error without simulating it.
+// budget.Ledger so that a test can certify the whole circuit's error without simulating it.
 //
 // The method is the Solovay–Kitaev algorithm as written by Dawson & Nielsen, "The
 // Solovay–Kitaev algorithm", Quantum Inf. Comput. 6, 81–95 (2006; pages from memory):

@@ -114,7 +114,7 @@ func MatrixFreeDistance(u, v *circuit.Circuit, opts MatrixFreeOptions) (MatrixFr
 	if err != nil {
 		return MatrixFreeResult{}, err
 	}
-	pre, suf := sharedEnds(u, v)
+	pre, suf := circuit.CommonEnds(u, v)
 	middle := span(u, pre, u.Len()-suf)
 	w, err := Compile(middle.Compose(span(v, pre, v.Len()-suf).Inverse()))
 	if err != nil {
@@ -184,17 +184,6 @@ func MatrixFreeDistance(u, v *circuit.Circuit, opts MatrixFreeOptions) (MatrixFr
 		}
 	}
 	return res, nil
-}
-
-// sharedEnds returns how many ops u and v share at the start, and then at the end.
-func sharedEnds(u, v *circuit.Circuit) (pre, suf int) {
-	for pre < u.Len() && pre < v.Len() && u.Ops[pre].Equal(v.Ops[pre]) {
-		pre++
-	}
-	for suf < u.Len()-pre && suf < v.Len()-pre && u.Ops[u.Len()-1-suf].Equal(v.Ops[v.Len()-1-suf]) {
-		suf++
-	}
-	return pre, suf
 }
 
 // span returns a new circuit of c's width holding copies of c.Ops[from:to].
