@@ -88,7 +88,7 @@ func ruleProperty(cfg *config, rule Rule, pass Pass) func(*rapid.T) {
 		}
 		if !r.Equivalent {
 			t.Log(lazyResult{&r})
-			t.Fatalf("qcheck: the rule itself is wrong: %s %.4g > tolerance %g between its left and right sides (want = left, got = right)", r.Measure, r.Distance, r.Tolerance)
+			t.Fatalf("qcheck: the rule itself is wrong: %s between its left and right sides (want = left, got = right)", r.verdict())
 		}
 		if s == nil {
 			return

@@ -13,11 +13,13 @@ import (
 // left out).
 type PauliEvidence struct {
 	// Generator is X_q or Z_q; Want and Got are its images U·P·U† and V·P·V†.
-	Generator, Want, Got string
+	Generator string `json:"generator"`
+	Want      string `json:"want"`
+	Got       string `json:"got"`
 	// Anticommute reports whether the two images anticommute. Then, on any input that P leaves
 	// unchanged, measuring the observable Want gives +1 with certainty after want and with
 	// probability exactly 1/2 after got.
-	Anticommute bool
+	Anticommute bool `json:"anticommute"`
 }
 
 // tableauEngine compares how two Clifford circuits conjugate the Pauli generators X_q and Z_q

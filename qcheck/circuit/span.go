@@ -5,7 +5,8 @@ import "fmt"
 // Span is a half-open range [Start, End) of op indices in a circuit. An empty span marks a place
 // between ops: Span{5, 5} is the gap before op 5.
 type Span struct {
-	Start, End int
+	Start int `json:"start"`
+	End   int `json:"end"`
 }
 
 // Len returns the number of ops in the span.

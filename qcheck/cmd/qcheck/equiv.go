@@ -140,8 +140,10 @@ stated probability, and a pair neither bound settles is not counted as equivalen
 -exact-phase, -measured or clean -ancillas; -engine dense forces the dense engine at any width
 its memory allows (16·4^n bytes a matrix, at most 4 GiB: 14 qubits), which may take hours.
 
-With -json, one JSON object:
-  equivalent         true when distance ≤ tolerance
+With -json, one JSON object (the encoding of qcheck.Result; keys stay, text may change):
+  equivalent         true when distance ≤ tolerance, as the engine certifies it
+  undecided          present when the engine's bounds settle neither way: why (equivalent
+                     is then false, meaning not shown equivalent)
   distance           the distance in the chosen measure
   measure            "operator norm", "diamond norm" or "average infidelity" ("total variation"
                      with -measured)
@@ -154,6 +156,9 @@ With -json, one JSON object:
   witness_gap        the gap the witness shows: a certified lower bound on operator_distance
   engine             "dense", "tableau" or "matrix-free": the engine that answered
   certifies          in words, what the engine's answer guarantees
+  qubits             the width of the register that states and outcomes refer to (B's)
+  measured           with -measured, the measured qubits of B's register; outcomes are bit
+                     strings over them, the first the least significant
   measurement        omitted when the circuits are equivalent or differ only by a global phase
                      (no measurement tells them apart); else an experiment that does:
     input_basis      basis index of the input state when it is a basis state, else null
@@ -161,7 +166,24 @@ With -json, one JSON object:
                      basis; false: test whether the output is want's output state
     outcome          with basis, the outcome index whose probability differs most; else null
     want             the probability of that outcome (or of passing the test) after want
-    got              the same after got`
+    got              the same after got
+  pauli              with the tableau engine, when the circuits differ: a Pauli generator
+                     they conjugate differently
+    generator        the generator, such as "+X0" (qubits with I are left out)
+    want             its image under want, a Pauli string
+    got              its image under got
+    anticommute      whether the two images anticommute
+  blame              omitted when the op lists are equal; else the ops that explain the
+                     difference:
+    found            true
+    first_diff       the first op index at which the op lists differ
+    want_ops         {start, end}: the half-open range of A's ops that differ once the common
+                     start and end are removed
+    got_ops          the same range of B's ops
+    start            the first op of a range
+    end              one past its last op
+    prefix           the length of the shortest prefix of B that already differs from A's, or
+                     0 when not computed`
 
 func equiv(args []string, stdout, stderr io.Writer) int {
 	c := newCommand("equiv", "equiv [flags] A.qasm B.qasm", equivAbout, stdout, stderr)
@@ -177,7 +199,7 @@ func equiv(args []string, stdout, stderr io.Writer) int {
 		return c.fail("%v", err)
 	}
 	if *asJSON {
-		out, err := json.MarshalIndent(resultJSON(r), "", "  ")
+		out, err := json.MarshalIndent(r, "", "  ")
 		if err != nil {
 			return c.fail("%v", err)
 		}
@@ -194,54 +216,4 @@ func equiv(args []string, stdout, stderr io.Writer) int {
 		return exitDiffer
 	}
 	return exitOK
-}
-
-// verdict is the JSON form of a comparison.
-type verdict struct {
-	Equivalent       bool         `json:"equivalent"`
-	Distance         float64      `json:"distance"`
-	Measure          string       `json:"measure"`
-	Tolerance        float64      `json:"tolerance"`
-	ExactPhase       bool         `json:"exact_phase"`
-	Phase            float64      `json:"phase"`
-	OperatorDistance float64      `json:"operator_distance"`
-	Witness          [][2]float64 `json:"witness"`
-	WitnessGap       float64      `json:"witness_gap"`
-	Engine           string       `json:"engine"`
-	Certifies        string       `json:"certifies"`
-	Measurement      *measurement `json:"measurement,omitempty"`
-}
-
-// measurement is the JSON form of qcheck.Measurement: prepare the input (input_basis when it is
-// a basis state, else null), run, measure; basis tells a computational-basis measurement with
-// outcome seen with probability want and got, otherwise a projection onto want's output (and
-// outcome is null).
-type measurement struct {
-	InputBasis *int    `json:"input_basis"`
-	Basis      bool    `json:"basis"`
-	Outcome    *int    `json:"outcome"`
-	Want       float64 `json:"want"`
-	Got        float64 `json:"got"`
-}
-
-func resultJSON(r qcheck.Result) verdict {
-	v := verdict{
-		Equivalent: r.Equivalent, Distance: r.Distance, Measure: r.Measure.String(),
-		Tolerance: r.Tolerance, ExactPhase: r.ExactPhase, Phase: r.Phase,
-		OperatorDistance: r.OperatorDistance, WitnessGap: r.WitnessGap,
-		Engine: string(r.Engine), Certifies: r.Certifies, Witness: [][2]float64{},
-	}
-	for _, a := range r.Witness {
-		v.Witness = append(v.Witness, [2]float64{real(a), imag(a)})
-	}
-	if m := r.Measurement; m.Input != nil {
-		v.Measurement = &measurement{Basis: m.Basis, Want: m.Want, Got: m.Got}
-		if m.InputBasis >= 0 {
-			v.Measurement.InputBasis = &m.InputBasis
-		}
-		if m.Basis {
-			v.Measurement.Outcome = &m.Outcome
-		}
-	}
-	return v
 }

@@ -16,6 +16,7 @@ import (
 	"strings"
 	"testing"
 
+	"qcheck.dev/qcheck"
 	"qcheck.dev/qcheck/qasm"
 )
 
@@ -448,6 +449,32 @@ func TestHelp(t *testing.T) {
 // a line), and so are their costs (the widths at which each engine takes over, from
 // qcheck/engine.go).
 func TestHelpDescribesJSONAndCost(t *testing.T) {
+	jsonKeys := func(t *testing.T, v any, linePattern string) []string {
+		t.Helper()
+		data, err := json.Marshal(v)
+		if err != nil {
+			t.Fatal(err)
+		}
+		var out []string
+		var walk func(any)
+		walk = func(x any) {
+			if m, ok := x.(map[string]any); ok {
+				for k, y := range m {
+					out = append(out, fmt.Sprintf(linePattern, regexp.QuoteMeta(k)))
+					walk(y)
+				}
+			}
+		}
+		var top any
+		if err := json.Unmarshal(data, &top); err != nil {
+			t.Fatal(err)
+		}
+		walk(top)
+		if len(out) < 20 {
+			t.Fatalf("only %d keys in %s", len(out), data)
+		}
+		return out
+	}
 	fieldsOf := func(v any, linePattern string) []string {
 		var out []string
 		ty := reflect.TypeOf(v)
@@ -458,11 +485,18 @@ func TestHelpDescribesJSONAndCost(t *testing.T) {
 		return out
 	}
 	const listed, inline = `(?m)^ +%s[ ,]`, `[\s(]%s[\s,.)]`
+	// A result with every optional part present, so that its encoding has every key.
+	full := qcheck.Result{
+		Undecided: "bounds straddle the tolerance", Measured: []int{0},
+		Measurement: qcheck.Measurement{Input: []complex128{1, 0}, InputBasis: 0, Basis: true},
+		Pauli:       &qcheck.PauliEvidence{Generator: "+X0", Want: "+X0", Got: "+Z0"},
+		Blame:       qcheck.Blame{Found: true},
+	}
 	for _, c := range []struct {
 		cmd  string
 		want []string
 	}{
-		{"equiv", append(append(fieldsOf(verdict{}, listed), fieldsOf(measurement{}, listed)...),
+		{"equiv", append(jsonKeys(t, full, listed),
 			"else null", "up to 12 qubits", "tableau engine when both circuits are Clifford",
 			"matrix-free estimate up to 22 qubits", "-engine dense")},
 		{"measures", append(fieldsOf(allMeasures{}, inline), "wider than 10 qubits")},
