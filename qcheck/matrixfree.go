@@ -91,5 +91,5 @@ func wideMeasurement(want, got *circuit.Circuit, psi []complex128) (Measurement,
 	if err := sim.Apply(got, b); err != nil {
 		return Measurement{}, err
 	}
-	return outputMeasurement(psi, a, b, Measurement{InputBasis: -1}, -1), nil
+	return outputMeasurement(psi, a, b, newLargestGap()), nil
 }

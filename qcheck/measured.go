@@ -18,19 +18,14 @@ func (p *densePair) distributions(witness []complex128) (float64, Measurement) {
 	outcomes := 1 << len(meas)
 	pu, pv := make([]float64, outcomes), make([]float64, outcomes)
 	worst := 0.0
-	best := Measurement{InputBasis: -1}
-	bestGap := -1.0
+	gap := newLargestGap()
 	consider := func(a, b []complex128, input []complex128, basis int) {
 		marginal(a, meas, pu)
 		marginal(b, meas, pv)
 		tv := 0.0
 		for o := range pu {
-			g := math.Abs(pu[o] - pv[o])
-			tv += g
-			if g > bestGap+1e-12 {
-				bestGap = g
-				best = Measurement{Input: input, InputBasis: basis, Basis: true, Outcome: o, Want: pu[o], Got: pv[o]}
-			}
+			tv += math.Abs(pu[o] - pv[o])
+			gap.offer(input, basis, o, pu[o], pv[o])
 		}
 		worst = math.Max(worst, tv/2)
 	}
@@ -44,9 +39,7 @@ func (p *densePair) distributions(witness []complex128) (float64, Measurement) {
 		}
 		consider(a, b, nil, x)
 	}
-	if best.InputBasis >= 0 {
-		best.Input = basisState(p.dim, best.InputBasis)
-	}
+	gap.fillBasisInput(p.dim)
 	inputs := [][]complex128{witness}
 	rng := rand.New(rand.NewPCG(1, 2))
 	for k := 0; k < randomInputs; k++ {
@@ -57,7 +50,7 @@ func (p *densePair) distributions(witness []complex128) (float64, Measurement) {
 			consider(apply(p.ud, p.dim, psi), apply(p.vd, p.dim, psi), psi, -1)
 		}
 	}
-	return worst, best
+	return worst, gap.best
 }
 
 // marginal writes into probs the distribution of measuring the given qubits of state.

@@ -7,6 +7,7 @@ import (
 	"math/rand/v2"
 	"runtime"
 
+	"qcheck.dev/metric"
 	"qcheck.dev/qcheck/circuit"
 )
 
@@ -212,18 +213,7 @@ func (wc *witnessCheck) measure(psi []complex128) float64 {
 	if wc.u.Apply(a) != nil || wc.v.Apply(b) != nil {
 		return 0
 	}
-	return alignedGap(a, b)
-}
-
-// alignedGap returns min over φ of ‖a − e^{iφ}b‖, attained at the phase of ⟨b|a⟩; it
-// overwrites a.
-func alignedGap(a, b []complex128) float64 {
-	rot := complex(1, 0)
-	if z := dot(b, a); cmplx.Abs(z) > 0 {
-		rot = z / complex(cmplx.Abs(z), 0)
-	}
-	axpy(-rot, b, a)
-	return norm(a)
+	return metric.AlignedDistance(a, b)
 }
 
 // exploreInvariant is the residual below which the exploring Krylov space is taken as invariant:
@@ -439,7 +429,7 @@ func (a *arnoldi) predictedDeviation(y []complex128) float64 {
 	if ny == 0 {
 		return 0
 	}
-	return alignedGap(z, yy) / ny
+	return metric.AlignedDistance(z, yy) / ny
 }
 
 // lift returns Q y.
