@@ -22,7 +22,7 @@ func mustCompare(t *testing.T, want, got *circuit.Circuit, opts ...Option) Resul
 	return r
 }
 
-// p(θ) = e^{iθ/2}·rz(θ) (DESIGN.md, gate definitions): equal up to global phase, and
+// p(θ) = e^{iθ/2}·rz(θ) (package circuit's gate definitions): equal up to global phase, and
 // ‖p(θ) − rz(θ)‖ = |1 − e^{−iθ/2}| = 2|sin(θ/4)| with the phase fixed (derived by hand from the
 // two diagonal matrices).
 func TestGlobalPhaseOnly(t *testing.T) {
@@ -45,7 +45,7 @@ func TestGlobalPhaseOnly(t *testing.T) {
 	}
 }
 
-// Closed forms for rz(θ) against the identity (eigenvalues e^{∓iθ/2}, DESIGN.md "Mathematics"):
+// Closed forms for rz(θ) against the identity (eigenvalues e^{∓iθ/2}, package metric's documentation):
 // phase-free distance 2 sin(θ/4), diamond distance 2 sin(θ/2), average fidelity
 // (2 + 4cos²(θ/2))/6 by Nielsen's formula (d + |tr U†V|²)/(d(d+1)).
 func TestMeasuresClosedForm(t *testing.T) {

@@ -19,7 +19,7 @@ const floatSlack = 1e-12
 
 func TestRecordKnownDistances(t *testing.T) {
 	// The phase-free distance of two unitaries is 2·sin(θ/4), θ the shortest arc holding the
-	// eigenphases of V†U (DESIGN.md, "Mathematics"). rz(θ) against the identity has eigenphases
+	// eigenphases of V†U (package metric's documentation). rz(θ) against the identity has eigenphases
 	// ∓θ/2, so θ-arc = |θ| for |θ| ≤ π; t against the identity has eigenphases 0 and π/4.
 	cases := []struct {
 		name        string

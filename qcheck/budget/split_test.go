@@ -60,7 +60,7 @@ func TestWeightedSplit(t *testing.T) {
 }
 
 // recordRZ records rz(θ) on qubit q replaced by nothing: δ = 2 sin(|θ|/4) (phase-free distance of
-// rz(θ) from the identity, eigenphases ∓θ/2; DESIGN.md "Mathematics").
+// rz(θ) from the identity, eigenphases ∓θ/2; package metric's documentation).
 func recordRZ(t *testing.T, l *Ledger, op, q int, theta, share float64) {
 	t.Helper()
 	err := l.Record(Rewrite{Window: Window{Before: circuit.Span{Start: op, End: op + 1}, After: circuit.Span{Start: 0, End: 0}, Qubits: []int{q}},

@@ -219,7 +219,7 @@ func writeFiles(t *testing.T, files map[string]string) string {
 
 // The comparison flags. Expected verdicts by hand: a SWAP only relabels qubits (N&C §1.3.4), so
 // with the permutation that undoes it the circuits agree; rz and p differ by a global phase only
-// (DESIGN.md); Z before a computational-basis measurement changes no probability (N&C §2.2.5,
+// (package circuit's documentation); Z before a computational-basis measurement changes no probability (N&C §2.2.5,
 // the measurement postulate: |e^{iπ}a|² = |a|²).
 func TestEquivFlags(t *testing.T) {
 	dir := writeFiles(t, map[string]string{
@@ -281,7 +281,7 @@ func TestEquivFlags(t *testing.T) {
 // measures for CX(0,1) against CX(1,0), worked by hand: V†U is a 3-cycle on the basis states
 // 1, 2, 3 fixing 0, with eigenvalues 1, 1, ω, ω² (ω = e^{2πi/3}). So ‖U − V‖ = |ω − 1| = √3;
 // the shortest arc holding 0, 2π/3, 4π/3 is 4π/3, so the phase-free distance is 2 sin(π/3) = √3;
-// 0 lies in the convex hull of the eigenvalues, so the diamond distance is 2 (DESIGN.md formula);
+// 0 lies in the convex hull of the eigenvalues, so the diamond distance is 2 (package metric's documentation formula);
 // tr U†V = 1, so the average fidelity is (4 + 1)/(4·5) = 1/4 and the process fidelity 1/16.
 func TestMeasures(t *testing.T) {
 	a, b := pairFiles("cnot_swapped_roles")
