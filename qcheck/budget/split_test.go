@@ -95,7 +95,7 @@ func (f *fakeTB) Errorf(s string, a ...any) { f.errors = append(f.errors, fmt.Sp
 func (f *fakeTB) Fatalf(s string, a ...any) { f.fatals = append(f.fatals, fmt.Sprintf(s, a...)) }
 func (f *fakeTB) Failed() bool              { return len(f.errors)+len(f.fatals) > 0 }
 
-func TestWithinBudget(t *testing.T) {
+func TestWithin(t *testing.T) {
 	var l Ledger
 	for k := 0; k < 20; k++ {
 		recordRZ(t, &l, 3*k, k%5, 0.001*float64(k+1), 0)

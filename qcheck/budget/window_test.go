@@ -8,7 +8,7 @@ import (
 )
 
 // A two-qubit block on q0,q1 interleaved with a gate on q2 that the window lets through.
-func TestLedgerFromWindowsLetsDisjointOpsThrough(t *testing.T) {
+func TestFromWindowsLetsDisjointOpsThrough(t *testing.T) {
 	before := circuit.New(3).H(0).CX(0, 1).X(2).RZ(0.3, 1).CX(0, 1).H(2)
 	// The block cx·rz·cx on (q0, q1) is rzz(0.3) exactly (the CNOT-conjugated Z rotation for
 	// exp(−iθZ⊗Z/2), Nielsen & Chuang §4.7.3, from memory); the pass wrote it as rzz(0.31), with

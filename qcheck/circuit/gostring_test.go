@@ -17,7 +17,7 @@ import (
 // names (found by reflection) must rebuild the same circuit. The inverse of iswap used to come out
 // as .ISWAPDG(0, 1), a method that does not exist. (A round trip through the code's own text; no
 // outside source is needed.)
-func TestGoCodeCallsExistingBuilders(t *testing.T) {
+func TestGoStringCallsExistingBuilders(t *testing.T) {
 	for _, spec := range circuit.Standard() {
 		c := circuit.New(4)
 		qubits := []int{2, 0, 3}[:max(spec.Qubits, 1)]
