@@ -99,7 +99,8 @@ func TestBadInput(t *testing.T) {
 		{"exact phase with diamond", c2, c2, []Option{ExactPhase(), UseMeasure(Diamond)}, "ExactPhase with the diamond norm"},
 		{"measure ops without Measured", circuit.New(1).H(0).Measure(0, 0), circuit.New(1).H(0).Measure(0, 0), nil, "op 1 (measure): not a unitary"},
 		{"unknown measure", c2, c2, []Option{UseMeasure(Measure(42))}, "UseMeasure(Measure(42))"},
-		{"too wide for auto", circuit.New(25).T(0), circuit.New(25).T(0), nil, "25 qubits is wider than the matrix-free engine takes automatically"},
+		{"too wide for auto", circuit.New(25).T(0), circuit.New(25).T(0), nil, "25 qubits is wider than the dense engine takes automatically (12); tableau: want is not a circuit the tableau engine can answer for"},
+		{"too wide for auto, matrix-free", circuit.New(25).T(0), circuit.New(25).T(0), nil, "matrix-free: 25 qubits is wider than the matrix-free engine takes automatically (22)"},
 		{"measured at width", circuit.New(13).T(0), circuit.New(13).T(0), []Option{Measured(0)}, "13 qubits is wider than the dense engine"},
 	}
 	for _, tc := range cases {

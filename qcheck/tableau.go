@@ -35,18 +35,12 @@ func (tableauEngine) refuses(cfg *config, f *frame, auto bool) error {
 	if err := unitaryUpToPhase(cfg, f, Tableau); err != nil {
 		return err
 	}
-	if !sim.IsClifford(f.want) {
-		return fmt.Errorf("want is not a Clifford circuit, which the tableau engine needs")
-	}
-	if !sim.IsClifford(f.got) {
-		return fmt.Errorf("got is not a Clifford circuit, which the tableau engine needs")
-	}
-	b, ok := cliffordRounding(f.want, f.got)
-	if !ok {
-		return fmt.Errorf("the tableau engine cannot bound how far custom gates are from the Cliffords it computes with")
+	b, err := cliffordRounding(f.want, f.got)
+	if err != nil {
+		return err
 	}
 	if b >= cfg.tol {
-		return fmt.Errorf("the angles are off exact Clifford angles by %.3g in total, not below the tolerance %g, so the tableau's exact answer would not settle it", b, cfg.tol)
+		return fmt.Errorf("the angles are off exact Clifford angles by up to %.3g in operator norm in total, not below the tolerance %g, so the tableau's exact answer would not settle it", b, cfg.tol)
 	}
 	return nil
 }
@@ -59,26 +53,19 @@ func (tableauEngine) compare(cfg *config, f *frame, r *Result, full bool) error 
 	return compareTableau(cfg, f, r)
 }
 
-// cliffordRounding bounds how far the circuits the tableau accepts are, in operator norm, from
-// the exact Clifford circuits it computes with. The tableau accepts a gate whose angles lie within
-// sim.CliffordTolerance of Clifford ones; an angle off by δ moves its gate by at most |δ| (every
-// gate's derivative in each of its angles has norm at most 1: ½ for the rotations exp(−iθP/2),
-// 1 for p, cp and u), and such deviations add up over a circuit (Nielsen & Chuang §4.5.3). It
-// reports false for custom gates, which have no angle to measure by.
-func cliffordRounding(cs ...*circuit.Circuit) (float64, bool) {
-	const quarter = math.Pi / 2
-	b := 0.0
-	for _, c := range cs {
-		for _, op := range c.Ops {
-			if op.Gate.IsCustom() {
-				return 0, false
-			}
-			for _, p := range op.Gate.Params {
-				b += math.Abs(p - math.Round(p/quarter)*quarter)
-			}
-		}
+// cliffordRounding bounds, in operator norm, how far want and got are from the exact Clifford
+// circuits the tableau computes with (sim.CliffordDeviation), or says why the tableau cannot
+// answer for them.
+func cliffordRounding(want, got *circuit.Circuit) (float64, error) {
+	a, err := sim.CliffordDeviation(want)
+	if err != nil {
+		return 0, fmt.Errorf("want is not a circuit the tableau engine can answer for: %v", err)
 	}
-	return b, true
+	b, err := sim.CliffordDeviation(got)
+	if err != nil {
+		return 0, fmt.Errorf("got is not a circuit the tableau engine can answer for: %v", err)
+	}
+	return a + b, nil
 }
 
 // compareTableau fills r from the stabilizer tableaux of both circuits. A difference in how they
@@ -96,7 +83,10 @@ func compareTableau(cfg *config, f *frame, r *Result) error {
 	}
 	// Angles within rounding of Clifford ones move each circuit by at most rounding from the
 	// exact Clifford circuit the tableau compared (refuses keeps it below the tolerance).
-	rounding, _ := cliffordRounding(f.want, got)
+	rounding, err := cliffordRounding(f.want, got)
+	if err != nil {
+		return fmt.Errorf("qcheck: %v", err)
+	}
 	if rounding > 0 {
 		r.Certifies += fmt.Sprintf("; angles off Clifford ones by %.2g in total, which bounds the distance of equivalent circuits", rounding)
 	}
