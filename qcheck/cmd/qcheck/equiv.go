@@ -79,6 +79,29 @@ func (f *compareFlags) options() ([]qcheck.Option, error) {
 	return opts, nil
 }
 
+// flagWords rewrites package qcheck's messages, which name its Go options, in the words of this
+// command's flags, and A and B for want and got.
+var flagWords = strings.NewReplacer(
+	"Tolerance(", "-tol (",
+	"ExactPhase()", "-exact-phase",
+	"ExactPhase", "-exact-phase",
+	"OutputPermutation", "-perm",
+	"Ancillas(", "-ancillas (",
+	"with Ancillas", "with -ancillas",
+	"Measured with UseMeasure(", "-measured with -measure (",
+	"UseMeasure(", "-measure (",
+	"use OperatorNorm", "use -measure operator",
+	"Measured", "-measured",
+	"UseEngine(", "-engine (",
+	"got's", "B's",
+	"want's", "A's",
+	"want is ", "A is ",
+	"got is ", "B is ",
+	"want has ", "A has ",
+	"got has ", "B has ",
+	"want must ", "A must ",
+)
+
 // intList reads "2,0,1".
 func intList(s string) ([]int, error) {
 	var out []int
@@ -118,7 +141,7 @@ func (f *compareFlags) compareFiles(a, b string) (qcheck.Result, error) {
 	}
 	r, err := qcheck.Compare(pa.Circuit, pb.Circuit, opts...)
 	if err != nil {
-		return qcheck.Result{}, fmt.Errorf("%s vs %s: %v", a, b, err)
+		return qcheck.Result{}, fmt.Errorf("%s vs %s: %s", a, b, flagWords.Replace(err.Error()))
 	}
 	return r, nil
 }

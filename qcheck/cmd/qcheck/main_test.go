@@ -257,7 +257,7 @@ func TestEquivFlags(t *testing.T) {
 		{[]string{"equiv", "-measure", "fidelity", f("routed_want.qasm"), f("routed_got.qasm")}, exitDiffer, ""},
 		{[]string{"equiv", "-measure", "loud", f("rz.qasm"), f("p.qasm")}, exitBadUsed, "choose operator, diamond or fidelity"},
 		{[]string{"equiv", "-perm", "1,x", f("rz.qasm"), f("p.qasm")}, exitBadUsed, "-perm"},
-		{[]string{"equiv", "-perm", "0,0", f("routed_want.qasm"), f("routed_got.qasm")}, exitBadUsed, "OutputPermutation"},
+		{[]string{"equiv", "-perm", "0,0", f("routed_want.qasm"), f("routed_got.qasm")}, exitBadUsed, "-perm[1] = 0 repeats -perm[0]"},
 		{[]string{"equiv", f("rz.qasm"), f("three.qasm")}, exitBadUsed, "rz.qasm vs"},
 		{[]string{"equiv", f("bad.qasm"), f("rz.qasm")}, exitBadUsed, "bad.qasm:5:9: expected \";\""},
 		{[]string{"equiv", f("missing.qasm"), f("rz.qasm")}, exitBadUsed, "missing.qasm"},
