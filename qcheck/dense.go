@@ -280,7 +280,7 @@ func (p *densePair) measurement(psi []complex128) Measurement {
 	if psi == nil {
 		return gap.best
 	}
-	return outputMeasurement(psi, apply(p.ud, p.dim, psi), apply(p.vd, p.dim, psi), gap)
+	return outputMeasurement(psi, apply(p.ud, p.dim, psi), apply(p.vd, p.dim, psi), &gap)
 }
 
 func abs2(z complex128) float64 { return real(z)*real(z) + imag(z)*imag(z) }

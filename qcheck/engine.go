@@ -107,13 +107,13 @@ func chooseEngine(cfg *config, f *frame) (engine, error) {
 		}
 		return e, nil
 	}
-	reasons := make([]string, len(engines))
-	for i, e := range engines {
+	var reasons []string
+	for _, e := range engines {
 		err := e.refuses(cfg, f, true)
 		if err == nil {
 			return e, nil
 		}
-		reasons[i] = fmt.Sprintf("%s: %v", e.name(), err)
+		reasons = append(reasons, fmt.Sprintf("%s: %v", e.name(), err))
 	}
 	return nil, fmt.Errorf("qcheck: no engine takes this comparison of %d qubits automatically (%s)", f.m, strings.Join(reasons, "; "))
 }

@@ -91,5 +91,6 @@ func wideMeasurement(want, got *circuit.Circuit, psi []complex128) (Measurement,
 	if err := sim.Apply(got, b); err != nil {
 		return Measurement{}, err
 	}
-	return outputMeasurement(psi, a, b, newLargestGap()), nil
+	gap := newLargestGap()
+	return outputMeasurement(psi, a, b, &gap), nil
 }

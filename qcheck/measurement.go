@@ -13,7 +13,7 @@ type largestGap struct {
 	gap  float64
 }
 
-func newLargestGap() *largestGap { return &largestGap{best: Measurement{InputBasis: -1}, gap: -1} }
+func newLargestGap() largestGap { return largestGap{best: Measurement{InputBasis: -1}, gap: -1} }
 
 // offer considers measuring in the computational basis and seeing outcome, with probability pu
 // after want and pv after got, on input (or on basis state basis, with input nil until
