@@ -43,6 +43,7 @@ func compare(cfg *config, want, got *circuit.Circuit, full bool) (Result, error)
 		Options:    cfg.describe(),
 		Qubits:     f.m,
 		Measured:   f.measured,
+		Bits:       f.bits,
 	}
 	if err := eng.compare(cfg, f, &r, full); err != nil {
 		return Result{}, err

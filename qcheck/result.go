@@ -22,7 +22,10 @@ type Result struct {
 	// Undecided, when not empty, says why the engine's answer settles neither way (its bounds
 	// straddle the tolerance); Equivalent is then false, meaning "not shown equivalent".
 	Undecided string
-	// Distance is the distance of the two circuits in Measure.
+	// Distance is the distance of the two circuits in Measure. For measured distributions it
+	// is certified on the side of the verdict: an upper bound on the largest total-variation
+	// distance over all inputs when Equivalent, a distance found on an input when not (Certifies
+	// gives both bounds).
 	Distance float64
 	// Measure is the measure of Distance and Tolerance.
 	Measure Measure
@@ -67,9 +70,13 @@ type Result struct {
 	Options   string
 	// Qubits is the width of the register that states and outcomes refer to (got's).
 	Qubits int
-	// Measured lists the measured qubits of got's register with Measured, else nil; outcomes
-	// are then bit strings over these qubits only, Measured[0] as the least-significant bit.
+	// Measured lists, with Measured, the qubit of got's register (logical, after undoing an
+	// output permutation) read by each bit of an outcome, else nil; outcomes are then bit
+	// strings, bit 0 least significant. Bits lists the classical bits those outcome bits are
+	// when the circuits measure into classical bits (an entry −1 in Measured is a bit got never
+	// writes, which reads 0); nil when the outcome bits are the qubits in Measured.
 	Measured []int
+	Bits     []int
 }
 
 // Measurement is a concrete experiment that tells the two circuits apart: prepare Input, run the
@@ -130,6 +137,7 @@ type resultJSON struct {
 	Blame            *Blame         `json:"blame,omitempty"`
 	Qubits           int            `json:"qubits"`
 	Measured         []int          `json:"measured,omitempty"`
+	Bits             []int          `json:"bits,omitempty"`
 }
 
 // MarshalJSON writes the result as one JSON object; see the Result type for its keys' meaning.
@@ -141,7 +149,7 @@ func (r Result) MarshalJSON() ([]byte, error) {
 		Tolerance: r.Tolerance, ExactPhase: r.ExactPhase, Phase: r.Phase,
 		OperatorDistance: r.OperatorDistance, Witness: make([][2]float64, len(r.Witness)),
 		WitnessGap: r.WitnessGap, Engine: r.Engine, Certifies: r.Certifies, Pauli: r.Pauli,
-		Qubits: r.Qubits, Measured: r.Measured,
+		Qubits: r.Qubits, Measured: r.Measured, Bits: r.Bits,
 	}
 	for i, a := range r.Witness {
 		v.Witness[i] = [2]float64{real(a), imag(a)}
