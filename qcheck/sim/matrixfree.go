@@ -95,8 +95,9 @@ func (r MatrixFreeResult) Exact(tol float64) bool { return r.Upper-r.Lower <= to
 //     its extreme Ritz vectors the two ends of the arc, and their equal-weight sum is the witness.
 //
 // A second Krylov space from an independent random state bounds the distance from above at the
-// phase found: by Kuczyński & Woźniakowski, SIAM J. Matrix Anal. Appl. 13 (1992), Thm. 4.2 (from
-// memory), a Krylov estimate ξ of the largest eigenvalue λ of a positive semidefinite matrix of
+// phase found: by the bound of Kuczyński & Woźniakowski for the Lanczos method from a random start
+// (SIAM J. Matrix Anal. Appl., 1992; the theorem's number and constant are as this package's
+// authors read them, not re-derived here), a Krylov estimate ξ of the largest eigenvalue λ of a positive semidefinite matrix of
 // order n, from a uniformly random start, satisfies ξ ≤ (1 − ε)λ with probability at most
 // 1.648·√n·e^{−√ε(2k−1)} after k steps. It is applied to (e^{−iφ}W − I)†(e^{−iφ}W − I), of order
 // 2·2^n as a real matrix, with k = ⌊(steps − 1)/2⌋ + 1 (the span of m powers of a unitary W holds,
