@@ -456,7 +456,7 @@ func TestHelp(t *testing.T) {
 
 // Every JSON field that equiv and measures write is described in their -h (equiv lists one field
 // a line), and so are their costs (the widths at which each engine takes over, from
-// qcheck/engine.go).
+// denseAuto in qcheck/dense.go and matrixFreeAuto in qcheck/matrixfree.go).
 func TestHelpDescribesJSONAndCost(t *testing.T) {
 	jsonKeys := func(t *testing.T, v any, linePattern string) []string {
 		t.Helper()
