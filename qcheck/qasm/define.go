@@ -29,7 +29,7 @@ func (p *parser) gateDecl() error {
 	if old, ok := p.gates[string(name.text)]; ok && old.user {
 		return p.errorf(name.off, "gate %s is already defined", name.text)
 	}
-	def := &gateDef{name: string(name.text), user: true}
+	def := &gateDef{name: string(name.text), user: true, work: 1}
 	var params []string
 	if p.tok.is("(") {
 		if err := p.advance(); err != nil {
@@ -64,9 +64,14 @@ func (p *parser) gateDecl() error {
 		switch {
 		case b.def != nil:
 			def.ops = addCount(def.ops, b.def.size())
+			def.work = addCount(def.work, b.def.cost())
+			for _, a := range b.args {
+				def.work = addCount(def.work, a.cost())
+			}
 		case !p.cfg.dropBarriers:
 			def.ops = addCount(def.ops, 1)
 		}
+		def.work = addCount(def.work, 1)
 	}
 	end := p.tok.off + 1
 	if err := p.advance(); err != nil {
@@ -140,7 +145,10 @@ func (p *parser) bodyStatement(gate string, params, qubits []string) (bodyCall, 
 		if len(args) != def.nparams {
 			return b, p.errorf(t.off, "gate %s takes %d angle(s), got %d", t.text, def.nparams, len(args))
 		}
-		b.def, b.args, b.at, want = def, args, at, def.nqubits
+		b.def, b.at, want = def, at, def.nqubits
+		for _, a := range args {
+			b.args = append(b.args, compile(a))
+		}
 	}
 	for {
 		q, err := p.ident("a qubit argument of " + gate)

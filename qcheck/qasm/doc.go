@@ -16,7 +16,11 @@
 // must be finite, even one the gate ignores, and an angle computed in the body of the source's
 // own gate is reported at its expression in the body, with the line and column of the call.
 //
-// opaque, if, block comments, other includes and anything else the grammar does not have are
+// if(creg==n) op; applies to a gate call, measure or reset: every op it makes carries a
+// circuit.Condition whose Bits are the register's bits (element 0 first, least significant) and
+// whose Value is n; registers of more than 64 bits cannot be compared.
+//
+// opaque, block comments, other includes and anything else the grammar does not have are
 // errors naming the construct at its line and column. Every error is an *Error. A source may
 // redefine a qelib1 gate (their libraries differ between toolchains); the definition then
 // applies to later calls. It may not redefine U, CX or its own gates.
@@ -56,7 +60,11 @@
 // file. Options: DropBarriers, and MaxOps, which bounds how many ops a source may expand to
 // (DefaultMaxOps; gate definitions can double the count at each level of nesting). Each gate
 // definition's expanded size is counted when it is read, so a call that would pass the limit is
-// refused at its line and column before it is expanded. Qelib1 lists the gate names the include
+// refused at its line and column before it is expanded. MaxOps also bounds the operands of all
+// ops (4 × MaxOps: a barrier over a wide register is as long as the register) and the work of
+// expanding gate calls (8 × MaxOps steps, counting calls, barriers and the arithmetic of angle
+// expressions in bodies, so that empty bodies are not free); each definition's angle
+// expressions are compiled once, when it is read. Qelib1 lists the gate names the include
 // provides.
 //
 // # Writing

@@ -58,8 +58,8 @@ func ExampleFormat() {
 }
 
 func ExampleParse_error() {
-	_, err := qasm.Parse([]byte("OPENQASM 2.0;\ninclude \"qelib1.inc\";\nqreg q[2];\ncreg c[2];\nif (c == 1) x q[0];\n"))
+	_, err := qasm.Parse([]byte("OPENQASM 2.0;\ninclude \"qelib1.inc\";\nqreg q[2];\ncreg c[2];\nif (c[0] == 1) x q[0];\n"))
 	fmt.Println(err)
 	// Output:
-	// qasm: 5:1: if is not supported: a classically controlled operation has no unitary
+	// qasm: 5:6: OpenQASM 2.0 compares a whole register in if, not an element
 }

@@ -7,6 +7,7 @@ import (
 	"math/cmplx"
 	"sort"
 	"strconv"
+	"strings"
 
 	"qcheck.dev/qcheck/circuit"
 )
@@ -34,6 +35,11 @@ func Format(c *circuit.Circuit) ([]byte, error) {
 		for _, b := range op.Bits {
 			nc = max(nc, b+1)
 		}
+		if op.If != nil {
+			for _, b := range op.If.Bits {
+				nc = max(nc, b+1)
+			}
+		}
 	}
 	if nc > 0 {
 		cr = []Register{{Name: "c", Size: nc}}
@@ -44,6 +50,9 @@ func Format(c *circuit.Circuit) ([]byte, error) {
 // FormatProgram writes the program's circuit with its own register names and sizes, so that
 // ParseProgram(FormatProgram(p)) has the same registers. The registers must cover the circuit.
 func FormatProgram(p *Program) ([]byte, error) {
+	if p == nil || p.Circuit == nil {
+		return nil, fmt.Errorf("qasm: FormatProgram of a nil program or circuit")
+	}
 	if err := p.Circuit.Validate(); err != nil {
 		return nil, err
 	}
@@ -96,6 +105,13 @@ func write(c *circuit.Circuit, qregs, cregs []Register) ([]byte, error) {
 				return nil, fmt.Errorf("qasm: op %d (%s) writes classical bit %d, outside the classical registers", i, op.Gate.Name, b)
 			}
 		}
+		if op.If != nil {
+			for _, b := range op.If.Bits {
+				if b >= len(cn) {
+					return nil, fmt.Errorf("qasm: op %d (%s) is conditioned on classical bit %d, outside the classical registers", i, op.Gate.Name, b)
+				}
+			}
+		}
 	}
 	var defs bytes.Buffer
 	defined := map[string]circuit.Gate{}
@@ -141,7 +157,15 @@ func write(c *circuit.Circuit, qregs, cregs []Register) ([]byte, error) {
 		fmt.Fprintf(&b, "creg %s[%d];\n", r.Name, r.Size)
 	}
 	var num []byte
-	for _, op := range c.Ops {
+	for i, op := range c.Ops {
+		if op.If != nil {
+			r, ok := wholeRegister(op.If, cregs)
+			if !ok {
+				return nil, fmt.Errorf("qasm: op %d (%s): its condition %s is not a whole classical register compared with ==, which is all OpenQASM 2.0 can write",
+					i, op.Gate.Name, conditionText(op.If, cn))
+			}
+			fmt.Fprintf(&b, "if(%s==%d) ", r.Name, op.If.Value)
+		}
 		b.WriteString(op.Gate.Name)
 		if len(op.Gate.Params) > 0 && !op.Gate.IsCustom() {
 			b.WriteByte('(')
@@ -169,6 +193,48 @@ func write(c *circuit.Circuit, qregs, cregs []Register) ([]byte, error) {
 		b.WriteString(";\n")
 	}
 	return b.Bytes(), nil
+}
+
+// wholeRegister returns the register whose bits, element 0 first, are exactly the condition's,
+// when the condition tests equality.
+func wholeRegister(c *circuit.Condition, regs []Register) (Register, bool) {
+	if c.Not || len(c.Bits) == 0 {
+		return Register{}, false
+	}
+	for _, r := range regs {
+		if r.Size != len(c.Bits) {
+			continue
+		}
+		ok := true
+		for i, bit := range c.Bits {
+			ok = ok && bit == r.Start+i
+		}
+		if ok {
+			return r, true
+		}
+	}
+	return Register{}, false
+}
+
+// conditionText writes a condition for an error message with the bits' register names.
+func conditionText(c *circuit.Condition, names []string) string {
+	var b strings.Builder
+	for i, bit := range c.Bits {
+		if i > 0 {
+			b.WriteByte(',')
+		}
+		if bit >= 0 && bit < len(names) {
+			b.WriteString(names[bit])
+		} else {
+			fmt.Fprintf(&b, "bit %d", bit)
+		}
+	}
+	op := "=="
+	if c.Not {
+		op = "!="
+	}
+	fmt.Fprintf(&b, "%s%d", op, c.Value)
+	return b.String()
 }
 
 // appendAngle writes v in the shortest decimal form that parses back to v exactly. OpenQASM 2.0

@@ -86,6 +86,7 @@ type gateDef struct {
 	params  []string // the names of the angles, for errors (θ for rz, theta for a source's own)
 	body    []bodyCall
 	ops     int  // how many ops one call expands to, saturating at maxCount; see size
+	work    int  // the expansion work of one call, saturating at maxCount; see cost
 	keyword bool // U and CX, which exist without any include
 	hidden  bool // a helper of the built-in library that sources cannot call
 	user    bool // defined by the source itself
@@ -94,7 +95,7 @@ type gateDef struct {
 // bodyCall is one statement in a gate body: a call (def set) or a barrier (def nil).
 type bodyCall struct {
 	def    *gateDef
-	args   []*expr
+	args   []code
 	at     []int // the source offset of each argument's expression
 	qubits []int // positions in the enclosing gate's qubit list
 }
@@ -127,6 +128,18 @@ func (d *gateDef) size() int {
 	return d.ops
 }
 
+// cost returns the work of expanding one call of d: one step for the call, and for a definition
+// one step for each barrier and each call in its body plus, for each call, the instructions of
+// its angle expressions and the callee's own work. Unlike size, it is never 0, so that
+// definitions with empty bodies still count (a doubling chain of them would otherwise be free
+// to expand for ever).
+func (d *gateDef) cost() int {
+	if d.native != "" {
+		return 1
+	}
+	return d.work
+}
+
 // angleLabel names angle k of d for an error, counting from 1 as package circuit does:
 // "angle 1 (θ)".
 func (d *gateDef) angleLabel(k int) string {
@@ -147,10 +160,15 @@ type parser struct {
 	nq    int
 	nc    int
 	ops   []circuit.Op
-	offs  []int // source offset of the statement that made each op
-	stmt  int   // offset of the statement being read
+	offs  []int              // source offset of the statement that made each op
+	work  int                // expansion work done so far, against maxWork
+	nargs int                // operands (qubits, bits and condition bits) of the ops so far, against maxOperands
+	cond  *circuit.Condition // the condition of the if statement being read, or nil
+	stmt  int                // offset of the statement being read
 	// scratch buffers reused across statements
 	argBuf []operand
+	stack  []float64 // evaluation stack of compiled expressions
+	seen   []bool    // qubits already in the barrier being read
 }
 
 // operand is a statement argument: a whole register or one element.
@@ -230,7 +248,7 @@ func (p *parser) statement() error {
 	case "opaque":
 		return p.errorf(t.off, "opaque gates are not supported: they have no body to give them a matrix")
 	case "if":
-		return p.errorf(t.off, "if is not supported: a classically controlled operation has no unitary")
+		return p.ifStatement()
 	case "OPENQASM":
 		return p.errorf(t.off, "the OPENQASM header may appear only once, at the start")
 	case "measure":
@@ -241,6 +259,67 @@ func (p *parser) statement() error {
 		return p.barrier()
 	}
 	return p.call()
+}
+
+// ifStatement reads if(creg==n) op; where op is a gate call, measure or reset, as OpenQASM 2.0
+// defines it. Every op the statement makes carries the condition: the register's bits, its
+// element 0 least significant, equal n.
+func (p *parser) ifStatement() error {
+	if err := p.advance(); err != nil {
+		return err
+	}
+	if err := p.expect("(", "after if"); err != nil {
+		return err
+	}
+	name, err := p.ident("a classical register")
+	if err != nil {
+		return err
+	}
+	r, ok := p.regs[string(name.text)]
+	switch {
+	case !ok:
+		return p.errorf(name.off, "unknown register %s", name.text)
+	case r.quantum:
+		return p.errorf(name.off, "%s is not a classical register; if compares a creg with an integer", name.text)
+	case r.size > 64:
+		return p.errorf(name.off, "if on register %s of %d bits: at most 64 bits can be compared", name.text, r.size)
+	}
+	if p.tok.is("[") {
+		return p.errorf(p.tok.off, "OpenQASM 2.0 compares a whole register in if, not an element")
+	}
+	if err := p.expect("==", "in the condition"); err != nil {
+		return err
+	}
+	t := p.tok
+	v, err := strconv.ParseUint(string(t.text), 10, 64)
+	if t.kind != tNumber || err != nil {
+		return p.errorf(t.off, "expected a non-negative integer of at most 64 bits to compare %s with, found %s", r.name, t.describe())
+	}
+	if err := p.advance(); err != nil {
+		return err
+	}
+	if err := p.expect(")", "to close the condition"); err != nil {
+		return err
+	}
+	bits := make([]int, r.size)
+	for i := range bits {
+		bits[i] = r.start + i
+	}
+	p.cond = &circuit.Condition{Bits: bits, Value: v}
+	defer func() { p.cond = nil }()
+	t = p.tok
+	if t.kind == tIdent {
+		switch string(t.text) {
+		case "measure":
+			return p.measure()
+		case "reset":
+			return p.reset()
+		case "if", "barrier", "gate", "opaque", "qreg", "creg", "include", "OPENQASM":
+		default:
+			return p.call()
+		}
+	}
+	return p.errorf(t.off, "if must be followed by a gate call, measure or reset, found %s", t.describe())
 }
 
 func (p *parser) include() error {
@@ -409,9 +488,41 @@ func (p *parser) add(op circuit.Op) error {
 	if len(p.ops) >= p.cfg.maxOps {
 		return p.errorf(p.stmt, "the source expands to more than %d ops (see MaxOps)", p.cfg.maxOps)
 	}
+	n := len(op.Qubits) + len(op.Bits)
+	if p.cond != nil {
+		n += len(p.cond.Bits)
+		c := *p.cond
+		c.Bits = append([]int(nil), c.Bits...)
+		op.If = &c
+	}
+	if err := p.operandRoom(n); err != nil {
+		return err
+	}
+	p.nargs += n
 	p.ops = append(p.ops, op)
 	p.offs = append(p.offs, p.stmt)
 	return nil
+}
+
+// operandRoom fails when n more operands would pass the source's limit, maxOperands: a wide
+// register makes each barrier or broadcast condition over it as large as the register, so the
+// op limit alone does not bound memory.
+func (p *parser) operandRoom(n int) error {
+	if limit := p.cfg.maxOperands(); n > limit-p.nargs {
+		return p.errorf(p.stmt, "the source's ops have more than %d operands in all (qubits, bits and condition bits; %d × MaxOps)",
+			limit, operandsPerOp)
+	}
+	return nil
+}
+
+// condRoom fails when ops more ops under the current if condition would pass the operand limit
+// with the condition's bits alone, so that a broadcast under a wide condition is refused before
+// it starts.
+func (p *parser) condRoom(ops int) error {
+	if p.cond == nil {
+		return nil
+	}
+	return p.operandRoom(mulCount(ops, len(p.cond.Bits)))
 }
 
 func (p *parser) measure() error {
@@ -444,6 +555,9 @@ func (p *parser) measure() error {
 	if q.index < 0 {
 		n = q.reg.size
 	}
+	if err := p.condRoom(n); err != nil {
+		return err
+	}
 	for i := 0; i < n; i++ {
 		if err := p.add(circuit.Op{Gate: circuit.Gate{Name: "measure"}, Qubits: []int{q.at(i)}, Bits: []int{b.at(i)}}); err != nil {
 			return err
@@ -464,6 +578,9 @@ func (p *parser) reset() error {
 		return p.errorf(qs[1].off, "reset takes one qubit or register")
 	}
 	n, _ := p.broadcast(qs)
+	if err := p.condRoom(n); err != nil {
+		return err
+	}
 	for i := 0; i < n; i++ {
 		if err := p.add(circuit.Op{Gate: circuit.Gate{Name: "reset"}, Qubits: []int{qs[0].at(i)}}); err != nil {
 			return err
@@ -483,8 +600,23 @@ func (p *parser) barrier() error {
 	if p.cfg.dropBarriers {
 		return nil
 	}
-	seen := make([]bool, p.nq)
-	var qubits []int
+	width := 0
+	for _, a := range qs {
+		if a.index < 0 {
+			width = addCount(width, a.reg.size)
+		} else {
+			width++
+		}
+	}
+	// Check the limit before building the list, however wide the registers.
+	if err := p.operandRoom(min(width, p.nq)); err != nil {
+		return err
+	}
+	if len(p.seen) < p.nq {
+		p.seen = make([]bool, p.nq)
+	}
+	seen := p.seen
+	qubits := make([]int, 0, min(width, p.nq))
 	for _, a := range qs {
 		lo, hi := a.index, a.index+1
 		if a.index < 0 {
@@ -496,6 +628,9 @@ func (p *parser) barrier() error {
 				qubits = append(qubits, q)
 			}
 		}
+	}
+	for _, q := range qubits {
+		seen[q] = false
 	}
 	return p.add(circuit.Op{Gate: circuit.Gate{Name: "barrier"}, Qubits: qubits})
 }
@@ -519,8 +654,9 @@ func (p *parser) call() error {
 	}
 	vals := make([]float64, len(angles))
 	for i, a := range angles {
-		// Every angle of a call must be finite, even one the gate's body ignores.
-		if vals[i] = a.eval(nil); math.IsNaN(vals[i]) || math.IsInf(vals[i], 0) {
+		// Every angle of a call must be finite, even one the gate's body ignores. Outside gate
+		// definitions every expression folds to a number.
+		if vals[i] = a.val; math.IsNaN(vals[i]) || math.IsInf(vals[i], 0) {
 			return p.errorf(at[i], "%s of %s evaluates to %v; angles must be finite", def.angleLabel(i), name.text, vals[i])
 		}
 	}
@@ -544,6 +680,22 @@ func (p *parser) call() error {
 		}
 		return p.errorf(name.off, "gate %s expands to %s ops here; with the %d before it the source expands to more than %d ops (see MaxOps)",
 			name.text, count, len(p.ops), p.cfg.maxOps)
+	}
+	if err := p.condRoom(mulCount(n, def.size())); err != nil {
+		return err
+	}
+	// Count the work of expanding, not only the ops it makes: definitions with empty bodies
+	// make no ops however deep they nest, and long angle expressions in bodies cost time at
+	// every expansion.
+	if need := mulCount(n, def.cost()); addCount(p.work, need) > p.cfg.maxWork() {
+		count := strconv.Itoa(need)
+		if need == maxCount {
+			count = "at least " + strconv.Itoa(maxCount)
+		}
+		return p.errorf(name.off, "gate %s takes %s steps to expand here (calls, barriers and angle arithmetic in its body); with the %d before it the source takes more than %d (%d × MaxOps)",
+			name.text, count, p.work, p.cfg.maxWork(), workPerOp)
+	} else {
+		p.work += need
 	}
 	for i := 0; i < n; i++ {
 		qubits := make([]int, len(args))
@@ -632,7 +784,10 @@ func (p *parser) expand(def *gateDef, vals []float64, qubits []int, off int) err
 		}
 		args := make([]float64, len(b.args))
 		for k, a := range b.args {
-			if args[k] = a.eval(vals); !math.IsNaN(args[k]) && !math.IsInf(args[k], 0) {
+			if len(p.stack) < a.stack {
+				p.stack = make([]float64, a.stack)
+			}
+			if args[k] = a.eval(vals, p.stack); !math.IsNaN(args[k]) && !math.IsInf(args[k], 0) {
 				continue
 			}
 			line, col := position(p.src, off)

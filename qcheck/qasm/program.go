@@ -53,6 +53,18 @@ type config struct {
 // at each level of nesting), so that a small hostile file cannot exhaust memory.
 const DefaultMaxOps = 1 << 22
 
+// operandsPerOp and workPerOp set the source's other limits from MaxOps: its ops may have
+// operandsPerOp × MaxOps operands in all (qubits, classical bits and condition bits), and
+// expanding its gate calls may take workPerOp × MaxOps steps (each call, barrier and arithmetic
+// operation of a gate body counts one).
+const (
+	operandsPerOp = 4
+	workPerOp     = 8
+)
+
+func (c config) maxOperands() int { return mulCount(operandsPerOp, c.maxOps) }
+func (c config) maxWork() int     { return mulCount(workPerOp, c.maxOps) }
+
 // maxQubits bounds the total size of the quantum and of the classical registers.
 const maxQubits = 1 << 20
 
@@ -61,7 +73,10 @@ const maxQubits = 1 << 20
 func DropBarriers() Option { return func(c *config) { c.dropBarriers = true } }
 
 // MaxOps sets how many ops the source may expand to before Parse gives up with an error; n ≤ 0
-// means DefaultMaxOps.
+// means DefaultMaxOps. It also sets the source's other limits: its ops may have 4 × n operands
+// in all (qubits, classical bits and the bits conditions read), and expanding its gate calls may
+// take 8 × n steps (each call, barrier and arithmetic operation in a gate body is one step, so
+// gates with empty bodies and long angle expressions count too).
 func MaxOps(n int) Option {
 	return func(c *config) {
 		if n > 0 {
