@@ -374,8 +374,8 @@ func (p *parser) declare(quantum bool) error {
 	if quantum {
 		total = &p.nq
 	}
-	if size.val > maxQubits-*total {
-		return p.errorf(size.off, "register %s makes the total size exceed %d", name.text, maxQubits)
+	if size.val > MaxQubits-*total {
+		return p.errorf(size.off, "register %s makes the total size exceed %d", name.text, MaxQubits)
 	}
 	r := &register{name: string(name.text), quantum: quantum, start: *total, size: size.val}
 	*total += size.val
@@ -388,7 +388,7 @@ type intTok struct {
 	val, off int
 }
 
-// integer reads a non-negative integer literal of at most maxQubits.
+// integer reads a non-negative integer literal of at most MaxQubits.
 func (p *parser) integer(what string) (intTok, error) {
 	t := p.tok
 	if t.kind != tNumber {
@@ -400,8 +400,8 @@ func (p *parser) integer(what string) (intTok, error) {
 		}
 	}
 	v, err := strconv.Atoi(string(t.text))
-	if err != nil || v > maxQubits {
-		return intTok{}, p.errorf(t.off, "the %s %s is too large (at most %d)", what, t.text, maxQubits)
+	if err != nil || v > MaxQubits {
+		return intTok{}, p.errorf(t.off, "the %s %s is too large (at most %d)", what, t.text, MaxQubits)
 	}
 	return intTok{val: v, off: t.off}, p.advance()
 }

@@ -65,8 +65,9 @@ const (
 func (c config) maxOperands() int { return mulCount(operandsPerOp, c.maxOps) }
 func (c config) maxWork() int     { return mulCount(workPerOp, c.maxOps) }
 
-// maxQubits bounds the total size of the quantum and of the classical registers.
-const maxQubits = 1 << 20
+// MaxQubits bounds the total size of the quantum registers of a source, and that of its classical
+// registers: a wider declaration is an error at its line and column.
+const MaxQubits = 1 << 20
 
 // DropBarriers makes Parse leave barriers out of the circuit. By default they are kept: engines
 // skip them, and passes that must not move gates across them can see them.

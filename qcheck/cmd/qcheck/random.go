@@ -3,8 +3,10 @@ package main
 import (
 	"fmt"
 	"io"
+	"math"
 	"os"
 	"path/filepath"
+	"strconv"
 	"strings"
 
 	"qcheck.dev/gen"
@@ -22,8 +24,10 @@ Exit 0, or 2 on bad input or usage.`
 
 func random(args []string, stdout, stderr io.Writer) int {
 	c := newCommand("random", "random [flags]", randomAbout, stdout, stderr)
-	qubits := c.fs.Int("qubits", 3, "`N` qubits per circuit")
-	gates := c.fs.Int("gates", 20, "`N` ops per circuit")
+	qubits, gates := new(int), new(int)
+	*qubits, *gates = 3, 20
+	c.fs.Var((*countFlag)(qubits), "qubits", fmt.Sprintf("`N` qubits per circuit, at most %d (the widest register the reader takes)", qasm.MaxQubits))
+	c.fs.Var((*countFlag)(gates), "gates", fmt.Sprintf("`N` ops per circuit, at most %d", maxRandomOps))
 	set := c.fs.String("set", "", "gates to draw from, `G1,G2,...` by OpenQASM name (default: "+strings.Join(gen.DefaultGateSet(), ",")+")")
 	seed := c.fs.Int("seed", 1, "seed `S` of the first circuit; circuit i has seed S+i")
 	count := c.fs.Int("count", 1, "write `N` circuits")
@@ -35,8 +39,12 @@ func random(args []string, stdout, stderr io.Writer) int {
 	switch {
 	case *qubits <= 0:
 		return c.fail("-qubits %d: want at least 1", *qubits)
+	case *qubits > qasm.MaxQubits:
+		return c.fail("-qubits %d: at most %d, the widest register qcheck reads back", *qubits, qasm.MaxQubits)
 	case *gates < 0:
 		return c.fail("-gates %d: want at least 0", *gates)
+	case *gates > maxRandomOps:
+		return c.fail("-gates %d: at most %d ops per circuit (a million take the generator about 13 s and 570 MB)", *gates, maxRandomOps)
 	case *count <= 0:
 		return c.fail("-count %d: want at least 1", *count)
 	case *count > 1 && *out == "":
@@ -100,6 +108,30 @@ func random(args []string, stdout, stderr io.Writer) int {
 		fmt.Fprintln(stdout, name)
 	}
 	return exitOK
+}
+
+// maxRandomOps bounds -gates: a million ops take the generator about 13 s and 570 MB on a loaded
+// 2-core machine, and stay well inside the reader's op limit (qasm.DefaultMaxOps), so that every
+// file random writes can be read back.
+const maxRandomOps = 1 << 20
+
+// countFlag is a non-negative count written as an integer or in exponent form (1e6), as people
+// write large counts; a value that is not a whole number, or is out of range, is refused.
+type countFlag int
+
+func (f *countFlag) String() string { return strconv.Itoa(int(*f)) }
+
+func (f *countFlag) Set(s string) error {
+	if n, err := strconv.Atoi(s); err == nil {
+		*f = countFlag(n)
+		return nil
+	}
+	v, err := strconv.ParseFloat(s, 64)
+	if err != nil || v != math.Trunc(v) || math.Abs(v) > 1<<53 {
+		return fmt.Errorf("want a whole number")
+	}
+	*f = countFlag(v)
+	return nil
 }
 
 // draw takes the circuit of the given seed. The generator reports impossible options (an unknown
