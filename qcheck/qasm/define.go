@@ -77,7 +77,7 @@ func (p *parser) gateDecl() error {
 	if err := p.advance(); err != nil {
 		return err
 	}
-	if native := canonicalFor(def.name, p.src[start:end]); native != "" {
+	if native := canonicalFor(def.name, p.src[start:end], formatDefs); native != "" {
 		def.native, def.body = native, nil
 	}
 	p.gates[def.name] = def
@@ -190,16 +190,17 @@ func (p *parser) bodyStatement(gate string, params, qubits []string) (bodyCall, 
 }
 
 // canonicalFor returns the circuit gate that the definition text def stands for, when name is a
-// gate Format defines and def is token for token Format's definition; else "".
-func canonicalFor(name string, def []byte) string {
-	want, ok := formatDefs[name]
+// gate the writer defines (defs holds its definitions) and def is token for token the writer's
+// definition; else "".
+func canonicalFor(name string, def []byte, defs map[string]string) string {
+	want, ok := defs[name]
 	if !ok {
 		return ""
 	}
 	if _, ok := circuit.Lookup(name); !ok {
 		return ""
 	}
-	a, b := lexer{src: def}, lexer{src: []byte(want)}
+	a, b := lexer{src: def, v3: true}, lexer{src: []byte(want), v3: true}
 	for {
 		x, errx := a.next()
 		y, erry := b.next()

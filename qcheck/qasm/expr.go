@@ -15,18 +15,34 @@ type expr struct {
 	a, b  *expr
 }
 
-// functions are the built-in functions of OpenQASM 2.0 expressions.
+// functions are the built-in real functions of OpenQASM expressions: the first six are those of
+// 2.0; OpenQASM 3 spells ln as log and adds the inverse functions and rounding.
 var functions = []struct {
 	name string
 	f    func(float64) float64
 }{
 	{"sin", math.Sin}, {"cos", math.Cos}, {"tan", math.Tan},
 	{"exp", math.Exp}, {"ln", math.Log}, {"sqrt", math.Sqrt},
+	{"log", math.Log}, {"arcsin", math.Asin}, {"arccos", math.Acos}, {"arctan", math.Atan},
+	{"ceiling", math.Ceil}, {"floor", math.Floor},
 }
 
+// functions2 is how many of functions OpenQASM 2.0 has.
+const functions2 = 6
+
 func functionIndex(name []byte) int {
-	for i, f := range functions {
+	for i, f := range functions[:functions2] {
 		if f.name == string(name) {
+			return i
+		}
+	}
+	return -1
+}
+
+// functionIndex3 is functionIndex for OpenQASM 3, which has no ln.
+func functionIndex3(name string) int {
+	for i, f := range functions {
+		if f.name == name && name != "ln" {
 			return i
 		}
 	}

@@ -44,7 +44,7 @@ func Format(c *circuit.Circuit) ([]byte, error) {
 	if nc > 0 {
 		cr = []Register{{Name: "c", Size: nc}}
 	}
-	return write(c, q, cr)
+	return write(c, q, cr, 2)
 }
 
 // FormatProgram writes the program's circuit with its own register names and sizes, so that
@@ -56,16 +56,17 @@ func FormatProgram(p *Program) ([]byte, error) {
 	if err := p.Circuit.Validate(); err != nil {
 		return nil, err
 	}
-	for _, regs := range [][]Register{p.Qregs, p.Cregs} {
+	for k, regs := range [][]Register{p.Qregs, p.Cregs} {
 		seen := map[string]bool{}
 		for _, r := range regs {
-			if !validIdent(r.Name) || seen[r.Name] || r.Size <= 0 {
+			physical := r.Name == "$" && k == 0 && p.Version == 3 && len(regs) == 1
+			if !physical && !validIdent(r.Name) || seen[r.Name] || r.Size <= 0 {
 				return nil, fmt.Errorf("qasm: register %q: name must be a fresh identifier and size positive", r.Name)
 			}
 			seen[r.Name] = true
 		}
 	}
-	return write(p.Circuit, p.Qregs, p.Cregs)
+	return write(p.Circuit, p.Qregs, p.Cregs, p.Version)
 }
 
 // flat maps flat indices to reg[i] strings.
@@ -74,7 +75,11 @@ func flat(regs []Register, n int, what string) ([]string, error) {
 	for _, r := range regs {
 		for i := 0; i < r.Size; i++ {
 			if k := r.Start + i; k >= 0 && k < n {
-				out[k] = r.Name + "[" + strconv.Itoa(i) + "]"
+				if r.Name == "$" {
+					out[k] = "$" + strconv.Itoa(i) // physical qubits of OpenQASM 3
+				} else {
+					out[k] = r.Name + "[" + strconv.Itoa(i) + "]"
+				}
 			}
 		}
 	}
@@ -86,7 +91,14 @@ func flat(regs []Register, n int, what string) ([]string, error) {
 	return out, nil
 }
 
-func write(c *circuit.Circuit, qregs, cregs []Register) ([]byte, error) {
+// write writes the circuit with the given registers as OpenQASM of the given version (3, or 2
+// for anything else).
+func write(c *circuit.Circuit, qregs, cregs []Register, version int) ([]byte, error) {
+	v3 := version == 3
+	defsOf := formatDefs
+	if v3 {
+		defsOf = formatDefs3
+	}
 	qn, err := flat(qregs, c.Qubits(), "qubit")
 	if err != nil {
 		return nil, err
@@ -129,15 +141,15 @@ func write(c *circuit.Circuit, qregs, cregs []Register) ([]byte, error) {
 				}
 				continue
 			}
-			def, err := customDef(g)
+			def, err := customDef(g, v3)
 			if err != nil {
 				return nil, fmt.Errorf("qasm: op %d (%s): %v", i, g.Name, err)
 			}
 			defined[g.Name] = g
 			names = append(names, def)
-		case formatDefs[g.Name] != "":
+		case defsOf[g.Name] != "":
 			defined[g.Name] = g
-			names = append(names, formatDefs[g.Name])
+			names = append(names, defsOf[g.Name])
 		}
 	}
 	sort.Strings(names) // deterministic; no definition uses another
@@ -148,16 +160,34 @@ func write(c *circuit.Circuit, qregs, cregs []Register) ([]byte, error) {
 
 	var b bytes.Buffer
 	b.Grow(32 * len(c.Ops))
-	b.WriteString("OPENQASM 2.0;\ninclude \"qelib1.inc\";\n")
+	if v3 {
+		b.WriteString("OPENQASM 3.0;\ninclude \"stdgates.inc\";\n")
+	} else {
+		b.WriteString("OPENQASM 2.0;\ninclude \"qelib1.inc\";\n")
+	}
 	b.Write(defs.Bytes())
 	for _, r := range qregs {
-		fmt.Fprintf(&b, "qreg %s[%d];\n", r.Name, r.Size)
+		switch {
+		case v3 && r.Name == "$":
+		case v3:
+			fmt.Fprintf(&b, "qubit[%d] %s;\n", r.Size, r.Name)
+		default:
+			fmt.Fprintf(&b, "qreg %s[%d];\n", r.Name, r.Size)
+		}
 	}
 	for _, r := range cregs {
-		fmt.Fprintf(&b, "creg %s[%d];\n", r.Name, r.Size)
+		if v3 {
+			fmt.Fprintf(&b, "bit[%d] %s;\n", r.Size, r.Name)
+		} else {
+			fmt.Fprintf(&b, "creg %s[%d];\n", r.Name, r.Size)
+		}
 	}
 	var num []byte
 	for i, op := range c.Ops {
+		if v3 {
+			writeOp3(&b, op, qn, cn, cregs)
+			continue
+		}
 		if op.If != nil {
 			r, ok := wholeRegister(op.If, cregs)
 			if !ok {
@@ -251,10 +281,11 @@ func appendAngle(dst []byte, v float64) []byte {
 	return dst
 }
 
-// customDef writes a single-qubit custom gate as a definition: M = e^{iα} u(θ,φ,λ).
-func customDef(g circuit.Gate) (string, error) {
+// customDef writes a single-qubit custom gate as a definition: M = e^{iα} u(θ,φ,λ). In
+// OpenQASM 3 the phase is gphase(α); in 2.0 it is p(α) x p(α) x.
+func customDef(g circuit.Gate, v3 bool) (string, error) {
 	if g.Qubits() != 1 {
-		return "", fmt.Errorf("custom gates on %d qubits cannot be written as OpenQASM 2.0 (only single-qubit custom gates have an exact decomposition here)", g.Qubits())
+		return "", fmt.Errorf("custom gates on %d qubits cannot be written as OpenQASM (only single-qubit custom gates have an exact decomposition here)", g.Qubits())
 	}
 	if !validGateName(g.Name) {
 		return "", fmt.Errorf("custom gate name %q is not an OpenQASM identifier or is taken", g.Name)
@@ -264,7 +295,11 @@ func customDef(g circuit.Gate) (string, error) {
 	var b []byte
 	b = append(b, "gate "...)
 	b = append(b, g.Name...)
-	b = append(b, " a { u("...)
+	if v3 {
+		b = append(b, " a { U("...)
+	} else {
+		b = append(b, " a { u("...)
+	}
 	for k, v := range []float64{theta, phi, lambda} {
 		if k > 0 {
 			b = append(b, ',')
@@ -272,7 +307,11 @@ func customDef(g circuit.Gate) (string, error) {
 		b = appendAngle(b, v)
 	}
 	b = append(b, ") a;"...)
-	if alpha != 0 {
+	if alpha != 0 && v3 {
+		b = append(b, " gphase("...)
+		b = appendAngle(b, alpha)
+		b = append(b, ");"...)
+	} else if alpha != 0 {
 		ph := appendAngle(nil, alpha)
 		b = append(b, " p("...)
 		b = append(b, ph...)

@@ -20,35 +20,53 @@ func Parse(src []byte, opts ...Option) (*circuit.Circuit, error) {
 	return p.Circuit, nil
 }
 
-// ParseProgram reads an OpenQASM 2.0 source and returns the circuit with its registers and the
-// source line of every op. What it accepts and how each qelib1 gate maps onto the gates of
-// package circuit is described in the package documentation.
+// ParseProgram reads an OpenQASM 2.0 or 3 source (the version is read from the header; a source
+// without one is read as 3, as the 3 specification allows) and returns the circuit with its
+// registers and the source line of every op. What it accepts and how each gate maps onto the
+// gates of package circuit is described in the package documentation.
 func ParseProgram(src []byte, opts ...Option) (*Program, error) {
 	cfg := config{maxOps: DefaultMaxOps}
 	for _, o := range opts {
 		o(&cfg)
 	}
-	p := &parser{src: src, lx: lexer{src: src}, cfg: cfg, gates: map[string]*gateDef{},
+	version, err := sourceVersion(src)
+	if err != nil {
+		return nil, err
+	}
+	p := &parser{src: src, lx: lexer{src: src, v3: version == 3}, cfg: cfg, gates: map[string]*gateDef{},
 		regs: map[string]*register{}}
 	// Most statements make one op: size the op list once instead of growing it.
 	if n := bytes.Count(src, []byte{';'}); n <= cfg.maxOps {
 		p.ops, p.offs = make([]circuit.Op, 0, n), make([]int, 0, n)
 	}
-	for name, d := range builtins() {
-		if d.keyword {
-			p.gates[name] = d
-		}
-	}
 	if err := p.advance(); err != nil {
 		return nil, err
 	}
-	if err := p.program(); err != nil {
-		return nil, err
+	prog := &Program{Version: version}
+	if version == 2 {
+		for name, d := range builtins() {
+			if d.keyword {
+				p.gates[name] = d
+			}
+		}
+		if err := p.program(); err != nil {
+			return nil, err
+		}
+	} else {
+		p.gates = keywords3()
+		p3 := &parser3{parser: p}
+		if err := p3.program(); err != nil {
+			return nil, err
+		}
+		prog.Inputs = p3.inputs
+		if p3.physical {
+			prog.Qregs = []Register{{Name: "$", Size: p.nq}}
+		}
 	}
 	c := circuit.New(p.nq)
 	c.Ops = p.ops
 	c.SetBits(p.nc)
-	prog := &Program{Circuit: c, Lines: make([]int, len(p.offs))}
+	prog.Circuit, prog.Lines = c, make([]int, len(p.offs))
 	for _, r := range p.order {
 		reg := Register{Name: r.name, Size: r.size, Start: r.start}
 		if r.quantum {
@@ -68,6 +86,34 @@ func ParseProgram(src []byte, opts ...Option) (*Program, error) {
 		prog.Lines[i] = line
 	}
 	return prog, nil
+}
+
+// sourceVersion reads the version from the header: 2 for OPENQASM 2.0 (or 2), 3 for OPENQASM 3
+// (3.0, 3.1 …) or no header at all. An empty source is an error: it is more likely a mistake
+// than a circuit of no qubits.
+func sourceVersion(src []byte) (int, error) {
+	lx := lexer{src: src, v3: true}
+	t, err := lx.next()
+	if err != nil {
+		return 3, nil // the 3 reader reports it
+	}
+	if t.kind == tEOF {
+		return 0, lx.errorf(t.off, "empty source: no OpenQASM statements")
+	}
+	if !t.is("OPENQASM") {
+		return 3, nil
+	}
+	v, err := lx.next()
+	if err != nil || v.kind != tNumber {
+		return 3, nil
+	}
+	switch s := string(v.text); {
+	case s == "2" || s == "2.0":
+		return 2, nil
+	case s == "3" || len(s) > 2 && s[:2] == "3.":
+		return 3, nil
+	}
+	return 0, lx.errorf(v.off, "unsupported OpenQASM version %s; this reader takes 2.0 and 3", v.text)
 }
 
 type register struct {
@@ -90,6 +136,7 @@ type gateDef struct {
 	keyword bool // U and CX, which exist without any include
 	hidden  bool // a helper of the built-in library that sources cannot call
 	user    bool // defined by the source itself
+	phase   bool // OpenQASM 3's gphase: a global phase, one angle, no qubits of its own
 }
 
 // bodyCall is one statement in a gate body: a call (def set) or a barrier (def nil).
@@ -98,6 +145,7 @@ type bodyCall struct {
 	args   []code
 	at     []int // the source offset of each argument's expression
 	qubits []int // positions in the enclosing gate's qubit list
+	mods   []modifier
 }
 
 // maxCount is where op counts stop growing, far above any MaxOps, so that sums and products of
@@ -162,6 +210,7 @@ type parser struct {
 	ops   []circuit.Op
 	offs  []int              // source offset of the statement that made each op
 	work  int                // expansion work done so far, against maxWork
+	steps int                // steps of reading and expanding done so far, against maxWork (see step)
 	nargs int                // operands (qubits, bits and condition bits) of the ops so far, against maxOperands
 	cond  *circuit.Condition // the condition of the if statement being read, or nil
 	stmt  int                // offset of the statement being read
@@ -707,7 +756,7 @@ func (p *parser) call() error {
 				}
 			}
 		}
-		if err := p.expand(def, vals, qubits, name.off); err != nil {
+		if err := p.apply(def, vals, nil, qubits, emitCtx{anchor: qubits[0]}, name.off); err != nil {
 			return err
 		}
 	}
@@ -755,52 +804,4 @@ func (p *parser) angles(params []string) ([]*expr, []int, error) {
 			return nil, nil, err
 		}
 	}
-}
-
-// expand appends the ops of one call of def with the given angles on the given flat qubits. The
-// call's own angles are finite (call checks them); a body's arithmetic may still make a
-// non-finite angle, reported at its expression when the body is the source's own, else at the
-// call, whose gate name is at off.
-func (p *parser) expand(def *gateDef, vals []float64, qubits []int, off int) error {
-	if def.native != "" {
-		var params []float64
-		if len(vals) > 0 {
-			params = append(params, vals...)
-		}
-		return p.add(circuit.Op{Gate: circuit.Gate{Name: def.native, Params: params}, Qubits: qubits})
-	}
-	for _, b := range def.body {
-		sub := make([]int, len(b.qubits))
-		for k, i := range b.qubits {
-			sub[k] = qubits[i]
-		}
-		if b.def == nil {
-			if !p.cfg.dropBarriers {
-				if err := p.add(circuit.Op{Gate: circuit.Gate{Name: "barrier"}, Qubits: sub}); err != nil {
-					return err
-				}
-			}
-			continue
-		}
-		args := make([]float64, len(b.args))
-		for k, a := range b.args {
-			if len(p.stack) < a.stack {
-				p.stack = make([]float64, a.stack)
-			}
-			if args[k] = a.eval(vals, p.stack); !math.IsNaN(args[k]) && !math.IsInf(args[k], 0) {
-				continue
-			}
-			line, col := position(p.src, off)
-			if def.user {
-				return p.errorf(b.at[k], "%s of %s evaluates to %v in the body of gate %s, for the call at %d:%d; angles must be finite",
-					b.def.angleLabel(k), b.def.name, args[k], def.name, line, col)
-			}
-			return p.errorf(off, "%s of %s evaluates to %v inside gate %s; angles must be finite",
-				b.def.angleLabel(k), b.def.name, args[k], def.name)
-		}
-		if err := p.expand(b.def, args, sub, off); err != nil {
-			return err
-		}
-	}
-	return nil
 }

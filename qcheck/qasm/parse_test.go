@@ -157,9 +157,9 @@ func TestParseErrors(t *testing.T) {
 		line, col int
 		words     string
 	}{
-		{"", 1, 1, "expected the header"},
-		{"qreg q[1];", 1, 1, "expected the header"},
-		{"OPENQASM 3.0;", 1, 10, "unsupported OpenQASM version"},
+		{"", 1, 1, "empty source"},
+		{"// nothing\n", 2, 1, "empty source"},
+		{"OPENQASM 4.0;", 1, 10, "unsupported OpenQASM version 4.0; this reader takes 2.0 and 3"},
 		{"OPENQASM 2.0", 1, 13, `expected ";"`},
 		{head + "qreg q[1];\nopaque g a;", 4, 1, "opaque"},
 		{head + "qreg q[1];\ncreg c[1];\nif (c[0]==1) x q[0];", 5, 6, "whole register"},

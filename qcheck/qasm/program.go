@@ -10,6 +10,12 @@ type Program struct {
 	Circuit *circuit.Circuit
 	// Qregs and Cregs are the quantum and classical registers in the order of declaration.
 	Qregs, Cregs []Register
+	// Version is the OpenQASM version of the source, 2 or 3; FormatProgram writes the same
+	// version (0 is read as 2).
+	Version int
+	// Inputs are the names of the input parameters of a version 3 source, in the order of
+	// declaration, each given its value by the Inputs option.
+	Inputs []string
 	// Lines gives, for each op of Circuit, the 1-based source line of the statement it came
 	// from, so that a report about op k can point into the file.
 	Lines []int
@@ -47,6 +53,7 @@ type Option func(*config)
 type config struct {
 	dropBarriers bool
 	maxOps       int
+	inputs       map[string]float64
 }
 
 // DefaultMaxOps bounds the ops one source may expand to (gate definitions can double the count
@@ -82,6 +89,18 @@ func MaxOps(n int) Option {
 	return func(c *config) {
 		if n > 0 {
 			c.maxOps = n
+		}
+	}
+}
+
+// Inputs gives values to the input parameters of an OpenQASM 3 source (input angle θ;), by
+// name. Until circuits can carry free parameters, every input a source declares needs a value;
+// ParseProgram records the names in Program.Inputs.
+func Inputs(values map[string]float64) Option {
+	return func(c *config) {
+		c.inputs = make(map[string]float64, len(values))
+		for k, v := range values {
+			c.inputs[k] = v
 		}
 	}
 }
