@@ -60,7 +60,11 @@ func FormatProgram(p *Program) ([]byte, error) {
 		seen := map[string]bool{}
 		for _, r := range regs {
 			physical := r.Name == "$" && k == 0 && p.Version == 3 && len(regs) == 1
-			if !physical && !validIdent(r.Name) || seen[r.Name] || r.Size <= 0 {
+			valid := validIdent(r.Name)
+			if p.Version == 3 {
+				valid = validIdent3(r.Name, needsStdgates(p.Circuit))
+			}
+			if !physical && !valid || seen[r.Name] || r.Size <= 0 {
 				return nil, fmt.Errorf("qasm: register %q: name must be a fresh identifier and size positive", r.Name)
 			}
 			seen[r.Name] = true
@@ -160,9 +164,12 @@ func write(c *circuit.Circuit, qregs, cregs []Register, version int) ([]byte, er
 
 	var b bytes.Buffer
 	b.Grow(32 * len(c.Ops))
-	if v3 {
+	switch {
+	case v3 && needsStdgates(c):
 		b.WriteString("OPENQASM 3.0;\ninclude \"stdgates.inc\";\n")
-	} else {
+	case v3:
+		b.WriteString("OPENQASM 3.0;\n")
+	default:
 		b.WriteString("OPENQASM 2.0;\ninclude \"qelib1.inc\";\n")
 	}
 	b.Write(defs.Bytes())
@@ -287,7 +294,7 @@ func customDef(g circuit.Gate, v3 bool) (string, error) {
 	if g.Qubits() != 1 {
 		return "", fmt.Errorf("custom gates on %d qubits cannot be written as OpenQASM (only single-qubit custom gates have an exact decomposition here)", g.Qubits())
 	}
-	if !validGateName(g.Name) {
+	if !validGateName(g.Name) || v3 && (reserved3[g.Name] || stdgates()[g.Name] != nil) {
 		return "", fmt.Errorf("custom gate name %q is not an OpenQASM identifier or is taken", g.Name)
 	}
 	m := g.Elements()

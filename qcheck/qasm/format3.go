@@ -112,3 +112,31 @@ func Format3(c *circuit.Circuit) ([]byte, error) {
 	}
 	return FormatProgram(p)
 }
+
+// validIdent3 reports whether s is one OpenQASM 3 name (Unicode letters allowed) that is not a
+// reserved word of 3 or of 2.0.
+// With std, the name must not be a gate of stdgates.inc either.
+func validIdent3(s string, std bool) bool {
+	lx := lexer{src: []byte(s), v3: true}
+	t, err := lx.next()
+	if err != nil || t.kind != tIdent || string(t.text) != s || s[0] == '$' || reserved3[s] || reserved[s] {
+		return false
+	}
+	_, ok := stdgates()[s]
+	return !ok || !std
+}
+
+// needsStdgates reports whether writing c as OpenQASM 3 calls a gate of stdgates.inc: every op
+// but U (u), measure, reset, barrier and single-qubit custom gates (written with U and gphase).
+func needsStdgates(c *circuit.Circuit) bool {
+	for _, op := range c.Ops {
+		switch op.Gate.Name {
+		case "u", "measure", "reset", "barrier":
+		default:
+			if !op.Gate.IsCustom() {
+				return true
+			}
+		}
+	}
+	return false
+}

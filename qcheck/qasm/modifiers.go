@@ -444,25 +444,53 @@ func (p *parser) emitU1(m []complex128, t int, cs []int) error {
 // call, under ctrl, negctrl and inv modifiers (ctrl commutes with the power: a controlled gate's
 // power is the controlled power).
 func (p *parser) fractional(def *gateDef, vals []float64, mods []modifier, qubits []int, k float64, ctx emitCtx, off int) error {
+	var neg []int
+	for len(mods) > 0 && mods[0].kind == 'n' {
+		neg = append(neg, qubits[:mods[0].n]...)
+		ctx = ctx.withControls(qubits[:mods[0].n])
+		qubits, mods = qubits[mods[0].n:], mods[1:]
+	}
+	if len(neg) > 0 {
+		if err := p.flip(neg); err != nil {
+			return err
+		}
+		if err := p.fractional(def, vals, mods, qubits, k, ctx, off); err != nil {
+			return err
+		}
+		return p.flip(neg)
+	}
 	innerInv := false
+peel:
 	for len(mods) > 0 {
 		m := mods[0]
 		switch m.kind {
-		case 'c', 'n':
-			if m.kind == 'n' {
-				if err := p.flip(qubits[:m.n]); err != nil {
-					return err
-				}
-				defer p.flip(qubits[:m.n])
-			}
+		case 'n':
+			// Negative controls after other modifiers: start again with them in front.
+			return p.fractional(def, vals, append([]modifier{m}, append(append([]modifier(nil), mods[1:]...), invIf(innerInv)...)...), qubits, k, ctx, off)
+		case 'c':
 			ctx = ctx.withControls(qubits[:m.n])
 			qubits = qubits[m.n:]
 		case 'i':
 			innerInv = !innerInv
 		default:
-			return p.errorf(m.off, "pow(%v) @ pow(…) @ is not supported: write one power", k)
+			break peel
 		}
 		mods = mods[1:]
+	}
+	if len(qubits) == 1 {
+		// A single-qubit target, whatever its definition: take its matrix and its power.
+		m, err := p.matrix1(def, vals, mods, innerInv)
+		if err != nil {
+			return err
+		}
+		m = principalPower(m, k)
+		if ctx.inv {
+			m = []complex128{cmplx.Conj(m[0]), cmplx.Conj(m[2]), cmplx.Conj(m[1]), cmplx.Conj(m[3])}
+		}
+		return p.emitU1(m, qubits[0], ctx.ctrls)
+	}
+	if len(mods) > 0 {
+		return p.errorf(mods[0].off, "pow(%v) @ pow(…) @ on a gate of %d qubits is not supported: write one power", k, len(qubits))
 	}
 	for def.native == "" && !def.phase {
 		if len(def.body) != 1 || def.body[0].def == nil {
@@ -477,8 +505,10 @@ func (p *parser) fractional(def *gateDef, vals []float64, mods []modifier, qubit
 		for i, q := range b.qubits {
 			sub[i] = qubits[q]
 		}
-		def, vals, qubits = b.def, args, sub
-		return p.fractional(def, vals, append(b.mods, mods...), qubits, k, ctx, off)
+		if innerInv {
+			b.mods = append([]modifier{{kind: 'i'}}, b.mods...)
+		}
+		return p.fractional(b.def, args, b.mods, sub, k, ctx, off)
 	}
 	if def.phase {
 		a := vals[0]
@@ -559,6 +589,40 @@ func (p *parser) fractional(def *gateDef, vals []float64, mods []modifier, qubit
 		return p.errorf(p.stmt, "pow(%v) @ %s: the power of this gate is not supported", k, g.Name)
 	}
 	return power(g, qubits[0])
+}
+
+// matrix1 returns the 2×2 matrix of a single-qubit gate with its modifiers (inverted when inv),
+// global phase included, by expanding it on qubit 0 into a scratch list of ops that is then
+// taken back out of the circuit.
+func (p *parser) matrix1(def *gateDef, vals []float64, mods []modifier, inv bool) ([]complex128, error) {
+	nops, noffs, nargs, cond := len(p.ops), len(p.offs), p.nargs, p.cond
+	p.cond = nil
+	err := p.apply(def, vals, mods, []int{0}, emitCtx{inv: inv, anchor: 0}, p.stmt)
+	ops := p.ops[nops:]
+	p.ops, p.offs, p.nargs, p.cond = p.ops[:nops], p.offs[:noffs], nargs, cond
+	if err != nil {
+		return nil, err
+	}
+	m := []complex128{1, 0, 0, 1}
+	for _, op := range ops {
+		g := op.Gate.Elements()
+		if g == nil || len(g) != 4 {
+			return nil, p.errorf(p.stmt, "pow: gate %s is not a single-qubit unitary", def.name)
+		}
+		m = []complex128{
+			g[0]*m[0] + g[1]*m[2], g[0]*m[1] + g[1]*m[3],
+			g[2]*m[0] + g[3]*m[2], g[2]*m[1] + g[3]*m[3],
+		}
+	}
+	return m, nil
+}
+
+// invIf returns an inv modifier when inv is set.
+func invIf(inv bool) []modifier {
+	if inv {
+		return []modifier{{kind: 'i'}}
+	}
+	return nil
 }
 
 // principalPhase returns a reduced to (−π, π].
