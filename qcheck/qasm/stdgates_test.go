@@ -92,8 +92,8 @@ var (
 	specH  = specU(math.Pi/2, 0, math.Pi)
 	specP  = func(la float64) mat2 { return controlledBy(1, mat2{expi(la)}) } // ctrl @ gphase(λ)
 	specZ  = specP(math.Pi)
-	specS  = mat2{1, 0, 0, expi(math.Pi / 2)} // pow(1/2) @ z: the principal root of diag(1, e^{iπ})
-	specT  = mat2{1, 0, 0, expi(math.Pi / 4)} // pow(1/2) @ s
+	specS  = mat2{1, 0, 0, expi(math.Pi / 2)}    // pow(1/2) @ z: the principal root of diag(1, e^{iπ})
+	specT  = mat2{1, 0, 0, expi(math.Pi / 4)}    // pow(1/2) @ s
 	specSX = matMul(matMul(specH, specS), specH) // pow(1/2) @ x: x = H z H, so √x = H √z H
 	specRX = func(th float64) mat2 { return specU(th, -math.Pi/2, math.Pi/2) }
 	specRY = func(th float64) mat2 { return specU(th, 0, 0) }
