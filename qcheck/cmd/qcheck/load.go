@@ -5,7 +5,11 @@ import (
 	"flag"
 	"fmt"
 	"io"
+	"math"
 	"os"
+	"sort"
+	"strconv"
+	"strings"
 	"time"
 
 	"qcheck.dev/qcheck/qasm"
@@ -19,17 +23,47 @@ const (
 	defaultReadTimeout = 3 * time.Second
 )
 
-// readLimits bound how much of an input file is read and, for pipes and devices, for how long,
-// so that qcheck equiv /dev/zero or a pipe nobody writes to is refused instead of running for
-// ever.
+// readLimits say how input files are read: how much of a file and, for pipes and devices, for
+// how long (so that qcheck equiv /dev/zero or a pipe nobody writes to is refused instead of
+// running for ever), how many ops a file may expand to, and the values of the input parameters
+// of OpenQASM 3 files.
 type readLimits struct {
 	maxBytes int64
 	timeout  time.Duration
+	maxOps   int
+	inputs   inputValues
 }
 
 func (l *readLimits) register(fs *flag.FlagSet) {
 	fs.Int64Var(&l.maxBytes, "max-input", defaultMaxInput, "refuse input files larger than `BYTES`")
 	fs.DurationVar(&l.timeout, "read-timeout", defaultReadTimeout, "give up reading an input that is not a regular file (a pipe, a device) after `D`")
+	fs.IntVar(&l.maxOps, "max-ops", qasm.DefaultMaxOps, "refuse files that expand to more than `N` ops (also bounds operands, 4N, and the work of expanding gates and loops, 8N)")
+	fs.Var(&l.inputs, "input", "value of an OpenQASM 3 input parameter, `NAME=VALUE` (repeat for each); needed until circuits carry free parameters")
+}
+
+// inputValues is the -input flag: NAME=VALUE pairs.
+type inputValues map[string]float64
+
+func (v *inputValues) String() string {
+	var parts []string
+	for k, x := range *v {
+		parts = append(parts, k+"="+strconv.FormatFloat(x, 'g', -1, 64))
+	}
+	sort.Strings(parts)
+	return strings.Join(parts, ",")
+}
+
+func (v *inputValues) Set(s string) error {
+	name, val, ok := strings.Cut(s, "=")
+	x, err := strconv.ParseFloat(strings.TrimSpace(val), 64)
+	if !ok || name == "" || err != nil || math.IsNaN(x) || math.IsInf(x, 0) {
+		return fmt.Errorf("want NAME=VALUE with a finite number, got %q", s)
+	}
+	if *v == nil {
+		*v = inputValues{}
+	}
+	(*v)[strings.TrimSpace(name)] = x
+	return nil
 }
 
 // read returns the contents of the file at path, refusing a file larger than the limit (before
@@ -97,7 +131,7 @@ func (l readLimits) load(path string) (*qasm.Program, error) {
 	if err != nil {
 		return nil, err
 	}
-	p, err := qasm.ParseProgram(src)
+	p, err := qasm.ParseProgram(src, qasm.MaxOps(l.maxOps), qasm.Inputs(l.inputs))
 	if err != nil {
 		var e *qasm.Error
 		if errors.As(err, &e) {

@@ -15,9 +15,9 @@ import (
 )
 
 const randomAbout = `
-Writes random circuits as OpenQASM 2.0, drawn by qcheck's generator (package gen), so that a
-compiler written in any language can be fuzzed: generate, compile with your tool, compare the
-output with qcheck equiv. The same flags and seed always give the same circuits. One circuit goes
+Writes random circuits as OpenQASM 2.0 (or 3 with -version 3), drawn by qcheck's generator
+(package gen), so that a compiler written in any language can be fuzzed: generate, compile with
+your tool, compare the output with qcheck equiv. The same flags and seed always give the same circuits. One circuit goes
 to stdout; with -count N > 1 (or -out), N files DIR/random-SEED.qasm are written for seeds
 SEED, SEED+1, ... Each file starts with a comment holding the command that makes it again.
 Exit 0, or 2 on bad input or usage.`
@@ -32,6 +32,7 @@ func random(args []string, stdout, stderr io.Writer) int {
 	seed := c.fs.Int("seed", 1, "seed `S` of the first circuit; circuit i has seed S+i")
 	count := c.fs.Int("count", 1, "write `N` circuits")
 	out := c.fs.String("out", "", "folder `DIR` to write random-SEED.qasm files into (made if missing)")
+	version := c.fs.Int("version", 2, "OpenQASM `VERSION` to write: 2 (2.0) or 3")
 	motifs := c.fs.Int("motifs", 0, "percentage `P` of draws that place a motif (runs, inverse pairs, repeated blocks) instead of one op")
 	if _, code, ok := c.parse(args, 0); !ok {
 		return code
@@ -49,6 +50,8 @@ func random(args []string, stdout, stderr io.Writer) int {
 		return c.fail("-count %d: want at least 1", *count)
 	case *count > 1 && *out == "":
 		return c.fail("-count %d needs -out DIR", *count)
+	case *version != 2 && *version != 3:
+		return c.fail("-version %d: want 2 or 3", *version)
 	case *motifs < 0 || *motifs > 100:
 		return c.fail("-motifs %d: want a percentage in [0, 100]", *motifs)
 	}
@@ -87,7 +90,11 @@ func random(args []string, stdout, stderr io.Writer) int {
 		if *gates == 0 {
 			circ.Ops = nil
 		}
-		src, err := qasm.Format(circ)
+		format := qasm.Format
+		if *version == 3 {
+			format = qasm.Format3
+		}
+		src, err := format(circ)
 		if err != nil {
 			return c.fail("seed %d: %v", s, err)
 		}
@@ -95,6 +102,9 @@ func random(args []string, stdout, stderr io.Writer) int {
 			*qubits, *gates, strings.Join(opts.GateSet, ","), *motifs, s)
 		if len(opts.GateSet) == 0 {
 			head = fmt.Sprintf("// qcheck random -qubits %d -gates %d -motifs %d -seed %d\n", *qubits, *gates, *motifs, s)
+		}
+		if *version == 3 {
+			head = strings.Replace(head, " -seed ", " -version 3 -seed ", 1)
 		}
 		if *out == "" {
 			fmt.Fprint(stdout, head)
