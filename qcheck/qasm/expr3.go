@@ -20,6 +20,15 @@ type node struct {
 	idx  *index // for 'i'
 }
 
+// begin returns the offset where the expression starts (a binary node's own offset is its
+// operator's, for errors about the operation).
+func (n *node) begin() int {
+	for n.op == 'b' || n.op == 'i' {
+		n = n.kids[0]
+	}
+	return n.off
+}
+
 // index is a subscript: one expression, a range lo:step:hi (parts may be nil), or a set {a, b}.
 type index struct {
 	one          *node

@@ -456,11 +456,11 @@ func (p *parser3) declareClassical() error {
 		if err != nil {
 			return err
 		}
-		if v, err = p.convert(x, ty, e.off); err != nil {
+		if v, err = p.convert(x, ty, e.begin()); err != nil {
 			return err
 		}
 		if v.measured() {
-			return p.errorf(e.off, "%s cannot hold a value that depends on measured bits", name.text)
+			return p.errorf(e.begin(), "%s cannot hold a value that depends on measured bits", name.text)
 		}
 	case isConst:
 		return p.errorf(p.tok.off, "const %s needs a value", name.text)
@@ -535,12 +535,12 @@ func (p *parser3) assignment() error {
 	if err != nil {
 		return err
 	}
-	v, err := p.convert(x, s.typ, e.off)
+	v, err := p.convert(x, s.typ, e.begin())
 	if err != nil {
 		return err
 	}
 	if v.measured() {
-		return p.errorf(e.off, "%s cannot hold a value that depends on measured bits", name.text)
+		return p.errorf(e.begin(), "%s cannot hold a value that depends on measured bits", name.text)
 	}
 	s.val = v
 	return p.expect(";", "after the assignment")

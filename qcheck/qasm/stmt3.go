@@ -107,6 +107,7 @@ func (p *parser3) callStatement() error {
 			return err
 		}
 		for !p.tok.is(")") {
+			at := p.tok.off
 			e, err := p.parseExpr3()
 			if err != nil {
 				return err
@@ -115,12 +116,12 @@ func (p *parser3) callStatement() error {
 			if err != nil {
 				return err
 			}
-			f, err := p.toFloat(v, e.off)
+			f, err := p.toFloat(v, at)
 			if err != nil {
 				return err
 			}
 			if math.IsNaN(f) || math.IsInf(f, 0) {
-				return p.errorf(e.off, "%s of %s evaluates to %v; angles must be finite", def.angleLabel(len(vals)), name.text, f)
+				return p.errorf(at, "%s of %s evaluates to %v; angles must be finite", def.angleLabel(len(vals)), name.text, f)
 			}
 			vals = append(vals, f)
 			if !p.tok.is(",") {
