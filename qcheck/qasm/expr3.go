@@ -44,6 +44,17 @@ var binaryLevels = [][]string{
 	{"<<", ">>"}, {"+", "-"}, {"*", "/", "%"},
 }
 
+// binaryLevel gives each binary operator its index in binaryLevels plus one.
+var binaryLevel = func() map[string]int {
+	m := map[string]int{}
+	for i, ops := range binaryLevels {
+		for _, o := range ops {
+			m[o] = i + 1
+		}
+	}
+	return m
+}()
+
 // parseExpr3 reads an expression.
 func (p *parser3) parseExpr3() (*node, error) { return p.binary3(0, 0) }
 
@@ -59,15 +70,10 @@ func (p *parser3) binary3(level, nest int) (*node, error) {
 		return nil, err
 	}
 	for depth := 0; ; depth++ {
-		op := ""
-		for _, o := range binaryLevels[level] {
-			if p.tok.kind == tPunct && string(p.tok.text) == o {
-				op = o
-			}
-		}
-		if op == "" {
+		if p.tok.kind != tPunct || binaryLevel[string(p.tok.text)] != level+1 {
 			return a, nil
 		}
+		op := string(p.tok.text)
 		if depth > maxExprDepth {
 			return nil, p.errorf(p.tok.off, "expression too long (more than %d operators in a row)", maxExprDepth)
 		}

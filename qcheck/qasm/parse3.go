@@ -639,8 +639,10 @@ func (p *parser3) qubitOperands() ([]qubitOperand, error) {
 			if err := p.next(); err != nil {
 				return nil, err
 			}
-			op := qubitOperand{qubits: regBits(s.reg), scalar: s.single, off: t.off}
-			if p.tok.is("[") {
+			op := qubitOperand{scalar: s.single, off: t.off}
+			if !p.tok.is("[") {
+				op.qubits = regBits(s.reg)
+			} else {
 				if s.single {
 					return nil, p.errorf(p.tok.off, "%s is a single qubit and cannot be indexed", t.text)
 				}
@@ -652,10 +654,10 @@ func (p *parser3) qubitOperands() ([]qubitOperand, error) {
 				if err != nil {
 					return nil, err
 				}
-				op.qubits, op.scalar = make([]int, len(sel)), scalar
-				for i, k := range sel {
-					op.qubits[i] = s.reg.start + k
+				for i := range sel {
+					sel[i] += s.reg.start
 				}
+				op.qubits, op.scalar = sel, scalar
 			}
 			out = append(out, op)
 		}

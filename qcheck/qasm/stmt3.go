@@ -406,7 +406,9 @@ func (p *parser3) forLoop() error {
 	if err := p.next(); err != nil {
 		return err
 	}
-	var vals []value
+	// The loop runs n times with the value at(i).
+	var n int
+	var at func(int) (value, error)
 	switch {
 	case p.tok.is("["):
 		ix, err := p.index3()
@@ -443,37 +445,37 @@ func (p *parser3) forLoop() error {
 		if count > uint64(p.maxIterations()) {
 			return p.errorf(forTok.off, "for loop of %d iterations: at most %d are read (MaxOps/32; see MaxOps)", count, p.maxIterations())
 		}
-		for i := uint64(0); i < count; i++ {
-			vals = append(vals, value{kind: kInt, i: lo + int64(i)*step})
-		}
+		n = int(count)
+		at = func(i int) (value, error) { return value{kind: kInt, i: lo + int64(i)*step}, nil }
 	case p.tok.is("{"):
 		set, err := p.set3()
 		if err != nil {
 			return err
 		}
-		for _, e := range set {
-			v, err := p.eval(e)
-			if err != nil {
-				return err
-			}
-			vals = append(vals, v)
-		}
+		n = len(set)
+		at = func(i int) (value, error) { return p.eval(set[i]) }
 	default:
 		return p.errorf(p.tok.off, "a loop runs over a range [lo:step:hi] or a set {a, b}; found %s", p.tok.describe())
 	}
 	bodyPos, bodyTok := p.lx.pos, p.tok
-	if len(vals) == 0 {
+	if n == 0 {
 		return p.skipStatement()
 	}
 	p.loopDepth++
 	defer func() { p.loopDepth-- }()
-	for _, v := range vals {
+	scope := map[string]*symbol{}
+	for i := 0; i < n; i++ {
+		v, err := at(i)
+		if err != nil {
+			return err
+		}
 		x, err := p.convert(v, ty, name.off)
 		if err != nil {
 			return err
 		}
 		p.lx.pos, p.tok = bodyPos, bodyTok
-		p.scopes = append(p.scopes, map[string]*symbol{})
+		clear(scope)
+		p.scopes = append(p.scopes, scope)
 		if err := p.declareName(name, &symbol{kind: sConst, typ: ty, val: x}); err != nil {
 			return err
 		}
