@@ -69,6 +69,10 @@ func (p *parser) apply(def *gateDef, vals []float64, mods []modifier, qubits []i
 		if k < 0 {
 			ctx.inv, k = !ctx.inv, -k
 		}
+		// Every repetition costs at least one step: refuse at once a power the budget cannot pay.
+		if k > float64(p.cfg.maxWork()-p.steps) {
+			return p.errorf(m.off, "pow(%v) repeats the gate more times than the source's work limit allows (%d steps; %d × MaxOps)", k, p.cfg.maxWork(), workPerOp)
+		}
 		for ; k > 0; k-- {
 			if err := p.apply(def, vals, rest, qubits, ctx, off); err != nil {
 				return err
@@ -143,8 +147,12 @@ func (p *parser) scratch(c code) []float64 {
 }
 
 // step counts one step of reading or expanding against the source's work limit.
-func (p *parser) step() error {
-	p.steps++
+func (p *parser) step() error { return p.stepN(1) }
+
+// stepN counts n steps: reading a statement or running a loop iteration costs more than
+// expanding one call, and counts so (see statement3 and forLoop), so that the limit bounds time.
+func (p *parser) stepN(n int) error {
+	p.steps += n
 	if p.steps > p.cfg.maxWork() {
 		return p.errorf(p.stmt, "the source takes more than %d steps to read and expand (calls, loop iterations, arithmetic; %d × MaxOps)",
 			p.cfg.maxWork(), workPerOp)

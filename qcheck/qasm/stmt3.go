@@ -465,6 +465,9 @@ func (p *parser3) forLoop() error {
 	defer func() { p.loopDepth-- }()
 	scope := map[string]*symbol{}
 	for i := 0; i < n; i++ {
+		if err := p.stepN(stepsPerIteration); err != nil {
+			return err
+		}
 		v, err := at(i)
 		if err != nil {
 			return err
