@@ -140,3 +140,39 @@ func TestCompiledExpressionsMatchTrees(t *testing.T) {
 		}
 	})
 }
+
+// OpenQASM 3 adds ways to ask for unbounded work: nested loops with empty bodies, pow with a huge
+// exponent, and chains of gates each the square of the previous one with empty bodies at the
+// bottom. Each is refused by the work limit, with the limit in the message; the first and last
+// at a small MaxOps to keep the test fast (at the default they take about 1 s of CPU).
+func TestOpenQASM3WorkLimited(t *testing.T) {
+	chain := "include \"stdgates.inc\";\ngate e a { }\ngate g0 a { e a; e a; }\n"
+	for i := 1; i <= 60; i++ {
+		chain += "gate g" + strconv.Itoa(i) + " a { pow(2) @ g" + strconv.Itoa(i-1) + " a; }\n"
+	}
+	chain += "qubit q;\ng60 q;\n"
+	for _, tc := range []struct {
+		src   string
+		opts  []Option
+		words string
+	}{
+		{"include \"stdgates.inc\";\nqubit q;\nfor int i in [0:2000] { for int j in [0:2000] { } }\n",
+			[]Option{MaxOps(1 << 16)}, "more than 524288 steps"},
+		{"include \"stdgates.inc\";\nqubit q;\npow(1000000000000000) @ x q;\n", nil, "pow(1e+15) repeats the gate more times than the source's work limit allows"},
+		{chain, []Option{MaxOps(1 << 16)}, "repeats the gate more times than the source's work limit allows (524288 steps"},
+		{"include \"stdgates.inc\";\nqubit q;\nfor int i in [0:999999] { x q; }\n", nil, "for loop of 1000000 iterations: at most 131072"},
+	} {
+		var before, after runtime.MemStats
+		runtime.ReadMemStats(&before)
+		start := time.Now()
+		_, err := Parse([]byte(tc.src), tc.opts...)
+		elapsed := time.Since(start)
+		runtime.ReadMemStats(&after)
+		if err == nil || !strings.Contains(err.Error(), tc.words) {
+			t.Errorf("got %v, want …%s…", err, tc.words)
+		}
+		if alloc := after.TotalAlloc - before.TotalAlloc; alloc > 256<<20 || elapsed > 10*time.Second {
+			t.Errorf("%q: refusing took %v and %d MB", tc.words, elapsed, alloc>>20)
+		}
+	}
+}
