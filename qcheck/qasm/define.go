@@ -30,35 +30,55 @@ func (p *parser) gateDecl() error {
 		return p.errorf(name.off, "gate %s is already defined", name.text)
 	}
 	def := &gateDef{name: string(name.text), user: true, work: 1}
-	var params []string
-	if p.tok.is("(") {
-		if err := p.advance(); err != nil {
-			return err
-		}
-		if !p.tok.is(")") {
-			if params, err = p.names("parameter", nil); err != nil {
-				return err
-			}
-		}
-		if err := p.expect(")", "after the parameters"); err != nil {
-			return err
-		}
-	}
-	qubits, err := p.names("qubit argument", params)
+	params, qubits, err := p.signature(reserved)
 	if err != nil {
 		return err
 	}
-	def.nparams, def.nqubits, def.params = len(params), len(qubits), params
-	if err := p.expect("{", "to open the gate body"); err != nil {
+	end, err := p.gateBody(def, params, qubits, func() (bodyCall, error) { return p.bodyStatement(def.name, params, qubits) })
+	if err != nil {
 		return err
 	}
+	if native := canonicalFor(def.name, p.src[start:end], formatDefs); native != "" {
+		def.native, def.body = native, nil
+	}
+	p.gates[def.name] = def
+	return nil
+}
+
+// signature reads the [(params)] qubits { of a gate definition; words are the version's reserved
+// words.
+func (p *parser) signature(words map[string]bool) (params, qubits []string, err error) {
+	if p.tok.is("(") {
+		if err := p.advance(); err != nil {
+			return nil, nil, err
+		}
+		if !p.tok.is(")") {
+			if params, err = p.names("parameter", nil, words); err != nil {
+				return nil, nil, err
+			}
+		}
+		if err := p.expect(")", "after the parameters"); err != nil {
+			return nil, nil, err
+		}
+	}
+	if qubits, err = p.names("qubit argument", params, words); err != nil {
+		return nil, nil, err
+	}
+	return params, qubits, p.expect("{", "to open the gate body")
+}
+
+// gateBody reads the statements of a gate body with read, up to and past the closing brace,
+// counting the definition's size and work as it goes, and returns the offset just past the
+// brace.
+func (p *parser) gateBody(def *gateDef, params, qubits []string, read func() (bodyCall, error)) (int, error) {
+	def.nparams, def.nqubits, def.params = len(params), len(qubits), params
 	for !p.tok.is("}") {
 		if p.tok.kind == tEOF {
-			return p.errorf(p.tok.off, "gate %s: body not closed with }", def.name)
+			return 0, p.errorf(p.tok.off, "gate %s: body not closed with }", def.name)
 		}
-		b, err := p.bodyStatement(def.name, params, qubits)
+		b, err := read()
 		if err != nil {
-			return err
+			return 0, err
 		}
 		def.body = append(def.body, b)
 		switch {
@@ -74,18 +94,12 @@ func (p *parser) gateDecl() error {
 		def.work = addCount(def.work, 1)
 	}
 	end := p.tok.off + 1
-	if err := p.advance(); err != nil {
-		return err
-	}
-	if native := canonicalFor(def.name, p.src[start:end], formatDefs); native != "" {
-		def.native, def.body = native, nil
-	}
-	p.gates[def.name] = def
-	return nil
+	return end, p.advance()
 }
 
-// names reads a comma-separated list of distinct identifiers, none reserved and none in taken.
-func (p *parser) names(what string, taken []string) ([]string, error) {
+// names reads a comma-separated list of distinct identifiers, none of the reserved words and
+// none in taken.
+func (p *parser) names(what string, taken []string, words map[string]bool) ([]string, error) {
 	var out []string
 	for {
 		t, err := p.ident("a " + what)
@@ -93,7 +107,7 @@ func (p *parser) names(what string, taken []string) ([]string, error) {
 			return nil, err
 		}
 		s := string(t.text)
-		if reserved[s] {
+		if words[s] || s[0] == '$' {
 			return nil, p.errorf(t.off, "%s is a reserved word and cannot name a %s", s, what)
 		}
 		for _, o := range append(out, taken...) {
@@ -150,10 +164,25 @@ func (p *parser) bodyStatement(gate string, params, qubits []string) (bodyCall, 
 			b.args = append(b.args, compile(a))
 		}
 	}
+	qs, err := p.bodyQubits(gate, qubits)
+	if err != nil {
+		return b, err
+	}
+	b.qubits = qs
+	if want >= 0 && len(b.qubits) != want {
+		return b, p.errorf(t.off, "gate %s acts on %d qubit(s), got %d operand(s)", t.text, want, len(b.qubits))
+	}
+	return b, p.expect(";", "after the call")
+}
+
+// bodyQubits reads the operands of a call in the body of gate: names among the gate's qubit
+// arguments, without indices, none twice; it returns their positions.
+func (p *parser) bodyQubits(gate string, qubits []string) ([]int, error) {
+	var out []int
 	for {
 		q, err := p.ident("a qubit argument of " + gate)
 		if err != nil {
-			return b, err
+			return nil, err
 		}
 		k := -1
 		for i, name := range qubits {
@@ -161,32 +190,25 @@ func (p *parser) bodyStatement(gate string, params, qubits []string) (bodyCall, 
 				k = i
 			}
 		}
-		if k < 0 {
-			if p.tok.is("[") {
-				return b, p.errorf(p.tok.off, "indexing is not allowed in a gate body; use the gate's qubit arguments")
-			}
-			return b, p.errorf(q.off, "%s is not a qubit argument of gate %s", q.text, gate)
-		}
 		if p.tok.is("[") {
-			return b, p.errorf(p.tok.off, "indexing is not allowed in a gate body; use the gate's qubit arguments")
+			return nil, p.errorf(p.tok.off, "indexing is not allowed in a gate body; use the gate's qubit arguments")
 		}
-		for _, j := range b.qubits {
+		if k < 0 {
+			return nil, p.errorf(q.off, "%s is not a qubit argument of gate %s", q.text, gate)
+		}
+		for _, j := range out {
 			if j == k {
-				return b, p.errorf(q.off, "qubit %s used twice in one call", q.text)
+				return nil, p.errorf(q.off, "qubit %s used twice in one call", q.text)
 			}
 		}
-		b.qubits = append(b.qubits, k)
+		out = append(out, k)
 		if !p.tok.is(",") {
-			break
+			return out, nil
 		}
 		if err := p.advance(); err != nil {
-			return b, err
+			return nil, err
 		}
 	}
-	if want >= 0 && len(b.qubits) != want {
-		return b, p.errorf(t.off, "gate %s acts on %d qubit(s), got %d operand(s)", t.text, want, len(b.qubits))
-	}
-	return b, p.expect(";", "after the call")
 }
 
 // canonicalFor returns the circuit gate that the definition text def stands for, when name is a

@@ -55,6 +55,16 @@ var binaryLevel = func() map[string]int {
 	return m
 }()
 
+// expression reads an expression and evaluates it.
+func (p *parser3) expression() (*node, value, error) {
+	e, err := p.parseExpr3()
+	if err != nil {
+		return nil, value{}, err
+	}
+	v, err := p.eval(e)
+	return e, v, err
+}
+
 // parseExpr3 reads an expression.
 func (p *parser3) parseExpr3() (*node, error) { return p.binary3(0, 0) }
 

@@ -22,10 +22,19 @@ import (
 // here and are an error naming the op. Angles are printed in the shortest form that reads back
 // to the same float64.
 func Format(c *circuit.Circuit) ([]byte, error) {
+	if c == nil {
+		return nil, fmt.Errorf("qasm: Format of a nil circuit")
+	}
 	if err := c.Validate(); err != nil {
 		return nil, err
 	}
-	var q, cr []Register
+	q, cr := soleRegisters(c)
+	return write(c, q, cr, 2)
+}
+
+// soleRegisters returns the registers Format and Format3 write: q over every qubit and, when
+// the circuit has classical bits, c over every bit a measure writes or a condition reads.
+func soleRegisters(c *circuit.Circuit) (q, cr []Register) {
 	if c.Qubits() > 0 {
 		q = []Register{{Name: "q", Size: c.Qubits()}}
 	}
@@ -44,7 +53,7 @@ func Format(c *circuit.Circuit) ([]byte, error) {
 	if nc > 0 {
 		cr = []Register{{Name: "c", Size: nc}}
 	}
-	return write(c, q, cr, 2)
+	return q, cr
 }
 
 // FormatProgram writes the program's circuit with its own register names and sizes, so that

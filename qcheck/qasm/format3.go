@@ -92,24 +92,8 @@ func Format3(c *circuit.Circuit) ([]byte, error) {
 	if c == nil {
 		return nil, errorString("qasm: Format3 of a nil circuit")
 	}
-	p := &Program{Circuit: c, Version: 3}
-	if c.Qubits() > 0 {
-		p.Qregs = []Register{{Name: "q", Size: c.Qubits()}}
-	}
-	nc := c.Bits()
-	for _, op := range c.Ops {
-		for _, b := range op.Bits {
-			nc = max(nc, b+1)
-		}
-		if op.If != nil {
-			for _, b := range op.If.Bits {
-				nc = max(nc, b+1)
-			}
-		}
-	}
-	if nc > 0 {
-		p.Cregs = []Register{{Name: "c", Size: nc}}
-	}
+	q, cr := soleRegisters(c)
+	p := &Program{Circuit: c, Version: 3, Qregs: q, Cregs: cr}
 	return FormatProgram(p)
 }
 

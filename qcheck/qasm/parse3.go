@@ -284,6 +284,38 @@ func (p *parser3) width() (int, int, error) {
 	return int(n), off, p.expect("]", "after the size")
 }
 
+// registerHead reads the head of a register declaration: word q; word[n] q; or the old form
+// qreg q[n]; (creg for bits), where word is qubit or bit. It returns the name, the size, the
+// offset of the size (or of the declaration), and whether the register is a single qubit or bit.
+func (p *parser3) registerHead(word string) (name token, n, off int, single bool, err error) {
+	t := p.tok
+	if err := p.next(); err != nil {
+		return token{}, 0, 0, false, err
+	}
+	n, off, single = 1, t.off, true
+	size := func() error {
+		w, o, err := p.width()
+		if err == nil && w > 0 {
+			n, off, single = w, o, false
+		}
+		return err
+	}
+	if t.is(word) {
+		if err := size(); err != nil {
+			return token{}, 0, 0, false, err
+		}
+	}
+	if name, err = p.ident("a register name"); err != nil {
+		return token{}, 0, 0, false, err
+	}
+	if !t.is(word) {
+		if err := size(); err != nil {
+			return token{}, 0, 0, false, err
+		}
+	}
+	return name, n, off, single, nil
+}
+
 // newRegister declares a register of size n (single: a lone qubit or bit).
 func (p *parser3) newRegister(name token, quantum bool, n, off int, single bool) (*symbol, error) {
 	total := &p.nc
@@ -320,32 +352,9 @@ func (p *parser3) declareQubits() error {
 	if p.physical {
 		return p.errorf(t.off, "a source that uses physical qubits ($n) cannot declare qubits")
 	}
-	if err := p.next(); err != nil {
-		return err
-	}
-	n, off := 1, t.off
-	single := true
-	if t.is("qubit") {
-		w, o, err := p.width()
-		if err != nil {
-			return err
-		}
-		if w > 0 {
-			n, off, single = w, o, false
-		}
-	}
-	name, err := p.ident("a qubit register name")
+	name, n, off, single, err := p.registerHead("qubit")
 	if err != nil {
 		return err
-	}
-	if t.is("qreg") {
-		w, o, err := p.width()
-		if err != nil {
-			return err
-		}
-		if w > 0 {
-			n, off, single = w, o, false
-		}
 	}
 	if _, err := p.newRegister(name, true, n, off, single); err != nil {
 		return err
@@ -356,32 +365,9 @@ func (p *parser3) declareQubits() error {
 // declareBits reads bit c; bit[n] c; creg c[n]; with an optional initializer (= measure q or a
 // value known to be zero: bits start at 0 and the circuit cannot set them).
 func (p *parser3) declareBits() error {
-	t := p.tok
-	if err := p.next(); err != nil {
-		return err
-	}
-	n, off, single := 1, t.off, true
-	if t.is("bit") {
-		w, o, err := p.width()
-		if err != nil {
-			return err
-		}
-		if w > 0 {
-			n, off, single = w, o, false
-		}
-	}
-	name, err := p.ident("a bit register name")
+	name, n, off, single, err := p.registerHead("bit")
 	if err != nil {
 		return err
-	}
-	if t.is("creg") {
-		w, o, err := p.width()
-		if err != nil {
-			return err
-		}
-		if w > 0 {
-			n, off, single = w, o, false
-		}
 	}
 	s, err := p.newRegister(name, false, n, off, single)
 	if err != nil {
@@ -456,11 +442,7 @@ func (p *parser3) declareClassical() error {
 		if err := p.next(); err != nil {
 			return err
 		}
-		e, err := p.parseExpr3()
-		if err != nil {
-			return err
-		}
-		x, err := p.eval(e)
+		e, x, err := p.expression()
 		if err != nil {
 			return err
 		}
@@ -565,11 +547,7 @@ type bitTarget struct {
 // assignBits reads the expression of c = expression; bits start at 0 and a circuit has no way
 // to set them, so only a value that leaves every bit 0 where it is known to be 0 is accepted.
 func (p *parser3) assignBits(t bitTarget) error {
-	e, err := p.parseExpr3()
-	if err != nil {
-		return err
-	}
-	v, err := p.eval(e)
+	e, v, err := p.expression()
 	if err != nil {
 		return err
 	}
@@ -768,15 +746,9 @@ func (o qubitOperand) at(i int) int {
 
 // measureArrow reads measure q -> c;.
 func (p *parser3) measureArrow() error {
-	if err := p.next(); err != nil {
-		return err
-	}
-	qs, err := p.qubitOperands()
+	q, err := p.measured1()
 	if err != nil {
 		return err
-	}
-	if len(qs) != 1 {
-		return p.errorf(qs[1].off, "measure takes one qubit or register")
 	}
 	if !p.tok.is("->") {
 		return p.errorf(p.tok.off, "a measurement must write bits: measure q -> c; or c = measure q;")
@@ -788,7 +760,7 @@ func (p *parser3) measureArrow() error {
 	if err != nil {
 		return err
 	}
-	if err := p.measureOps(qs[0], t); err != nil {
+	if err := p.measureOps(q, t); err != nil {
 		return err
 	}
 	return p.expect(";", "after the measurement")
@@ -796,20 +768,29 @@ func (p *parser3) measureArrow() error {
 
 // measureInto reads the measure q; part of c = measure q;.
 func (p *parser3) measureInto(t bitTarget) error {
-	if err := p.next(); err != nil {
-		return err
-	}
-	qs, err := p.qubitOperands()
+	q, err := p.measured1()
 	if err != nil {
 		return err
 	}
-	if len(qs) != 1 {
-		return p.errorf(qs[1].off, "measure takes one qubit or register")
-	}
-	if err := p.measureOps(qs[0], t); err != nil {
+	if err := p.measureOps(q, t); err != nil {
 		return err
 	}
 	return p.expect(";", "after the measurement")
+}
+
+// measured1 reads measure and the one qubit, register or slice it measures.
+func (p *parser3) measured1() (qubitOperand, error) {
+	if err := p.next(); err != nil {
+		return qubitOperand{}, err
+	}
+	qs, err := p.qubitOperands()
+	if err != nil {
+		return qubitOperand{}, err
+	}
+	if len(qs) != 1 {
+		return qubitOperand{}, p.errorf(qs[1].off, "measure takes one qubit or register")
+	}
+	return qs[0], nil
 }
 
 // bitOperand reads c, c[i] or c[a:b] as a measurement's target.

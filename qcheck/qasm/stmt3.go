@@ -108,11 +108,7 @@ func (p *parser3) callStatement() error {
 		}
 		for !p.tok.is(")") {
 			at := p.tok.off
-			e, err := p.parseExpr3()
-			if err != nil {
-				return err
-			}
-			v, err := p.eval(e)
+			_, v, err := p.expression()
 			if err != nil {
 				return err
 			}
@@ -205,40 +201,12 @@ func (p *parser3) gateDecl3() error {
 		return p.errorf(name.off, "%s is already declared", name.text)
 	}
 	def := &gateDef{name: string(name.text), user: true, work: 1}
-	var params []string
-	if p.tok.is("(") {
-		if err := p.next(); err != nil {
-			return err
-		}
-		if !p.tok.is(")") {
-			if params, err = p.names3("parameter", nil); err != nil {
-				return err
-			}
-		}
-		if err := p.expect(")", "after the parameters"); err != nil {
-			return err
-		}
-	}
-	qubits, err := p.names3("qubit argument", params)
+	params, qubits, err := p.signature(reserved3)
 	if err != nil {
 		return err
 	}
-	def.nparams, def.nqubits, def.params = len(params), len(qubits), params
-	if err := p.expect("{", "to open the gate body"); err != nil {
-		return err
-	}
-	for !p.tok.is("}") {
-		if p.tok.kind == tEOF {
-			return p.errorf(p.tok.off, "gate %s: body not closed with }", def.name)
-		}
-		b, err := p.bodyStatement3(def.name, params, qubits)
-		if err != nil {
-			return err
-		}
-		def.body = append(def.body, b)
-	}
-	end := p.tok.off + 1
-	if err := p.next(); err != nil {
+	end, err := p.gateBody(def, params, qubits, func() (bodyCall, error) { return p.bodyStatement3(def.name, params, qubits) })
+	if err != nil {
 		return err
 	}
 	if native := canonicalFor(def.name, p.src[start:end], formatDefs3); native != "" {
@@ -246,33 +214,6 @@ func (p *parser3) gateDecl3() error {
 	}
 	p.gates[def.name] = def
 	return nil
-}
-
-// names3 reads a comma-separated list of distinct names, none reserved and none in taken.
-func (p *parser3) names3(what string, taken []string) ([]string, error) {
-	var out []string
-	for {
-		t, err := p.ident("a " + what)
-		if err != nil {
-			return nil, err
-		}
-		s := string(t.text)
-		if reserved3[s] || s[0] == '$' {
-			return nil, p.errorf(t.off, "%s cannot name a %s", s, what)
-		}
-		for _, o := range append(out, taken...) {
-			if o == s {
-				return nil, p.errorf(t.off, "%s is used twice in the gate's signature", s)
-			}
-		}
-		out = append(out, s)
-		if !p.tok.is(",") {
-			return out, nil
-		}
-		if err := p.next(); err != nil {
-			return nil, err
-		}
-	}
 }
 
 // bodyStatement3 reads one statement of a gate body.
@@ -342,36 +283,11 @@ func (p *parser3) bodyStatement3(gate string, params, qubits []string) (bodyCall
 			return b, p.next()
 		}
 	}
-	for {
-		q, err := p.ident("a qubit argument of " + gate)
-		if err != nil {
-			return b, err
-		}
-		k := -1
-		for i, name := range qubits {
-			if name == string(q.text) {
-				k = i
-			}
-		}
-		if k < 0 || p.tok.is("[") {
-			if p.tok.is("[") {
-				return b, p.errorf(p.tok.off, "indexing is not allowed in a gate body; use the gate's qubit arguments")
-			}
-			return b, p.errorf(q.off, "%s is not a qubit argument of gate %s", q.text, gate)
-		}
-		for _, j := range b.qubits {
-			if j == k {
-				return b, p.errorf(q.off, "qubit %s used twice in one call", q.text)
-			}
-		}
-		b.qubits = append(b.qubits, k)
-		if !p.tok.is(",") {
-			break
-		}
-		if err := p.next(); err != nil {
-			return b, err
-		}
+	qs, err := p.bodyQubits(gate, qubits)
+	if err != nil {
+		return b, err
 	}
+	b.qubits = qs
 	if want >= 0 && len(b.qubits) != want {
 		return b, p.errorf(t.off, "gate %s acts on %d qubit(s) here, got %d operand(s)", b.def.name, want, len(b.qubits))
 	}
