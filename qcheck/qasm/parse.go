@@ -538,7 +538,8 @@ func (p *parser) add(op circuit.Op) error {
 		return p.errorf(p.stmt, "the source expands to more than %d ops (see MaxOps)", p.cfg.maxOps)
 	}
 	n := len(op.Qubits) + len(op.Bits)
-	if p.cond != nil {
+	// A barrier does nothing, so a condition on it means nothing: it is left off.
+	if p.cond != nil && op.Gate.Name != "barrier" {
 		n += len(p.cond.Bits)
 		c := *p.cond
 		c.Bits = append([]int(nil), c.Bits...)

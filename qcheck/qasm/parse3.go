@@ -235,6 +235,9 @@ func (p *parser3) include3() error {
 	if t.kind != tString {
 		return p.errorf(t.off, "expected a file name in quotes after include, found %s", t.describe())
 	}
+	if string(t.text) == `"qelib1.inc"` {
+		return p.errorf(t.off, "qelib1.inc is the library of OpenQASM 2.0: start the file with OPENQASM 2.0; (a source without a header is read as OpenQASM 3)")
+	}
 	if string(t.text) != `"stdgates.inc"` {
 		return p.errorf(t.off, "cannot include %s: only \"stdgates.inc\" is known (it is built in, not read from disk)", t.text)
 	}

@@ -137,6 +137,7 @@ func TestParse3Errors(t *testing.T) {
 		{"OPENQASM 3;\nqubit q;\nx q;", 3, 1, "add include \"stdgates.inc\""},
 		{std + "qubit q;\nfoo q;", 4, 1, "unknown gate, name or statement foo"},
 		{std + "include \"other.inc\";", 3, 9, "only \"stdgates.inc\""},
+		{"include \"qelib1.inc\";\nqreg q[1];", 1, 9, "start the file with OPENQASM 2.0;"},
 		{std + "qubit[2] q;\nfor int i in [0:999999] { x q[0]; }", 4, 1, "for loop of 1000000 iterations: at most 131072"},
 		{std + "qubit[2] q;\nbit[2] c;\nif (c[0] || c[1]) x q[0];", 5, 10, "cannot be written as bits == value"},
 		{std + "qubit[2] q;\nbit[2] c;\nif (c[0]) { if (c[1]) x q[0]; }", 5, 13, "inside another"},
