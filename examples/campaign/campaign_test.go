@@ -156,7 +156,7 @@ func keeps(t *testing.T, pass qcheck.LayoutPass, in *circuit.Circuit, opts []qch
 // conjugation of Paulis by CNOT). So for a phase gate P on the target after it,
 // P_t·CX·Z_t = P_t·Z_t·Z_c·CX, while the wrong pass slides the Z through and merges it with P,
 // leaving (P·Z)_t·CX: the two differ by Z on the control, whose eigenphases 0 and π span a half
-// circle, a phase-free distance of 2·sin(π/4) = √2 (DESIGN.md's closed form).
+// circle, a phase-free distance of 2·sin(π/4) = √2 (package metric's documentation).
 func TestDemoCounterexampleIsReal(t *testing.T) {
 	f, err := campaign.Hunt(campaign.Peephole(), 1, campaign.DefaultChecks)
 	if err != nil {
