@@ -111,7 +111,7 @@ func circuitsSection(b *strings.Builder, p *page) {
 		return
 	}
 	if f.Input != nil {
-		writeCircuit(b, "input (as small as rapid could make it)", f.Input)
+		writeCircuit(b, "input (shrunk)", f.Input)
 		b.WriteString(wrapList("  as Go: ", []string{f.Input.GoString()}, ""))
 	}
 	switch f.Kind {
