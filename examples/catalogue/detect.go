@@ -1,12 +1,12 @@
 package catalogue
 
 import (
-	"flag"
 	"fmt"
 	"strconv"
 	"sync"
 
 	"pgregory.net/rapid"
+	"qcheck.dev/examples/campaign"
 	"qcheck.dev/qcheck"
 	"qcheck.dev/qcheck/circuit"
 )
@@ -89,30 +89,11 @@ var detecting sync.Mutex
 // rapidFlags sets rapid's seed and number of checks, with fail files off, and returns a function
 // that puts the old values back.
 func rapidFlags(seed uint64, checks int) (restore func(), err error) {
-	values := map[string]string{
+	return campaign.SetRapidFlags(map[string]string{
 		"rapid.seed":       strconv.FormatUint(seed, 10),
 		"rapid.checks":     strconv.Itoa(checks),
 		"rapid.nofailfile": "true",
-	}
-	old := map[string]string{}
-	restore = func() {
-		for name, v := range old {
-			flag.Set(name, v)
-		}
-	}
-	for name, v := range values {
-		f := flag.Lookup(name)
-		if f == nil {
-			restore()
-			return nil, fmt.Errorf("catalogue: rapid's flag -%s is not registered", name)
-		}
-		old[name] = f.Value.String()
-		if err := flag.Set(name, v); err != nil {
-			restore()
-			return nil, fmt.Errorf("catalogue: -%s=%s: %v", name, v, err)
-		}
-	}
-	return restore, nil
+	})
 }
 
 // quiet is the test handle Detect gives rapid.Check: the property never fails, and what rapid

@@ -28,34 +28,32 @@ func withMerge(extra peephole.MergeFunc) func(*circuit.Circuit) (*circuit.Circui
 	}}.Apply
 }
 
+// slidesThrough returns peephole.Commutes with one mistake: a gate of family is taken to commute
+// with every op of the gate through that it shares a qubit with.
+func slidesThrough(family map[string]bool, through string) func(a, b circuit.Op) bool {
+	return func(a, b circuit.Op) bool {
+		if a.Gate.Name == through {
+			a, b = b, a
+		}
+		if b.Gate.Name == through && family[a.Gate.Name] {
+			return true
+		}
+		return peephole.Commutes(a, b)
+	}
+}
+
 // xFamily are the single-qubit gates that commute with X.
 var xFamily = map[string]bool{"x": true, "rx": true, "sx": true, "sxdg": true}
 
 // xThroughControl lets X-like gates through a cx on either operand. They commute with the
 // target only: cx·(X⊗I)·cx = X⊗X (N&C §10.5.2, conjugation of Paulis by CNOT; control first).
-var xThroughControl = withCommutes(func(a, b circuit.Op) bool {
-	if a.Gate.Name == "cx" {
-		a, b = b, a
-	}
-	if b.Gate.Name == "cx" && xFamily[a.Gate.Name] {
-		return true
-	}
-	return peephole.Commutes(a, b)
-})
+var xThroughControl = withCommutes(slidesThrough(xFamily, "cx"))
 
 // zFamily are the single-qubit diagonal gates.
 var zFamily = map[string]bool{"z": true, "s": true, "sdg": true, "t": true, "tdg": true, "rz": true, "p": true}
 
 // hAsDiagonal lets h slide past diagonal gates; but h·z·h = x (N&C §4.2, exercise 4.14).
-var hAsDiagonal = withCommutes(func(a, b circuit.Op) bool {
-	if a.Gate.Name == "h" {
-		a, b = b, a
-	}
-	if b.Gate.Name == "h" && zFamily[a.Gate.Name] {
-		return true
-	}
-	return peephole.Commutes(a, b)
-})
+var hAsDiagonal = withCommutes(slidesThrough(zFamily, "h"))
 
 // cxCancelBlind cancels two cx on the same pair of qubits whatever their orientation; but
 // cx(a,b)·cx(b,a) is not the identity (three alternating cx make a swap, N&C §1.3.4, Fig. 1.7).
