@@ -1,0 +1,129 @@
+package sim
+
+import (
+	"math"
+	"slices"
+	"strings"
+)
+
+// Outcomes is the probability distribution of a program's classical bits at its end: the result
+// of a program as OpenQASM 2.0 defines it (every qubit and bit starts at 0; the registers are read
+// when the program ends). An outcome is written as a string of '0' and '1', bit n−1 first and bit
+// 0 last, as OpenQASM prints a register.
+type Outcomes struct {
+	bits int
+	p    map[string]float64 // key: packed bits, bit i in byte i/8 at position i%8
+
+	// Dropped is the total probability of the branches the engine dropped as impossible: each had
+	// probability below PruneBelow, and they are the only mass missing from the distribution.
+	Dropped float64
+}
+
+// PruneBelow is the probability under which a measurement branch counts as impossible. Rounding
+// leaves about 1e-32 on a branch that is exactly impossible; a branch as unlikely as 1e-20 changes
+// no distance by more than that, and Outcomes.Dropped says how much was dropped in all.
+const PruneBelow = 1e-20
+
+func newOutcomes(bits int) *Outcomes { return &Outcomes{bits: bits, p: map[string]float64{}} }
+
+// Bits returns the number of classical bits an outcome has.
+func (o *Outcomes) Bits() int { return o.bits }
+
+// Len returns the number of outcomes with nonzero probability.
+func (o *Outcomes) Len() int { return len(o.p) }
+
+// Probability returns the probability of an outcome written bit n−1 first ("101" is bit 0 and
+// bit 2 set). Outcomes of the wrong length or with other characters have probability 0.
+func (o *Outcomes) Probability(outcome string) float64 {
+	if len(outcome) != o.bits || strings.Trim(outcome, "01") != "" {
+		return 0
+	}
+	k := make([]byte, (o.bits+7)/8)
+	for i := 0; i < o.bits; i++ {
+		if outcome[o.bits-1-i] == '1' {
+			k[i/8] |= 1 << (i % 8)
+		}
+	}
+	return o.p[string(k)]
+}
+
+// Support returns the outcomes with nonzero probability, sorted.
+func (o *Outcomes) Support() []string {
+	out := make([]string, 0, len(o.p))
+	for k := range o.p {
+		out = append(out, o.bits2string(k))
+	}
+	slices.Sort(out)
+	return out
+}
+
+func (o *Outcomes) bits2string(k string) string {
+	s := make([]byte, o.bits)
+	for i := 0; i < o.bits; i++ {
+		s[o.bits-1-i] = '0'
+		if i/8 < len(k) && k[i/8]>>(i%8)&1 == 1 {
+			s[o.bits-1-i] = '1'
+		}
+	}
+	return string(s)
+}
+
+// OutcomeGap is how far apart two outcome distributions are: their total-variation distance
+//
+//	TV(p, q) = ½ Σ_x |p(x) − q(x)|,
+//
+// the largest difference in probability the two give to any set of outcomes, and the single
+// outcome whose probabilities differ most.
+type OutcomeGap struct {
+	// Distance is the total-variation distance, computed from every outcome (not sampled).
+	Distance float64
+	// Outcome is the outcome with the largest |Want − Got|, bit n−1 first; empty when the
+	// distributions are equal.
+	Outcome string
+	// Want and Got are the probabilities the two distributions give Outcome.
+	Want, Got float64
+}
+
+// TotalVariation returns the exact total-variation distance between two outcome distributions
+// and the outcome whose probability differs most. A distribution with fewer bits is read as
+// having the missing high bits at 0: a bit no program writes stays at its initial 0.
+func TotalVariation(want, got *Outcomes) OutcomeGap {
+	bits := max(want.bits, got.bits)
+	wp, gp := want.padded(bits), got.padded(bits)
+	var g OutcomeGap
+	sum, best := 0.0, 0.0
+	consider := func(k string, a, b float64) {
+		d := math.Abs(a - b)
+		sum += d
+		if d > best || d == best && d > 0 && k < g.Outcome {
+			best, g.Outcome, g.Want, g.Got = d, k, a, b
+		}
+	}
+	for k, a := range wp {
+		consider(k, a, gp[k])
+	}
+	for k, b := range gp {
+		if _, ok := wp[k]; !ok {
+			consider(k, 0, b)
+		}
+	}
+	g.Distance = min(1, sum/2)
+	if best == 0 {
+		return OutcomeGap{Distance: g.Distance}
+	}
+	g.Outcome = (&Outcomes{bits: bits}).bits2string(g.Outcome)
+	return g
+}
+
+// padded returns the distribution keyed as outcomes of the given number of bits (at least o's).
+func (o *Outcomes) padded(bits int) map[string]float64 {
+	n := (bits + 7) / 8
+	if n == (o.bits+7)/8 {
+		return o.p
+	}
+	out := make(map[string]float64, len(o.p))
+	for k, p := range o.p {
+		out[k+strings.Repeat("\x00", n-len(k))] = p
+	}
+	return out
+}
