@@ -1,0 +1,290 @@
+package sim
+
+import (
+	"fmt"
+	"testing"
+
+	"gonum.org/v1/gonum/mat"
+	"pgregory.net/rapid"
+	"qcheck.dev/gen"
+	"qcheck.dev/qcheck/circuit"
+)
+
+// controlled returns the gate g controlled by k qubits placed before its operands: the identity
+// except on the block where every control is 1, which holds g's matrix.
+func controlled(t *rapid.T, g circuit.Gate, k int) circuit.Gate {
+	m := g.Elements()
+	d := 1 << g.Qubits()
+	D := d << k
+	full := mat.NewCDense(D, D, nil)
+	for i := 0; i < D-d; i++ {
+		full.Set(i, i, 1)
+	}
+	for i := 0; i < d; i++ {
+		for j := 0; j < d; j++ {
+			full.Set(D-d+i, D-d+j, m[i*d+j])
+		}
+	}
+	cg, err := circuit.Custom(fmt.Sprintf("c%d_%s", k, g.Name), full)
+	if err != nil {
+		t.Fatal(err)
+	}
+	return cg
+}
+
+// deferred rewrites a program by the principle of deferred measurement (Nielsen & Chuang §4.4):
+// each measurement becomes a CNOT onto a fresh ancilla, which then stands for its bit; each
+// reset becomes a CNOT onto a fresh ancilla and a CNOT back, which returns the qubit to 0 and
+// carries the discarded value off; each classically controlled gate becomes the gate controlled
+// by the ancillas of the bits it reads (with x before and after where a bit must be 0); and the
+// ancillas are measured into their bits at the end. The result measures only at the end.
+func deferred(t *rapid.T, c *circuit.Circuit) *circuit.Circuit {
+	extra := 0
+	for _, op := range c.Ops {
+		if op.Gate.Name == "measure" || op.Gate.Name == "reset" {
+			extra++
+		}
+	}
+	n := c.Qubits()
+	d := circuit.New(n + extra).SetBits(c.Bits())
+	source := map[int]int{} // bit → ancilla holding it
+	next := n
+	for _, op := range c.Ops {
+		switch op.Gate.Name {
+		case "measure":
+			d.CX(op.Qubits[0], next)
+			source[op.Bits[0]] = next
+			next++
+			continue
+		case "reset":
+			d.CX(op.Qubits[0], next).CX(next, op.Qubits[0])
+			next++
+			continue
+		}
+		if op.If == nil {
+			d.AppendOp(op)
+			continue
+		}
+		var controls, flips []int
+		possible := true
+		for i, b := range op.If.Bits {
+			want1 := op.If.Value>>i&1 == 1
+			a, ok := source[b]
+			switch {
+			case !ok && want1: // the bit is still 0
+				possible = false
+			case ok:
+				controls = append(controls, a)
+				if !want1 {
+					flips = append(flips, a)
+				}
+			}
+		}
+		if op.If.Not {
+			// "differ": the gate acts unless every read bit matches. Apply it, then undo it
+			// where they all match: G, then (G⁻¹ controlled on the match).
+			plain := op
+			plain.If = nil
+			d.AppendOp(plain)
+			if !possible {
+				continue
+			}
+			op.Gate = op.Gate.Inverse()
+		}
+		if !possible {
+			continue
+		}
+		for _, a := range flips {
+			d.X(a)
+		}
+		g := op.Gate
+		if len(controls) > 0 {
+			g = controlled(t, op.Gate, len(controls))
+		}
+		d.Append(g, append(controls, op.Qubits...)...)
+		for _, a := range flips {
+			d.X(a)
+		}
+	}
+	for b, a := range source {
+		d.Measure(a, b)
+	}
+	return d
+}
+
+// programs draws small programs with every kind of step.
+func programs(qubits int, gates []string) *rapid.Generator[*circuit.Circuit] {
+	return gen.Program(gen.ProgramOptions{
+		Options: gen.Options{Qubits: qubits, MaxOps: 12, GateSet: gates, Motifs: -1},
+		Measure: 3, Reset: 2, If: 4,
+	})
+}
+
+func TestDeferredMeasurement(t *testing.T) {
+	// Nielsen & Chuang §4.4: measurements can always be moved to the end, classically
+	// controlled operations becoming quantum-controlled ones. The branch engine on the
+	// program and one statevector run on its deferred form must give the same distribution.
+	rapid.Check(t, func(t *rapid.T) {
+		c := programs(3, []string{"h", "x", "t", "cx", "ry", "s"}).Draw(t, "program")
+		d := deferred(t, c)
+		if d.Qubits() > 12 {
+			t.Skip("too many measurements for the deferred form")
+		}
+		g, err := ComparePrograms(c, d, ProgramOptions{})
+		if err != nil {
+			t.Fatal(err)
+		}
+		if g.Distance > 1e-9 {
+			t.Fatalf("program and its deferred form differ by %g at %s (%g, %g)\n%v\n%v", g.Distance, g.Outcome, g.Want, g.Got, c.Ops, d.Ops)
+		}
+	})
+}
+
+var cliffordGates = []string{"h", "s", "x", "cx", "sdg", "z", "y", "cz", "swap", "sx"}
+
+func TestCliffordProgramsAgainstStatevector(t *testing.T) {
+	// The stabilizer engine's affine sets against the branch engine's distributions, on
+	// Clifford programs of up to 12 qubits with measurements, resets and feed-forward.
+	for _, width := range []int{1, 2, 5, 12} {
+		t.Run(fmt.Sprint(width), func(t *testing.T) {
+			rapid.Check(t, func(t *rapid.T) {
+				gates := cliffordGates
+				if width == 1 {
+					gates = []string{"h", "s", "x", "sdg", "z", "y", "sx"}
+				}
+				c := gen.Program(gen.ProgramOptions{
+					Options: gen.Options{Qubits: width, MaxOps: 3 * width, GateSet: gates, Motifs: -1},
+					Measure: 3, Reset: 2, If: 4,
+				}).Draw(t, "program")
+				sv, err := ProgramOutcomes(c, ProgramOptions{})
+				if err != nil {
+					t.Skip(err)
+				}
+				st, err := StabilizerProgramOutcomes(c, ProgramOptions{})
+				if err != nil {
+					t.Fatal(err)
+				}
+				listed, err := st.Outcomes(1 << 16)
+				if err != nil {
+					t.Fatal(err)
+				}
+				if g := TotalVariation(sv, listed); g.Distance > 1e-9 {
+					t.Fatalf("stabilizer and statevector differ by %g at %s: %g against %g\n%v", g.Distance, g.Outcome, g.Got, g.Want, c.Ops)
+				}
+			})
+		})
+	}
+}
+
+func TestCliffordProgramGapsAgainstStatevector(t *testing.T) {
+	// The distance the stabilizer engine derives from two affine sets (or lists, for
+	// mixtures) against the distance between the statevector distributions.
+	rapid.Check(t, func(t *rapid.T) {
+		opts := gen.ProgramOptions{
+			Options: gen.Options{Qubits: 4, MaxOps: 8, GateSet: cliffordGates, Motifs: -1},
+			Measure: 3, Reset: 1, If: 3,
+		}
+		a := gen.Program(opts).Draw(t, "want")
+		b := gen.Program(opts).Draw(t, "got")
+		want, err := ComparePrograms(a, b, ProgramOptions{})
+		if err != nil {
+			t.Fatal(err)
+		}
+		got, err := CompareCliffordPrograms(a, b, ProgramOptions{})
+		if err != nil {
+			t.Fatal(err)
+		}
+		if d := want.Distance - got.Distance; d > 1e-9 || d < -1e-9 {
+			t.Fatalf("stabilizer distance %g, statevector %g\n%v\n%v", got.Distance, want.Distance, a.Ops, b.Ops)
+		}
+		if got.Distance > 0 {
+			// The worst outcome's probabilities must be the statevector's, and its gap the largest.
+			oa, _ := ProgramOutcomes(a, ProgramOptions{})
+			ob, _ := ProgramOutcomes(b, ProgramOptions{})
+			pa, pb := oa.Probability(got.Outcome), ob.Probability(got.Outcome)
+			if abs(pa-got.Want) > 1e-9 || abs(pb-got.Got) > 1e-9 || abs(abs(pa-pb)-abs(want.Want-want.Got)) > 1e-9 {
+				t.Fatalf("worst outcome %s: stabilizer says %g, %g; statevector %g, %g (largest gap %g)", got.Outcome, got.Want, got.Got, pa, pb, abs(want.Want-want.Got))
+			}
+		}
+	})
+}
+
+func abs(x float64) float64 { return max(x, -x) }
+
+func TestStabilizerFeedForward(t *testing.T) {
+	// Derived by hand. Outcomes are written c2 c1 c0.
+	x, h := gate(t, "x"), gate(t, "h")
+	cases := []struct {
+		name    string
+		program *circuit.Circuit
+		want    map[string]float64
+		uniform bool
+	}{{
+		// x on q2 when c0 = c1 = 1: c2 = c0·c1, not affine; a mixture of two sets.
+		name:    "and",
+		program: when(circuit.New(3).H(0).H(1).Measure(0, 0).Measure(1, 1), []int{0, 1}, 3, x, 2).Measure(2, 2),
+		want:    map[string]float64{"000": .25, "001": .25, "010": .25, "111": .25},
+	}, {
+		// x on q2 when c0 = 1 (a Pauli on one random bit): c2 = c0, one affine set.
+		name:    "copy",
+		program: when(circuit.New(3).H(0).Measure(0, 0), []int{0}, 1, x, 2).Measure(2, 2),
+		want:    map[string]float64{"000": .5, "101": .5},
+		uniform: true,
+	}, {
+		// h on q1 when c0 = 1: c1 = 0 if c0 = 0, uniform if c0 = 1.
+		name:    "hadamard",
+		program: when(circuit.New(2).H(0).Measure(0, 0), []int{0}, 1, h, 1).Measure(1, 1),
+		want:    map[string]float64{"00": .5, "01": .25, "11": .25},
+	}, {
+		// else branch: x on q1 unless c0 = 1, so c1 = 1 − c0.
+		name: "else",
+		program: circuit.New(2).H(0).Measure(0, 0).AppendOp(circuit.Op{Gate: x, Qubits: []int{1},
+			If: &circuit.Condition{Bits: []int{0}, Value: 1, Not: true}}).Measure(1, 1),
+		want:    map[string]float64{"10": .5, "01": .5},
+		uniform: true,
+	}, {
+		// reset of half a Bell pair: q0 reads 0, q1 stays random.
+		name:    "reset",
+		program: circuit.New(2).H(0).CX(0, 1).Reset(0).Measure(0, 0).Measure(1, 1),
+		want:    map[string]float64{"00": .5, "10": .5},
+		uniform: true,
+	}, {
+		// a measurement repeated gives the same value (N&C §2.2.3, projective measurement).
+		name:    "repeat",
+		program: circuit.New(2).H(0).S(0).H(0).Measure(0, 0).Measure(0, 1),
+		want:    map[string]float64{"00": .5, "11": .5},
+		uniform: true,
+	}}
+	for _, tc := range cases {
+		t.Run(tc.name, func(t *testing.T) {
+			st, err := StabilizerProgramOutcomes(tc.program, ProgramOptions{})
+			if err != nil {
+				t.Fatal(err)
+			}
+			if _, ok := st.Uniform(); ok != tc.uniform {
+				t.Errorf("Uniform = %v, want %v", ok, tc.uniform)
+			}
+			listed, err := st.Outcomes(100)
+			if err != nil {
+				t.Fatal(err)
+			}
+			checkDistribution(t, listed, tc.want)
+			checkDistribution(t, outcomes(t, tc.program), tc.want)
+		})
+	}
+}
+
+func TestStabilizerRefusals(t *testing.T) {
+	if _, err := StabilizerProgramOutcomes(circuit.New(1).T(0).Measure(0, 0), ProgramOptions{}); err == nil {
+		t.Error("t accepted")
+	}
+	// Twelve conditioned Hadamards on independent random bits need 2^12 parts.
+	c := circuit.New(13)
+	for i := 0; i < 12; i++ {
+		c.H(i).Measure(i, i)
+		when(c, []int{i}, 1, gate(t, "h"), 12)
+	}
+	if _, err := StabilizerProgramOutcomes(c, ProgramOptions{MaxBranches: 1000}); err == nil {
+		t.Error("4096 parts accepted with a limit of 1000")
+	}
+}
