@@ -143,7 +143,7 @@ func uniformGap(a, b *affineSet) OutcomeGap {
 	try := func(x []uint64, gap float64) {
 		if x != nil && gap > best {
 			best = gap
-			g.Outcome = bitString(x, a.bits)
+			g.Outcome = bitsString(string(wordsKey(x, a.bits)), a.bits)
 			g.Want, g.Got = 0, 0
 			if a.contains(x) {
 				g.Want = pa
@@ -164,13 +164,13 @@ func uniformGap(a, b *affineSet) OutcomeGap {
 	return g
 }
 
-// bitString writes a packed string of n bits, bit n−1 first.
-func bitString(x []uint64, n int) string {
-	s := make([]byte, n)
-	for i := 0; i < n; i++ {
-		s[n-1-i] = '0' + byte(x[i/64]>>(i%64)&1)
+// wordsKey packs a string of bits held 64 to a word as an outcome key, 8 to a byte.
+func wordsKey(x []uint64, bits int) []byte {
+	key := make([]byte, (bits+7)/8)
+	for i := range key {
+		key[i] = byte(x[i/8] >> (8 * (i % 8)))
 	}
-	return string(s)
+	return key
 }
 
 func xorInto(dst, src []uint64) {

@@ -343,23 +343,34 @@ func sameState(a, b *branch) bool {
 // off its state as a marginal distribution.
 func (e *branchRun) read(b *branch, finals []circuit.Op) {
 	if len(finals) == 0 {
-		e.out.p[string(b.bits)] += b.weight
+		e.out.add(b.bits, b.weight)
 		return
 	}
-	m := len(finals)
-	probs := make([]float64, 1<<m)
-	masks := make([]int, m)
-	for j, op := range finals {
-		masks[j] = 1 << op.Qubits[0]
-	}
-	for i, a := range b.state {
-		k := 0
-		for j, mk := range masks {
-			if i&mk != 0 {
-				k |= 1 << j
+	probs := marginal(b.state, finals)
+	if e.out.dense != nil {
+		// Outcome index = the run's bits with the final ones cleared, or'ed with k's bits
+		// moved to their places, a byte of k at a time.
+		base := &branch{bits: append([]byte(nil), b.bits...)}
+		tables := make([][256]int, (len(finals)+7)/8)
+		for j, op := range finals {
+			base.setBit(op.Bits[0], false)
+			for v := 0; v < 256; v++ {
+				if v>>(j%8)&1 == 1 {
+					tables[j/8][v] |= 1 << op.Bits[0]
+				}
 			}
 		}
-		probs[k] += real(a)*real(a) + imag(a)*imag(a)
+		x0 := denseIndex(base.bits)
+		for k, p := range probs {
+			if p != 0 {
+				x := x0
+				for t := range tables {
+					x |= tables[t][k>>(8*t)&255]
+				}
+				e.out.dense[x] += p
+			}
+		}
+		return
 	}
 	out := &branch{bits: make([]byte, len(b.bits))}
 	for k, p := range probs {
@@ -370,6 +381,34 @@ func (e *branchRun) read(b *branch, finals []circuit.Op) {
 		for j, op := range finals {
 			out.setBit(op.Bits[0], k>>j&1 == 1)
 		}
-		e.out.p[string(out.bits)] += p
+		e.out.add(out.bits, p)
 	}
+}
+
+// marginal returns the distribution of measuring the qubits of the measurements on state: entry k
+// holds the probability that measurement j reads bit j of k. The index of each amplitude is
+// mapped to k a byte at a time, through tables.
+func marginal(state []complex128, measures []circuit.Op) []float64 {
+	n := 0
+	for len(state) > 1<<n {
+		n++
+	}
+	tables := make([][256]int, (n+7)/8)
+	for j, op := range measures {
+		q := op.Qubits[0]
+		for v := 0; v < 256; v++ {
+			if v>>(q%8)&1 == 1 {
+				tables[q/8][v] |= 1 << j
+			}
+		}
+	}
+	probs := make([]float64, 1<<len(measures))
+	for i, a := range state {
+		k := 0
+		for t := range tables {
+			k |= tables[t][i>>(8*t)&255]
+		}
+		probs[k] += real(a)*real(a) + imag(a)*imag(a)
+	}
+	return probs
 }

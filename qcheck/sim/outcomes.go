@@ -11,8 +11,9 @@ import (
 // when the program ends). An outcome is written as a string of '0' and '1', bit n−1 first and bit
 // 0 last, as OpenQASM prints a register.
 type Outcomes struct {
-	bits int
-	p    map[string]float64 // key: packed bits, bit i in byte i/8 at position i%8
+	bits  int
+	dense []float64          // for up to denseBits bits: the probability of outcome x at index x
+	p     map[string]float64 // otherwise, by packed bits: bit i in byte i/8 at position i%8
 
 	// Dropped is the total probability of the branches the engine dropped as impossible: each had
 	// probability below PruneBelow, and they are the only mass missing from the distribution.
@@ -24,13 +25,78 @@ type Outcomes struct {
 // no distance by more than that, and Outcomes.Dropped says how much was dropped in all.
 const PruneBelow = 1e-20
 
-func newOutcomes(bits int) *Outcomes { return &Outcomes{bits: bits, p: map[string]float64{}} }
+// denseBits is the most bits whose outcomes are kept in an array (32 MiB) rather than a map: a
+// program that measures 20 qubits at the end has a million outcomes, and a map of them costs
+// seconds where the array costs milliseconds.
+const denseBits = 22
+
+func newOutcomes(bits int) *Outcomes {
+	if bits <= denseBits {
+		return &Outcomes{bits: bits, dense: make([]float64, 1<<bits)}
+	}
+	return &Outcomes{bits: bits, p: map[string]float64{}}
+}
+
+// add adds probability p to the outcome with packed bits key.
+func (o *Outcomes) add(key []byte, p float64) {
+	if o.dense != nil {
+		o.dense[denseIndex(key)] += p
+		return
+	}
+	o.p[string(key)] += p
+}
+
+func denseIndex(key []byte) int {
+	x := 0
+	for i, b := range key {
+		x |= int(b) << (8 * i)
+	}
+	return x
+}
+
+// sparse returns the nonzero probabilities keyed by packed bits, the keys as long as bits need.
+func (o *Outcomes) sparse(bits int) map[string]float64 {
+	n := (bits + 7) / 8
+	out := make(map[string]float64)
+	add := func(k string, p float64) {
+		if len(k) < n {
+			k += strings.Repeat("\x00", n-len(k))
+		}
+		out[k] = p
+	}
+	if o.dense == nil {
+		if n == (o.bits+7)/8 {
+			return o.p
+		}
+		for k, p := range o.p {
+			add(k, p)
+		}
+		return out
+	}
+	for x, p := range o.dense {
+		if p != 0 {
+			add(string(binaryKey(x, o.bits)), p)
+		}
+	}
+	return out
+}
 
 // Bits returns the number of classical bits an outcome has.
 func (o *Outcomes) Bits() int { return o.bits }
 
 // Len returns the number of outcomes with nonzero probability.
-func (o *Outcomes) Len() int { return len(o.p) }
+func (o *Outcomes) Len() int {
+	if o.dense == nil {
+		return len(o.p)
+	}
+	n := 0
+	for _, p := range o.dense {
+		if p != 0 {
+			n++
+		}
+	}
+	return n
+}
 
 // Probability returns the probability of an outcome written bit n−1 first ("101" is bit 0 and
 // bit 2 set). Outcomes of the wrong length or with other characters have probability 0.
@@ -44,25 +110,29 @@ func (o *Outcomes) Probability(outcome string) float64 {
 			k[i/8] |= 1 << (i % 8)
 		}
 	}
+	if o.dense != nil {
+		return o.dense[denseIndex(k)]
+	}
 	return o.p[string(k)]
 }
 
 // Support returns the outcomes with nonzero probability, sorted.
 func (o *Outcomes) Support() []string {
-	out := make([]string, 0, len(o.p))
-	for k := range o.p {
-		out = append(out, o.bits2string(k))
+	var out []string
+	for k := range o.sparse(o.bits) {
+		out = append(out, bitsString(k, o.bits))
 	}
 	slices.Sort(out)
 	return out
 }
 
-func (o *Outcomes) bits2string(k string) string {
-	s := make([]byte, o.bits)
-	for i := 0; i < o.bits; i++ {
-		s[o.bits-1-i] = '0'
+// bitsString writes packed bits, bit n−1 first.
+func bitsString(k string, n int) string {
+	s := make([]byte, n)
+	for i := 0; i < n; i++ {
+		s[n-1-i] = '0'
 		if i/8 < len(k) && k[i/8]>>(i%8)&1 == 1 {
-			s[o.bits-1-i] = '1'
+			s[n-1-i] = '1'
 		}
 	}
 	return string(s)
@@ -89,41 +159,51 @@ type OutcomeGap struct {
 // having the missing high bits at 0: a bit no program writes stays at its initial 0.
 func TotalVariation(want, got *Outcomes) OutcomeGap {
 	bits := max(want.bits, got.bits)
-	wp, gp := want.padded(bits), got.padded(bits)
 	var g OutcomeGap
 	sum, best := 0.0, 0.0
-	consider := func(k string, a, b float64) {
-		d := math.Abs(a - b)
-		sum += d
-		if d > best || d == best && d > 0 && k < g.Outcome {
-			best, g.Outcome, g.Want, g.Got = d, k, a, b
+	var bestKey string
+	if want.dense != nil && got.dense != nil && want.bits == got.bits {
+		bestX := 0
+		for x, a := range want.dense {
+			b := got.dense[x]
+			d := math.Abs(a - b)
+			sum += d
+			if d > best {
+				best, bestX, g.Want, g.Got = d, x, a, b
+			}
 		}
-	}
-	for k, a := range wp {
-		consider(k, a, gp[k])
-	}
-	for k, b := range gp {
-		if _, ok := wp[k]; !ok {
-			consider(k, 0, b)
+		bestKey = string(binaryKey(bestX, bits))
+	} else {
+		wp, gp := want.sparse(bits), got.sparse(bits)
+		consider := func(k string, a, b float64) {
+			d := math.Abs(a - b)
+			sum += d
+			if d > best || d == best && d > 0 && k < bestKey {
+				best, bestKey, g.Want, g.Got = d, k, a, b
+			}
+		}
+		for k, a := range wp {
+			consider(k, a, gp[k])
+		}
+		for k, b := range gp {
+			if _, ok := wp[k]; !ok {
+				consider(k, 0, b)
+			}
 		}
 	}
 	g.Distance = min(1, sum/2)
 	if best == 0 {
 		return OutcomeGap{Distance: g.Distance}
 	}
-	g.Outcome = (&Outcomes{bits: bits}).bits2string(g.Outcome)
+	g.Outcome = bitsString(bestKey, bits)
 	return g
 }
 
-// padded returns the distribution keyed as outcomes of the given number of bits (at least o's).
-func (o *Outcomes) padded(bits int) map[string]float64 {
-	n := (bits + 7) / 8
-	if n == (o.bits+7)/8 {
-		return o.p
+// binaryKey packs the low bits of x as an outcome key.
+func binaryKey(x, bits int) []byte {
+	k := make([]byte, (bits+7)/8)
+	for i := range k {
+		k[i] = byte(x >> (8 * i))
 	}
-	out := make(map[string]float64, len(o.p))
-	for k, p := range o.p {
-		out[k+strings.Repeat("\x00", n-len(k))] = p
-	}
-	return out
+	return k
 }

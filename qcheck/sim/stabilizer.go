@@ -56,11 +56,7 @@ func (s *StabilizerOutcomes) Outcomes(limit int) (*Outcomes, error) {
 					xorInto(x, p.set.basis[j])
 				}
 			}
-			key := make([]byte, (s.bits+7)/8)
-			for i := range key {
-				key[i] = byte(x[i/8] >> (8 * (i % 8)))
-			}
-			o.p[string(key)] += each
+			o.add(wordsKey(x, s.bits), each)
 		}
 	}
 	return o, nil
