@@ -9,10 +9,11 @@ import (
 
 // ProgramOptions configure Program: the gates as Options configure Circuit, and how often the
 // steps that make a circuit a program appear. The zero value is useful: programs on 3 qubits and
-// 3 classical bits with a mid-circuit measurement, a reset or a classically controlled gate
-// about once in every eight steps, and every qubit measured at the end.
+// 3 classical bits of up to 20 steps, about one in eight of them a mid-circuit measurement, a
+// reset or a classically controlled gate, with every qubit measured at the end.
 type ProgramOptions struct {
-	// Options configure the gates, as for Circuit. MaxOps counts gates only.
+	// Options configure the gates, as for Circuit, except that MinOps and MaxOps count every
+	// step (gates, measurements and resets) and that no motifs are drawn.
 	Options
 
 	// Bits is the number of classical bits; 0 means as many as qubits.
@@ -30,33 +31,39 @@ type ProgramOptions struct {
 }
 
 // Program returns a generator of programs: circuits with mid-circuit measurements, resets and
-// classically controlled gates, configured by opts (see ProgramOptions). A failing program
-// shrinks toward fewer gates (as Circuit's do), fewer measurements, resets and conditions
-// (each drawn as a choice between a step and none, the none shrinking first), lower qubits and
-// bits, and conditions on fewer bits. Every drawn program passes Validate; impossible options
-// fail every draw with an error naming the field.
+// classically controlled gates, configured by opts (see ProgramOptions). A program is a list of
+// steps, each a gate drawn as Circuit draws one, a measurement or a reset; a failing program
+// shrinks toward fewer steps (each can be removed on its own), gates rather than measurements
+// and resets, unconditioned gates, lower qubits and bits, and conditions on fewer bits. Every
+// drawn program passes Validate; impossible options fail every draw with an error naming the
+// field.
 func Program(opts ProgramOptions) *rapid.Generator[*circuit.Circuit] {
 	p, err := opts.resolve()
 	if err != nil {
 		return failing[*circuit.Circuit](err)
 	}
-	gates := Circuit(opts.Options)
+	one := opts.Options
+	one.MinOps, one.MaxOps, one.Motifs = 1, 1, -1
+	gates := Circuit(one)
+	step := rapid.Custom(func(t *rapid.T) circuit.Op {
+		switch drawWeighted(t, []int{10, p.weights[0], p.weights[1]}) {
+		case 1:
+			g, _ := circuit.NewGate("measure")
+			return circuit.Op{Gate: g, Qubits: []int{drawBelow(t, p.qubits)}, Bits: []int{drawBelow(t, p.bits)}}
+		case 2:
+			g, _ := circuit.NewGate("reset")
+			return circuit.Op{Gate: g, Qubits: []int{drawBelow(t, p.qubits)}}
+		}
+		op := gates.Draw(t, "gate").Ops[0]
+		if p.weights[2] > 0 && op.Gate.Name != "barrier" && drawWeighted(t, []int{10, p.weights[2]}) == 1 {
+			op.If = p.condition(t)
+		}
+		return op
+	})
+	steps := rapid.SliceOfN(step, p.minOps, p.maxOps)
 	return rapid.Custom(func(t *rapid.T) *circuit.Circuit {
-		skeleton := gates.Draw(t, "gates")
 		c := circuit.New(p.qubits).SetBits(p.bits)
-		for i := 0; ; i++ {
-			for extra := 0; extra < 2; extra++ {
-				if !p.step(t, c) {
-					break
-				}
-			}
-			if i == len(skeleton.Ops) {
-				break
-			}
-			op := skeleton.Ops[i]
-			if p.weights[2] > 0 && drawWeighted(t, []int{10, p.weights[2]}) == 1 {
-				op.If = p.condition(t)
-			}
+		for _, op := range steps.Draw(t, "steps") {
 			c.AppendOp(op)
 		}
 		if !opts.Unmeasured {
@@ -70,18 +77,17 @@ func Program(opts ProgramOptions) *rapid.Generator[*circuit.Circuit] {
 
 // programPlan is ProgramOptions resolved.
 type programPlan struct {
-	qubits, bits int
+	qubits, bits   int
+	minOps, maxOps int
 	weights      [3]int // measure, reset, if
 }
 
 func (o ProgramOptions) resolve() (*programPlan, error) {
-	if _, err := o.Options.resolve(); err != nil {
+	gates, err := o.Options.resolve()
+	if err != nil {
 		return nil, err
 	}
-	p := &programPlan{qubits: o.Qubits, bits: o.Bits}
-	if p.qubits == 0 {
-		p.qubits = defaultQubits
-	}
+	p := &programPlan{qubits: gates.qubits, bits: o.Bits, minOps: gates.minOps, maxOps: gates.maxOps}
 	if p.bits == 0 {
 		p.bits = p.qubits
 	}
@@ -97,19 +103,6 @@ func (o ProgramOptions) resolve() (*programPlan, error) {
 		}
 	}
 	return p, nil
-}
-
-// step draws nothing, a measurement or a reset, appends it, and reports whether it drew one.
-func (p *programPlan) step(t *rapid.T, c *circuit.Circuit) bool {
-	switch drawWeighted(t, []int{10, p.weights[0], p.weights[1]}) {
-	case 1:
-		c.Measure(drawBelow(t, p.qubits), drawBelow(t, p.bits))
-	case 2:
-		c.Reset(drawBelow(t, p.qubits))
-	default:
-		return false
-	}
-	return true
 }
 
 // condition draws a test of one or two distinct bits against a value, or its negation.
