@@ -79,7 +79,7 @@ func Program(opts ProgramOptions) *rapid.Generator[*circuit.Circuit] {
 type programPlan struct {
 	qubits, bits   int
 	minOps, maxOps int
-	weights      [3]int // measure, reset, if
+	weights        [3]int // measure, reset, if
 }
 
 func (o ProgramOptions) resolve() (*programPlan, error) {
