@@ -15,6 +15,9 @@ type ProgramOptions struct {
 	MaxBranches int
 	// MaxBytes bounds the memory of the statevectors held at once; 0 means 2 GiB.
 	MaxBytes int64
+	// Bits, when not nil, lists the classical bits a comparison reads: bit j of a compared
+	// outcome is bit Bits[j] of the program's (see Outcomes.Marginal). Nil reads them all.
+	Bits []int
 }
 
 func (o ProgramOptions) limits() (int, int64) {

@@ -215,3 +215,35 @@ func TestCompareFromZero(t *testing.T) {
 		t.Error("a measurement accepted by the zero-input comparison")
 	}
 }
+
+func TestMeasuredSubsetAndMarginals(t *testing.T) {
+	// By hand: h q0; cx q0,q1 makes a Bell pair (N&C §1.3.6). Measured on both qubits it reads
+	// 00 or 11; measured on qubit 1 alone, 0 or 1 with ½ each, the same as h q1 alone, while
+	// measured on both it differs from h q1 (|0⟩|+⟩ reads 00 or 10) by TV ½.
+	bell := circuit.New(2).H(0).CX(0, 1)
+	plus := circuit.New(2).H(1)
+	g, err := ComparePrograms(MeasureAtEnd(bell, 1), MeasureAtEnd(plus, 1), ProgramOptions{})
+	if err != nil || g.Distance > 1e-15 {
+		t.Errorf("qubit 1 alone: %+v, %v; want distance 0", g, err)
+	}
+	g, err = ComparePrograms(MeasureAtEnd(bell, 0, 1), MeasureAtEnd(plus, 0, 1), ProgramOptions{})
+	if err != nil || math.Abs(g.Distance-0.5) > 1e-15 {
+		t.Errorf("both qubits: %+v, %v; want distance ½", g, err)
+	}
+	// Reading only bit 1 of the measured Bell pair, in both engines.
+	a, b := MeasureAtEnd(bell, 0, 1), MeasureAtEnd(plus, 0, 1)
+	for name, compare := range map[string]func(a, b *circuit.Circuit, o ProgramOptions) (OutcomeGap, error){
+		"statevector": ComparePrograms, "stabilizer": CompareCliffordPrograms} {
+		g, err := compare(a, b, ProgramOptions{Bits: []int{1}})
+		if err != nil || g.Distance > 1e-15 {
+			t.Errorf("%s, bit 1 only: %+v, %v; want 0", name, g, err)
+		}
+		g, err = compare(a, b, ProgramOptions{Bits: []int{1, 0}})
+		if err != nil || math.Abs(g.Distance-0.5) > 1e-15 {
+			t.Errorf("%s, bits 1 and 0: %+v, %v; want ½", name, g, err)
+		}
+		if _, err := compare(a, b, ProgramOptions{Bits: []int{1, 1}}); err == nil {
+			t.Errorf("%s: a bit listed twice accepted", name)
+		}
+	}
+}

@@ -25,6 +25,12 @@ func ComparePrograms(want, got *circuit.Circuit, opts ProgramOptions) (OutcomeGa
 	if err != nil {
 		return OutcomeGap{}, err
 	}
+	if opts.Bits != nil {
+		if ow, err = ow.Marginal(opts.Bits); err != nil {
+			return OutcomeGap{}, err
+		}
+		og, _ = og.Marginal(opts.Bits) // the same list: no error twice
+	}
 	return TotalVariation(ow, og), nil
 }
 

@@ -138,20 +138,20 @@ func StabilizerProgramOutcomes(c *circuit.Circuit, opts ProgramOptions) (*Stabil
 	}
 	out := &StabilizerOutcomes{bits: nbits}
 	for _, r := range runs {
-		s := r.outcomeSet()
-		merged := false
-		for k := range out.parts {
-			if out.parts[k].set.equal(s) {
-				out.parts[k].weight += r.weight
-				merged = true
-				break
-			}
-		}
-		if !merged {
-			out.parts = append(out.parts, affinePart{set: s, weight: r.weight})
-		}
+		out.addPart(r.outcomeSet(), r.weight)
 	}
 	return out, nil
+}
+
+// addPart adds a set with its probability, merging it with an equal set already there.
+func (s *StabilizerOutcomes) addPart(set *affineSet, weight float64) {
+	for k := range s.parts {
+		if s.parts[k].set.equal(set) {
+			s.parts[k].weight += weight
+			return
+		}
+	}
+	s.parts = append(s.parts, affinePart{set: set, weight: weight})
 }
 
 // isPauliMap reports whether a gate conjugates every Pauli string to ± itself: a Pauli gate (up

@@ -28,6 +28,12 @@ func CompareCliffordPrograms(want, got *circuit.Circuit, opts ProgramOptions) (O
 	if err != nil {
 		return OutcomeGap{}, err
 	}
+	if opts.Bits != nil {
+		if ow, err = ow.Marginal(opts.Bits); err != nil {
+			return OutcomeGap{}, err
+		}
+		og, _ = og.Marginal(opts.Bits) // the same list: no error twice
+	}
 	return ow.gap(og)
 }
 
