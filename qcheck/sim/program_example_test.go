@@ -33,7 +33,7 @@ func ExampleCompareCliffordPrograms() {
 	dim, ok := st.Uniform()
 	fmt.Println("uniform:", ok, "over 2 ^", dim)
 	d := c.Clone()
-	d.Ops[len(d.Ops)-3] = circuit.Op{Gate: d.Ops[0].Gate, Qubits: []int{499}} // h → h on q499: same
+	d.Ops[len(d.Ops)-3] = circuit.Op{Gate: d.Ops[0].Gate, Qubits: []int{499}}  // h → h on q499: same
 	d.Ops = append(d.Ops[:len(d.Ops)-3:len(d.Ops)-3], d.Ops[len(d.Ops)-2:]...) // drop the last h
 	g, _ := sim.CompareCliffordPrograms(c, d, sim.ProgramOptions{})
 	fmt.Println("without the last h:", g.Distance)
