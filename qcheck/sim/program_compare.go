@@ -18,37 +18,38 @@ import (
 // PruneBelow per branch, and the returned gap does not account for it (it is in each
 // Outcomes.Dropped). An error says which program was refused and why.
 func ComparePrograms(want, got *circuit.Circuit, opts ProgramOptions) (OutcomeGap, error) {
-	if want == nil || got == nil {
-		return OutcomeGap{}, fmt.Errorf("sim: nil circuit")
-	}
-	ow, og, err := runPair(want, got, func(c *circuit.Circuit) (*Outcomes, error) { return ProgramOutcomes(c, opts) })
+	ow, og, err := runPair(want, got, opts, ProgramOutcomes)
 	if err != nil {
 		return OutcomeGap{}, err
-	}
-	if opts.Bits != nil {
-		if ow, err = ow.Marginal(opts.Bits); err != nil {
-			return OutcomeGap{}, err
-		}
-		og, _ = og.Marginal(opts.Bits) // the same list: no error twice
 	}
 	return TotalVariation(ow, og), nil
 }
 
-// runPair runs two programs concurrently, naming the one that fails.
-func runPair[T any](a, b *circuit.Circuit, run func(*circuit.Circuit) (T, error)) (ta, tb T, err error) {
+// runPair runs two programs concurrently, naming the one that fails, and keeps the bits
+// opts.Bits lists.
+func runPair[T interface{ Marginal([]int) (T, error) }](a, b *circuit.Circuit, opts ProgramOptions, run func(*circuit.Circuit, ProgramOptions) (T, error)) (ta, tb T, err error) {
+	if a == nil || b == nil {
+		return ta, tb, fmt.Errorf("sim: nil circuit")
+	}
 	var errB error
 	done := make(chan struct{})
 	go func() {
 		defer close(done)
-		tb, errB = run(b)
+		tb, errB = run(b, opts)
 	}()
-	ta, err = run(a)
+	ta, err = run(a, opts)
 	<-done
 	if err != nil {
 		return ta, tb, fmt.Errorf("sim: want program: %w", err)
 	}
 	if errB != nil {
 		return ta, tb, fmt.Errorf("sim: got program: %w", errB)
+	}
+	if opts.Bits != nil {
+		if ta, err = ta.Marginal(opts.Bits); err != nil {
+			return ta, tb, err
+		}
+		tb, _ = tb.Marginal(opts.Bits) // the same list: it cannot fail twice
 	}
 	return ta, tb, nil
 }
