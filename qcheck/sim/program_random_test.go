@@ -2,6 +2,7 @@ package sim
 
 import (
 	"fmt"
+	"strings"
 	"testing"
 
 	"gonum.org/v1/gonum/mat"
@@ -287,4 +288,122 @@ func TestStabilizerRefusals(t *testing.T) {
 	if _, err := StabilizerProgramOutcomes(c, ProgramOptions{MaxBranches: 1000}); err == nil {
 		t.Error("4096 parts accepted with a limit of 1000")
 	}
+}
+
+// scatter places a program's qubits at the given positions of a wider register, bits unchanged.
+func scatter(c *circuit.Circuit, width int, at []int) *circuit.Circuit {
+	d := circuit.New(width).SetBits(c.Bits())
+	for _, op := range c.Ops {
+		op = op.Clone()
+		for i, q := range op.Qubits {
+			op.Qubits[i] = at[q]
+		}
+		d.AppendOp(op)
+	}
+	return d
+}
+
+func TestStabilizerAtWidth(t *testing.T) {
+	// The tableau packs 64 rows to a word; small programs fit in one. The same programs with
+	// their qubits scattered over 150 (rows across five words, common practice: relabelling
+	// idle qubits changes nothing) must give the distributions the statevector gives.
+	rapid.Check(t, func(t *rapid.T) {
+		c := gen.Program(gen.ProgramOptions{
+			Options: gen.Options{Qubits: 6, MaxOps: 24, GateSet: cliffordGates, Motifs: -1},
+			Measure: 3, Reset: 2, If: 4,
+		}).Draw(t, "program")
+		at := rapid.Permutation(func() []int {
+			s := make([]int, 150)
+			for i := range s {
+				s[i] = i
+			}
+			return s
+		}()).Draw(t, "positions")[:6]
+		wide := scatter(c, 150, at)
+		sv, err := ProgramOutcomes(c, ProgramOptions{})
+		if err != nil {
+			t.Skip(err)
+		}
+		st, err := StabilizerProgramOutcomes(wide, ProgramOptions{})
+		if err != nil {
+			t.Fatal(err)
+		}
+		listed, err := st.Outcomes(1 << 16)
+		if err != nil {
+			t.Fatal(err)
+		}
+		if g := TotalVariation(sv, listed); g.Distance > 1e-9 {
+			t.Fatalf("at %v: stabilizer and statevector differ by %g at %s\n%v", at, g.Distance, g.Outcome, c.Ops)
+		}
+	})
+}
+
+func TestStabilizerGHZ(t *testing.T) {
+	// By hand (N&C §2.6 for the GHZ state): h and a chain of cx make (|0…0⟩ + |1…1⟩)/√2 on
+	// 1,000 qubits. Measuring qubit 0 mid-circuit picks 0…0 or 1…1; every later measurement
+	// repeats it. Resetting qubit 0 and measuring all 1,000 reads 0 on bit 0 and the common
+	// value elsewhere: a set of two outcomes, each with probability ½.
+	const n = 1000
+	c := circuit.New(n).H(0)
+	for q := 0; q+1 < n; q++ {
+		c.CX(q, q+1)
+	}
+	c.Measure(0, 0).Reset(0)
+	for q := 0; q < n; q++ {
+		c.Measure(q, q)
+	}
+	st, err := StabilizerProgramOutcomes(c, ProgramOptions{})
+	if err != nil {
+		t.Fatal(err)
+	}
+	if dim, ok := st.Uniform(); !ok || dim != 1 {
+		t.Fatalf("Uniform = %d, %v; want a set of 2", dim, ok)
+	}
+	listed, err := st.Outcomes(4)
+	if err != nil {
+		t.Fatal(err)
+	}
+	ones := strings.Repeat("1", n-1) + "0"
+	checkDistribution(t, listed, map[string]float64{strings.Repeat("0", n): 0.5, ones: 0.5})
+}
+
+func TestStabilizerRandomCliffordsAtWidth(t *testing.T) {
+	// Uniformly random Clifford unitaries (gen.Clifford) make stabilizers with X and Z parts
+	// spread over every qubit, so that a fixed measurement outcome is a product of many rows
+	// across words. Two of them, each followed by a measurement of every qubit, scattered over
+	// 150 qubits, against the statevector on 6.
+	rapid.Check(t, func(t *rapid.T) {
+		const k = 6
+		c := circuit.New(k).SetBits(2 * k)
+		c.Compose(gen.Clifford(k).Draw(t, "U"))
+		for q := 0; q < k; q++ {
+			c.Measure(q, q)
+		}
+		c.Compose(gen.Clifford(k).Draw(t, "V"))
+		for q := 0; q < k; q++ {
+			c.Measure(q, k+q)
+		}
+		at := rapid.Permutation(func() []int {
+			s := make([]int, 150)
+			for i := range s {
+				s[i] = i
+			}
+			return s
+		}()).Draw(t, "positions")[:k]
+		want, err := ProgramOutcomes(c, ProgramOptions{})
+		if err != nil {
+			t.Fatal(err)
+		}
+		st, err := StabilizerProgramOutcomes(scatter(c, 150, at), ProgramOptions{})
+		if err != nil {
+			t.Fatal(err)
+		}
+		listed, err := st.Outcomes(1 << 16)
+		if err != nil {
+			t.Fatal(err)
+		}
+		if g := TotalVariation(want, listed); g.Distance > 1e-9 {
+			t.Fatalf("at %v: stabilizer and statevector differ by %g at %s", at, g.Distance, g.Outcome)
+		}
+	})
 }
