@@ -46,7 +46,7 @@ func (s *StabilizerOutcomes) Marginal(bits []int) (*StabilizerOutcomes, error) {
 		}
 		return out
 	}
-	out := &StabilizerOutcomes{bits: len(bits)}
+	out := &StabilizerOutcomes{bits: len(bits), Deviation: s.Deviation}
 	for _, p := range s.parts {
 		gens := make([][]uint64, len(p.set.basis))
 		for i, v := range p.set.basis {

@@ -152,6 +152,11 @@ type OutcomeGap struct {
 	Outcome string
 	// Want and Got are the probabilities the two distributions give Outcome.
 	Want, Got float64
+	// Rounding bounds |Distance − d| for the distance d of the programs as written, when an
+	// engine computed with gates moved slightly (the stabilizer engine takes angles within
+	// CliffordTolerance of multiples of π/2 at those multiples); 0 when nothing was moved, NaN
+	// when the bound is unknown.
+	Rounding float64
 }
 
 // TotalVariation returns the exact total-variation distance between two outcome distributions

@@ -2,6 +2,7 @@ package sim
 
 import (
 	"fmt"
+	"math"
 	"strings"
 	"testing"
 
@@ -406,4 +407,21 @@ func TestStabilizerRandomCliffordsAtWidth(t *testing.T) {
 			t.Fatalf("at %v: stabilizer and statevector differ by %g at %s", at, g.Distance, g.Outcome)
 		}
 	})
+}
+
+func TestStabilizerRounding(t *testing.T) {
+	// rz(π/2 + 1e-13) is accepted as s, 1e-13 away in angle and so at most 1e-13 in operator
+	// norm; the comparison says so. A custom gate has no angle to bound by.
+	a := circuit.New(1).H(0).RZ(math.Pi/2+1e-13, 0).H(0).Measure(0, 0)
+	b := circuit.New(1).H(0).S(0).H(0).Measure(0, 0)
+	g, err := CompareCliffordPrograms(a, b, ProgramOptions{Bits: []int{0}})
+	if err != nil {
+		t.Fatal(err)
+	}
+	if g.Distance != 0 || g.Rounding < 0.9e-13 || g.Rounding > 1.1e-13 {
+		t.Errorf("%+v; want distance 0 within about 1e-13", g)
+	}
+	if g, _ := CompareCliffordPrograms(b, b, ProgramOptions{}); g.Rounding != 0 {
+		t.Errorf("rounding %g without angles, want 0", g.Rounding)
+	}
 }

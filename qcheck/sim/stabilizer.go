@@ -16,6 +16,14 @@ import (
 type StabilizerOutcomes struct {
 	bits  int
 	parts []affinePart
+
+	// Deviation bounds how far, in total variation, this distribution may be from the
+	// program's: gates with angles are taken at the multiples of π/2 they lie within
+	// CliffordTolerance of, and a gate moved by δ in operator norm moves any distribution that
+	// follows by at most δ (trace distance contracts under every later operation, N&C §9.2.1),
+	// so the bound is the sum of the gates' offsets (see CliffordDeviation). It is 0 when no
+	// angle was rounded, NaN when a custom gate leaves it unknown.
+	Deviation float64
 }
 
 type affinePart struct {
@@ -87,15 +95,18 @@ func StabilizerProgramOutcomes(c *circuit.Circuit, opts ProgramOptions) (*Stabil
 	first := &symbolicRun{t: identityTableau(c.Qubits()), bits: make([]affineBit, nbits), weight: 1}
 	runs := []*symbolicRun{first}
 	cache := mapCache{}
+	deviation := 0.0
 	for i, op := range c.Ops {
 		var m *pauliMap
 		if g := op.Gate.Name; g != "measure" && g != "reset" {
 			plain := op
 			plain.If = nil
 			var err error
-			if m, err = cache.lookup(i, plain); err != nil {
+			var d float64
+			if m, d, err = cache.lookup(i, plain); err != nil {
 				return nil, err
 			}
+			deviation += d
 			if m == nil {
 				continue
 			}
@@ -136,7 +147,9 @@ func StabilizerProgramOutcomes(c *circuit.Circuit, opts ProgramOptions) (*Stabil
 		}
 		runs = next
 	}
-	out := &StabilizerOutcomes{bits: nbits}
+	// Each term is an exact offset rounded once, and the sum adds one rounding per term, as
+	// CliffordDeviation rounds.
+	out := &StabilizerOutcomes{bits: nbits, Deviation: deviation * (1 + float64(len(c.Ops)+2)*0x1p-52)}
 	for _, r := range runs {
 		out.addPart(r.outcomeSet(), r.weight)
 	}

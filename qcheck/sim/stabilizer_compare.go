@@ -19,13 +19,16 @@ const enumerateLimit = 1 << 20
 //
 // with a worst outcome found by linear algebra over GF(2). When feed-forward made a mixture of
 // sets, two identical mixtures are at distance 0; others are listed outcome by outcome up to
-// 2^20 outcomes and refused beyond.
+// 2^20 outcomes and refused beyond. The distance is that of the programs with every gate at its
+// exact Clifford angle; Rounding says how far the programs' own may be.
 func CompareCliffordPrograms(want, got *circuit.Circuit, opts ProgramOptions) (OutcomeGap, error) {
 	ow, og, err := runPair(want, got, opts, StabilizerProgramOutcomes)
 	if err != nil {
 		return OutcomeGap{}, err
 	}
-	return ow.gap(og)
+	g, err := ow.gap(og)
+	g.Rounding = ow.Deviation + og.Deviation
+	return g, err
 }
 
 func (s *StabilizerOutcomes) gap(o *StabilizerOutcomes) (OutcomeGap, error) {
@@ -48,7 +51,7 @@ func (s *StabilizerOutcomes) gap(o *StabilizerOutcomes) (OutcomeGap, error) {
 // widen returns the distribution with outcomes of the given number of bits, the new high bits 0.
 func (s *StabilizerOutcomes) widen(bits int) *StabilizerOutcomes {
 	words := (bits + 63) / 64
-	out := &StabilizerOutcomes{bits: bits}
+	out := &StabilizerOutcomes{bits: bits, Deviation: s.Deviation}
 	for _, p := range s.parts {
 		grow := func(v []uint64) []uint64 { return append(append([]uint64(nil), v...), make([]uint64, words-len(v))...) }
 		gens := make([][]uint64, len(p.set.basis))
