@@ -82,9 +82,15 @@ func ProgramOutcomes(c *circuit.Circuit, opts ProgramOptions) (*Outcomes, error)
 	}
 	maxBranches = int(min(int64(maxBranches), maxBytes/(int64(16)<<n)))
 	final := finalMeasures(c)
+	finals := 0
+	for _, f := range final {
+		if f {
+			finals++
+		}
+	}
 	first := &branch{bits: make([]byte, (nbits+7)/8), state: make([]complex128, 1<<n), weight: 1}
 	first.state[0] = 1
-	e := &branchRun{branches: []*branch{first}, limit: maxBranches, out: newOutcomes(nbits)}
+	e := &branchRun{branches: []*branch{first}, limit: maxBranches, out: newOutcomes(nbits, finals)}
 	run := circuit.New(n)
 	flush := func() error {
 		if len(run.Ops) == 0 {
@@ -100,11 +106,11 @@ func ProgramOutcomes(c *circuit.Circuit, opts ProgramOptions) (*Outcomes, error)
 		run = circuit.New(n)
 		return nil
 	}
-	var finals []circuit.Op
+	var last []circuit.Op
 	for i, op := range c.Ops {
 		switch {
 		case final[i]:
-			finals = append(finals, op)
+			last = append(last, op)
 			continue
 		case op.Gate.Name == "barrier":
 			continue
@@ -123,7 +129,7 @@ func ProgramOutcomes(c *circuit.Circuit, opts ProgramOptions) (*Outcomes, error)
 		return nil, err
 	}
 	for _, b := range e.branches {
-		e.read(b, finals)
+		e.read(b, last)
 	}
 	return e.out, nil
 }

@@ -14,7 +14,7 @@ func (o *Outcomes) Marginal(bits []int) (*Outcomes, error) {
 	if err := checkBitList(bits); err != nil {
 		return nil, err
 	}
-	out := newOutcomes(len(bits))
+	out := newOutcomes(len(bits), len(bits))
 	key := make([]byte, (len(bits)+7)/8)
 	for k, p := range o.sparse(o.bits) {
 		clear(key)

@@ -25,13 +25,19 @@ type Outcomes struct {
 // no distance by more than that, and Outcomes.Dropped says how much was dropped in all.
 const PruneBelow = 1e-20
 
-// denseBits is the most bits whose outcomes are kept in an array (32 MiB) rather than a map: a
-// program that measures 20 qubits at the end has a million outcomes, and a map of them costs
-// seconds where the array costs milliseconds.
-const denseBits = 22
+// Outcomes are kept in an array indexed by the outcome when there are few bits, or when there are
+// up to denseBits and many of them are random (a program that measures 20 qubits at the end has
+// a million outcomes, and a map of them costs seconds where an array costs milliseconds); in a
+// map otherwise.
+const (
+	smallBits = 16
+	denseBits = 24 // 128 MiB
+)
 
-func newOutcomes(bits int) *Outcomes {
-	if bits <= denseBits {
+// newOutcomes returns an empty distribution over the given number of bits, of which up to
+// random may take both values.
+func newOutcomes(bits, random int) *Outcomes {
+	if bits <= smallBits || bits <= denseBits && random > smallBits {
 		return &Outcomes{bits: bits, dense: make([]float64, 1<<bits)}
 	}
 	return &Outcomes{bits: bits, p: map[string]float64{}}

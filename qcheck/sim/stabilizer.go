@@ -52,7 +52,7 @@ func (s *StabilizerOutcomes) Outcomes(limit int) (*Outcomes, error) {
 		}
 		total += 1 << p.set.dim()
 	}
-	o := newOutcomes(s.bits)
+	o := newOutcomes(s.bits, min(s.bits, bits.Len(uint(total))))
 	for _, p := range s.parts {
 		d := p.set.dim()
 		each := p.weight / float64(int(1)<<d)
