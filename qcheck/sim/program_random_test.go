@@ -142,6 +142,26 @@ func TestDeferredMeasurement(t *testing.T) {
 	})
 }
 
+// enginesAgree fails unless the statevector distribution of c and the stabilizer distribution
+// of wide (c, or c with its qubits placed elsewhere) are the same.
+func enginesAgree(t *rapid.T, c, wide *circuit.Circuit) {
+	sv, err := ProgramOutcomes(c, ProgramOptions{})
+	if err != nil {
+		t.Skip(err)
+	}
+	st, err := StabilizerProgramOutcomes(wide, ProgramOptions{})
+	if err != nil {
+		t.Fatal(err)
+	}
+	listed, err := st.Outcomes(1 << 16)
+	if err != nil {
+		t.Fatal(err)
+	}
+	if g := TotalVariation(sv, listed); g.Distance > 1e-9 {
+		t.Fatalf("stabilizer and statevector differ by %g at %s: %g against %g\n%v", g.Distance, g.Outcome, g.Got, g.Want, c.Ops)
+	}
+}
+
 var cliffordGates = []string{"h", "s", "x", "cx", "sdg", "z", "y", "cz", "swap", "sx"}
 
 func TestCliffordProgramsAgainstStatevector(t *testing.T) {
@@ -158,21 +178,7 @@ func TestCliffordProgramsAgainstStatevector(t *testing.T) {
 					Options: gen.Options{Qubits: width, MaxOps: 3 * width, GateSet: gates, Motifs: -1},
 					Measure: 3, Reset: 2, If: 4,
 				}).Draw(t, "program")
-				sv, err := ProgramOutcomes(c, ProgramOptions{})
-				if err != nil {
-					t.Skip(err)
-				}
-				st, err := StabilizerProgramOutcomes(c, ProgramOptions{})
-				if err != nil {
-					t.Fatal(err)
-				}
-				listed, err := st.Outcomes(1 << 16)
-				if err != nil {
-					t.Fatal(err)
-				}
-				if g := TotalVariation(sv, listed); g.Distance > 1e-9 {
-					t.Fatalf("stabilizer and statevector differ by %g at %s: %g against %g\n%v", g.Distance, g.Outcome, g.Got, g.Want, c.Ops)
-				}
+				enginesAgree(t, c, c)
 			})
 		})
 	}
@@ -320,22 +326,7 @@ func TestStabilizerAtWidth(t *testing.T) {
 			}
 			return s
 		}()).Draw(t, "positions")[:6]
-		wide := scatter(c, 150, at)
-		sv, err := ProgramOutcomes(c, ProgramOptions{})
-		if err != nil {
-			t.Skip(err)
-		}
-		st, err := StabilizerProgramOutcomes(wide, ProgramOptions{})
-		if err != nil {
-			t.Fatal(err)
-		}
-		listed, err := st.Outcomes(1 << 16)
-		if err != nil {
-			t.Fatal(err)
-		}
-		if g := TotalVariation(sv, listed); g.Distance > 1e-9 {
-			t.Fatalf("at %v: stabilizer and statevector differ by %g at %s\n%v", at, g.Distance, g.Outcome, c.Ops)
-		}
+		enginesAgree(t, c, scatter(c, 150, at))
 	})
 }
 
@@ -391,21 +382,7 @@ func TestStabilizerRandomCliffordsAtWidth(t *testing.T) {
 			}
 			return s
 		}()).Draw(t, "positions")[:k]
-		want, err := ProgramOutcomes(c, ProgramOptions{})
-		if err != nil {
-			t.Fatal(err)
-		}
-		st, err := StabilizerProgramOutcomes(scatter(c, 150, at), ProgramOptions{})
-		if err != nil {
-			t.Fatal(err)
-		}
-		listed, err := st.Outcomes(1 << 16)
-		if err != nil {
-			t.Fatal(err)
-		}
-		if g := TotalVariation(want, listed); g.Distance > 1e-9 {
-			t.Fatalf("at %v: stabilizer and statevector differ by %g at %s", at, g.Distance, g.Outcome)
-		}
+		enginesAgree(t, c, scatter(c, 150, at))
 	})
 }
 
