@@ -402,3 +402,12 @@ func TestStabilizerRounding(t *testing.T) {
 		t.Errorf("rounding %g without angles, want 0", g.Rounding)
 	}
 }
+
+func TestCliffordProgram(t *testing.T) {
+	if err := CliffordProgram(when(circuit.New(2).H(0).Measure(0, 0).Reset(0), []int{0}, 1, gate(t, "cx"), 0, 1)); err != nil {
+		t.Errorf("a Clifford program refused: %v", err)
+	}
+	if err := CliffordProgram(when(circuit.New(2).Measure(0, 0), []int{0}, 1, gate(t, "t"), 1)); err == nil || !strings.Contains(err.Error(), "op 1") {
+		t.Errorf("a conditioned t: %v, want an error naming op 1", err)
+	}
+}

@@ -167,6 +167,29 @@ func (s *StabilizerOutcomes) addPart(set *affineSet, weight float64) {
 	s.parts = append(s.parts, affinePart{set: set, weight: weight})
 }
 
+// CliffordProgram returns nil when StabilizerProgramOutcomes takes the program, as far as its
+// gates go (it may still refuse feed-forward that splits into too many parts), or an error
+// naming the first op that is not a Clifford gate.
+func CliffordProgram(c *circuit.Circuit) error {
+	if c == nil {
+		return fmt.Errorf("sim: nil circuit")
+	}
+	if err := c.Validate(); err != nil {
+		return err
+	}
+	cache := mapCache{}
+	for i, op := range c.Ops {
+		if g := op.Gate.Name; g == "measure" || g == "reset" {
+			continue
+		}
+		op.If = nil
+		if _, _, err := cache.lookup(i, op); err != nil {
+			return err
+		}
+	}
+	return nil
+}
+
 // isPauliMap reports whether a gate conjugates every Pauli string to ± itself: a Pauli gate (up
 // to phase), whose only effect on a tableau is on signs.
 func isPauliMap(m *pauliMap) bool {
