@@ -66,14 +66,17 @@ type StateGap struct {
 // Fidelity returns |⟨0|U†V|0⟩|², the probability that the state V|0⟩ passes a test for U|0⟩.
 func (g StateGap) Fidelity() float64 { a := cmplx.Abs(g.Overlap); return a * a }
 
+// fromZeroMaxQubits is the widest comparison from |0…0⟩: two statevectors of 1 GiB.
+const fromZeroMaxQubits = 26
+
 // CompareFromZero compares two unitary circuits of the same width on the one input |0…0⟩, the
 // promise a pass makes when it relies on qubits starting at 0: equal up to a global phase when
 // Distance is 0. It refuses circuits with measurements, resets or conditions (compare those as
-// programs) and widths a statevector cannot hold.
+// programs) and widths over 26 qubits.
 func CompareFromZero(want, got *circuit.Circuit) (StateGap, error) {
 	u, v, err := buildPair(want, got, "want", "got", func(c *circuit.Circuit) ([]complex128, error) {
-		if c.Qubits() > maxStateQubits || c.Qubits() > 34 {
-			return nil, fmt.Errorf("a %d-qubit statevector is too large to hold", c.Qubits())
+		if c.Qubits() > fromZeroMaxQubits {
+			return nil, fmt.Errorf("a %d-qubit statevector needs %s; this comparison holds two of at most %d qubits (1 GiB each)", c.Qubits(), bytesString(int64(16)<<min(c.Qubits(), 62)), fromZeroMaxQubits)
 		}
 		s := make([]complex128, 1<<c.Qubits())
 		s[0] = 1
