@@ -5,6 +5,7 @@ import (
 	"math"
 	"math/cmplx"
 
+	"qcheck.dev/metric"
 	"qcheck.dev/qcheck/circuit"
 )
 
@@ -86,6 +87,6 @@ func CompareFromZero(want, got *circuit.Circuit) (StateGap, error) {
 		return StateGap{}, err
 	}
 	g := StateGap{Overlap: dot(u, v)}
-	g.Distance = math.Min(alignedGap(u, v), math.Sqrt2)
+	g.Distance = math.Min(metric.AlignedDistance(u, v), math.Sqrt2)
 	return g, nil
 }
