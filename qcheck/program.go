@@ -82,8 +82,6 @@ func outcomeVerdict(cfg *config, r *Result, g sim.OutcomeGap, rounding float64) 
 	case g.Distance-rounding <= cfg.tol:
 		r.Undecided = fmt.Sprintf("the distance %.4g is within the rounding %.2g of the tolerance", g.Distance, rounding)
 	}
-	if g.Outcome != "" {
-		r.Outcome = &OutcomeEvidence{Bits: g.Outcome, Want: g.Want, Got: g.Got}
-	}
+	r.Outcome, r.OutcomeWant, r.OutcomeGot = g.Outcome, g.Want, g.Got
 	return nil
 }

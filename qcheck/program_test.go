@@ -17,7 +17,7 @@ func TestProgramsByDefault(t *testing.T) {
 	if err != nil {
 		t.Fatal(err)
 	}
-	if r.Equivalent || r.Distance != 1 || r.Meaning != "program" || r.Outcome == nil {
+	if r.Equivalent || r.Distance != 1 || r.Meaning != "program" || r.Outcome == "" {
 		t.Fatalf("swapped bits: %+v", r)
 	}
 	if !strings.Contains(r.Report(), "programs: the distributions of their classical bits") {

@@ -324,9 +324,9 @@ func ketOrder(n int) string {
 // bound.
 func (r Result) writeEvidence(b *strings.Builder) {
 	n := r.Qubits
-	if o := r.Outcome; o != nil {
+	if r.Outcome != "" {
 		b.WriteString("\noutcome that tells them apart (classical bits, the highest first):\n")
-		fmt.Fprintf(b, "  %s with probability %s after want, %s after got\n", o.Bits, prob(o.Want), prob(o.Got))
+		fmt.Fprintf(b, "  %s with probability %s after want, %s after got\n", r.Outcome, prob(r.OutcomeWant), prob(r.OutcomeGot))
 	}
 	if r.Measure == ZeroState {
 		fmt.Fprintf(b, "\noverlap ⟨0|want†·got|0⟩ = %.4g%+.4gi, fidelity %.4g\n", real(r.Overlap), imag(r.Overlap), real(r.Overlap)*real(r.Overlap)+imag(r.Overlap)*imag(r.Overlap))

@@ -83,18 +83,18 @@ type Result struct {
 	// "from zero" (the input |0…0⟩ only, see FromZero).
 	Meaning string
 	// Outcome, when programs or measured states from |0…0⟩ differ, is the outcome of the
-	// classical bits whose probability differs most. Nil otherwise.
-	Outcome *OutcomeEvidence
+	// classical bits whose probability differs most, bit n−1 first as OpenQASM writes a
+	// register ("10" is bit 1 set); empty otherwise. OutcomeWant and OutcomeGot are its
+	// probabilities after want and after got.
+	Outcome                 string
+	OutcomeWant, OutcomeGot float64
 	// Overlap is ⟨0|U†V|0⟩ when FromZero compared states; its squared modulus is their fidelity.
 	Overlap complex128
 }
 
-// OutcomeEvidence is an outcome of the classical bits at the end of two programs whose
-// probabilities differ most.
-type OutcomeEvidence struct {
-	// Bits is the outcome, bit n−1 first as OpenQASM writes a register ("10" is bit 1 set).
-	Bits string `json:"bits"`
-	// Want and Got are its probabilities after want and after got.
+// outcomeJSON is the JSON form of Result.Outcome and its probabilities.
+type outcomeJSON struct {
+	Bits string  `json:"bits"`
 	Want float64 `json:"want"`
 	Got  float64 `json:"got"`
 }
@@ -140,27 +140,27 @@ type Blame struct {
 // resultJSON is the JSON form of a Result. Amplitudes are [re, im] pairs; the circuits and the
 // options in words are left out (the caller has them).
 type resultJSON struct {
-	Equivalent       bool             `json:"equivalent"`
-	Undecided        string           `json:"undecided,omitempty"`
-	Distance         float64          `json:"distance"`
-	Measure          Measure          `json:"measure"`
-	Tolerance        float64          `json:"tolerance"`
-	ExactPhase       bool             `json:"exact_phase"`
-	Phase            float64          `json:"phase"`
-	OperatorDistance float64          `json:"operator_distance"`
-	Witness          [][2]float64     `json:"witness"`
-	WitnessGap       float64          `json:"witness_gap"`
-	Engine           Engine           `json:"engine"`
-	Certifies        string           `json:"certifies"`
-	Measurement      *Measurement     `json:"measurement,omitempty"`
-	Pauli            *PauliEvidence   `json:"pauli,omitempty"`
-	Blame            *Blame           `json:"blame,omitempty"`
-	Qubits           int              `json:"qubits"`
-	Measured         []int            `json:"measured,omitempty"`
-	Bits             []int            `json:"bits,omitempty"`
-	Meaning          string           `json:"meaning"`
-	Outcome          *OutcomeEvidence `json:"outcome,omitempty"`
-	Overlap          *[2]float64      `json:"overlap,omitempty"`
+	Equivalent       bool           `json:"equivalent"`
+	Undecided        string         `json:"undecided,omitempty"`
+	Distance         float64        `json:"distance"`
+	Measure          Measure        `json:"measure"`
+	Tolerance        float64        `json:"tolerance"`
+	ExactPhase       bool           `json:"exact_phase"`
+	Phase            float64        `json:"phase"`
+	OperatorDistance float64        `json:"operator_distance"`
+	Witness          [][2]float64   `json:"witness"`
+	WitnessGap       float64        `json:"witness_gap"`
+	Engine           Engine         `json:"engine"`
+	Certifies        string         `json:"certifies"`
+	Measurement      *Measurement   `json:"measurement,omitempty"`
+	Pauli            *PauliEvidence `json:"pauli,omitempty"`
+	Blame            *Blame         `json:"blame,omitempty"`
+	Qubits           int            `json:"qubits"`
+	Measured         []int          `json:"measured,omitempty"`
+	Bits             []int          `json:"bits,omitempty"`
+	Meaning          string         `json:"meaning"`
+	Outcome          *outcomeJSON   `json:"outcome,omitempty"`
+	Overlap          *[2]float64    `json:"overlap,omitempty"`
 }
 
 // MarshalJSON writes the result as one JSON object; see the Result type for its keys' meaning.
@@ -172,7 +172,10 @@ func (r Result) MarshalJSON() ([]byte, error) {
 		Tolerance: r.Tolerance, ExactPhase: r.ExactPhase, Phase: r.Phase,
 		OperatorDistance: r.OperatorDistance, Witness: make([][2]float64, len(r.Witness)),
 		WitnessGap: r.WitnessGap, Engine: r.Engine, Certifies: r.Certifies, Pauli: r.Pauli,
-		Qubits: r.Qubits, Measured: r.Measured, Bits: r.Bits, Meaning: r.Meaning, Outcome: r.Outcome,
+		Qubits: r.Qubits, Measured: r.Measured, Bits: r.Bits, Meaning: r.Meaning,
+	}
+	if r.Outcome != "" {
+		v.Outcome = &outcomeJSON{Bits: r.Outcome, Want: r.OutcomeWant, Got: r.OutcomeGot}
 	}
 	if r.Measure == ZeroState {
 		v.Overlap = &[2]float64{real(r.Overlap), imag(r.Overlap)}
