@@ -36,5 +36,5 @@ func (programEngine) compare(cfg *config, f *frame, r *Result, full bool) error 
 	if err != nil {
 		return fmt.Errorf("qcheck: %v", err)
 	}
-	return outcomeVerdict(cfg, r, g, 0)
+	return outcomeVerdict(cfg, r, g, g.Rounding)
 }

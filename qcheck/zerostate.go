@@ -37,7 +37,7 @@ func (zeroEngine) compare(cfg *config, f *frame, r *Result, full bool) error {
 		if err != nil {
 			return fmt.Errorf("qcheck: %v", err)
 		}
-		return outcomeVerdict(cfg, r, g, 0)
+		return outcomeVerdict(cfg, r, g, g.Rounding)
 	}
 	g, err := sim.CompareFromZero(f.want, f.got)
 	if err != nil {

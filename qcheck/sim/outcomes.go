@@ -158,10 +158,11 @@ type OutcomeGap struct {
 	Outcome string
 	// Want and Got are the probabilities the two distributions give Outcome.
 	Want, Got float64
-	// Rounding bounds |Distance − d| for the distance d of the programs as written, when an
-	// engine computed with gates moved slightly (the stabilizer engine takes angles within
-	// CliffordTolerance of multiples of π/2 at those multiples); 0 when nothing was moved, NaN
-	// when the bound is unknown.
+	// Rounding bounds |Distance − d| for the distance d of the programs as written, beyond
+	// floating-point rounding: the stabilizer engine takes angles within CliffordTolerance of
+	// multiples of π/2 at those multiples, and the branch engine drops branches below
+	// PruneBelow (missing mass m in one distribution moves the distance by at most m/2). 0 when
+	// neither happened, NaN when a custom gate leaves the bound unknown.
 	Rounding float64
 }
 

@@ -247,3 +247,18 @@ func TestMeasuredSubsetAndMarginals(t *testing.T) {
 		}
 	}
 }
+
+func TestDroppedBranches(t *testing.T) {
+	// ry(θ) then a measurement reads 1 with probability sin²(θ/2) (N&C §4.2): for θ = 1e-11
+	// that is 2.5e-23, below PruneBelow, so the branch is dropped and counted, and half of it
+	// bounds the error of a distance.
+	c := circuit.New(1).RY(1e-11, 0).Measure(0, 0).H(0)
+	o := outcomes(t, c)
+	if want := math.Pow(math.Sin(5e-12), 2); math.Abs(o.Dropped-want) > 1e-30 || o.Probability("1") != 0 {
+		t.Errorf("dropped %g, P(1) = %g; want %g dropped and 0", o.Dropped, o.Probability("1"), want)
+	}
+	g, err := ComparePrograms(c, circuit.New(1).Measure(0, 0), ProgramOptions{})
+	if err != nil || g.Distance > 1e-15 || math.Abs(g.Rounding-o.Dropped/2) > 1e-30 {
+		t.Errorf("%+v, %v; want distance 0 with rounding %g", g, err, o.Dropped/2)
+	}
+}

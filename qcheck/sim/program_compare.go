@@ -16,14 +16,16 @@ import (
 // more physical qubits), and a bit only one of them has is 0 in the other.
 //
 // Each distribution is computed by ProgramOutcomes; what it drops as impossible is below
-// PruneBelow per branch, and the returned gap does not account for it (it is in each
-// Outcomes.Dropped). An error says which program was refused and why.
+// PruneBelow per branch, and half the total dropped is the gap's Rounding. An error says which
+// program was refused and why.
 func ComparePrograms(want, got *circuit.Circuit, opts ProgramOptions) (OutcomeGap, error) {
 	ow, og, err := runPair(want, got, opts, ProgramOutcomes)
 	if err != nil {
 		return OutcomeGap{}, err
 	}
-	return TotalVariation(ow, og), nil
+	g := TotalVariation(ow, og)
+	g.Rounding = (ow.Dropped + og.Dropped) / 2
+	return g, nil
 }
 
 // runPair runs two programs concurrently, naming the one that fails, and keeps the bits
