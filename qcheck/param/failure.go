@@ -96,6 +96,9 @@ func refute(p *pair, tol float64, maxPoints int, seed uint64) (*Failure, error) 
 		return nil, err
 	}
 	f.Distance = d
+	if d > f.Worst {
+		f.Worst, f.WorstAt = d, f.At
+	}
 	return f, nil
 }
 
