@@ -199,7 +199,7 @@ func TestLebesgueBound(t *testing.T) {
 			return math.Sin(float64(n)*s/2) / den
 		}
 		worst := 0.0
-		steps := 200 * n
+		steps := 64 * n
 		for i := range steps {
 			x := 2 * math.Pi * float64(i) / float64(steps)
 			sum := 0.0

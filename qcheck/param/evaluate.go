@@ -128,6 +128,25 @@ func roundingAllowance(gates, dim int, angles float64) float64 {
 	return 0x1p-53 * (8*float64(gates+dim) + 2*angles)
 }
 
+// distance binds the pair at theta and returns the distance of its sides from the dense engine,
+// as distanceAt does.
+func (p *pair) distance(theta []float64) (float64, error) {
+	p.l.bind(theta)
+	p.r.bind(theta)
+	u, err := sim.Unitary(p.l.c)
+	if err != nil {
+		return 0, err
+	}
+	v, err := sim.Unitary(p.r.c)
+	if err != nil {
+		return 0, err
+	}
+	if p.exact {
+		return metric.Distance(u, v), nil
+	}
+	return metric.PhaseDistance(u, v), nil
+}
+
 // distanceAt binds both circuits at the values and returns their distance from the dense engine:
 // metric.PhaseDistance, or metric.Distance when the phase counts.
 func distanceAt(left, right *Circuit, values Values, exact bool) (float64, error) {

@@ -42,7 +42,7 @@ const (
 // refute searches the pair for its worst distance and, when that exceeds tol, a counterexample
 // with as few free parameters as shrinking can leave.
 func refute(p *pair, tol float64, maxPoints int, seed uint64) (*Failure, error) {
-	best, err := worstOn(p.left, p.right, p.exact, maxPoints, seed)
+	best, err := worstOn(p.left, p.right, p.exact, maxPoints, seed, math.Inf(1))
 	if err != nil {
 		return nil, err
 	}
@@ -52,9 +52,6 @@ func refute(p *pair, tol float64, maxPoints int, seed uint64) (*Failure, error) 
 		how = fmt.Sprintf("%d random points", best.points)
 	}
 	theta := slices.Clone(best.pt.theta)
-	eval := func(theta []float64) (float64, error) {
-		return distanceAt(p.left, p.right, point{theta: theta}.values(p.names), p.exact)
-	}
 	refined := best.dist
 	for range refineSweeps {
 		for k, d := range p.degrees {
@@ -62,7 +59,7 @@ func refute(p *pair, tol float64, maxPoints int, seed uint64) (*Failure, error) 
 			x, v, err := goldenMax(func(x float64) (float64, error) {
 				old := theta[k]
 				theta[k] = x
-				v, err := eval(theta)
+				v, err := p.distance(theta)
 				theta[k] = old
 				return v, err
 			}, theta[k]-h, theta[k]+h)
@@ -112,8 +109,8 @@ type worst struct {
 }
 
 // worstOn evaluates the distance of left and right at every point of their grid (or at random
-// points when the grid has more than maxPoints) and returns the worst.
-func worstOn(left, right *Circuit, exact bool, maxPoints int, seed uint64) (worst, error) {
+// points when the grid has more than maxPoints) and returns the worst, or the first above stop.
+func worstOn(left, right *Circuit, exact bool, maxPoints int, seed uint64, stop float64) (worst, error) {
 	p, err := newPair(left, right, exact)
 	if err != nil {
 		return worst{}, err
@@ -121,13 +118,16 @@ func worstOn(left, right *Circuit, exact bool, maxPoints int, seed uint64) (wors
 	pts := p.points(maxPoints, seed)
 	w := worst{names: p.names, dist: -1, points: pts.count(), random: pts.random}
 	for pt := range pts.all() {
-		d, err := distanceAt(left, right, pt.values(p.names), exact)
+		d, err := p.distance(pt.theta)
 		if err != nil {
 			return worst{}, err
 		}
 		if d > w.dist {
 			w.dist = d
 			w.pt = point{theta: slices.Clone(pt.theta), pi: slices.Clone(pt.pi)}
+		}
+		if d > stop {
+			break
 		}
 	}
 	return w, nil
@@ -143,7 +143,7 @@ func shrink(p *pair, tol float64, maxPoints int, seed uint64) (Values, map[strin
 		for _, s := range specialValues {
 			f, _ := s.Float64()
 			l, r := left.Substitute(name, f*math.Pi), right.Substitute(name, f*math.Pi)
-			w, err := worstOn(l, r, p.exact, maxPoints, seed)
+			w, err := worstOn(l, r, p.exact, maxPoints, seed, tol)
 			if err != nil {
 				return nil, nil, nil, err
 			}
@@ -153,7 +153,7 @@ func shrink(p *pair, tol float64, maxPoints int, seed uint64) (Values, map[strin
 			}
 		}
 	}
-	w, err := worstOn(left, right, p.exact, maxPoints, seed)
+	w, err := worstOn(left, right, p.exact, maxPoints, seed, math.Inf(1))
 	if err != nil {
 		return nil, nil, nil, err
 	}

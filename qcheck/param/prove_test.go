@@ -259,7 +259,7 @@ func TestProveErrors(t *testing.T) {
 		{"zero denominator", New(1).RZ(a.Times(1, 0), 0), New(1).RZ(a, 0), Options{}},
 		{"not finite", New(1).RZ(a.Plus(Const(math.Inf(1))), 0), New(1).RZ(a, 0), Options{}},
 		{"negative tolerance", New(1).RZ(a, 0), New(1).RZ(a, 0), Options{Tolerance: -1}},
-		{"too wide", New(MaxQubits + 1).RZ(a, 0), New(MaxQubits + 1).RZ(a, 0), Options{}},
+		{"too wide", New(MaxQubits+1).RZ(a, 0), New(MaxQubits+1).RZ(a, 0), Options{}},
 		{"too fine", New(1).RZ(a.Times(1, 1<<21), 0), New(1).RZ(a, 0), Options{}},
 		{"unitary only", New(1).Gate(circuit.Gate{Name: "measure"}, nil, 0), New(1), Options{}},
 	} {
