@@ -63,23 +63,21 @@ func (c *Circuit) Params() []string {
 	return slices.Compact(names)
 }
 
-// Append adds a gate with constant angles (its own Params), such as a custom gate, on the given
-// qubits.
-func (c *Circuit) Append(g circuit.Gate, qubits ...int) *Circuit {
-	angles := make([]Expr, len(g.Params))
-	for i, x := range g.Params {
-		angles[i] = Const(x)
-	}
-	g = g.Clone()
-	g.Params = nil
-	return c.Gate(g, angles, qubits...)
-}
+// Append adds a gate with constant angles (its own Params), such as a custom gate or one taken
+// from a circuit.Circuit, on the given qubits.
+func (c *Circuit) Append(g circuit.Gate, qubits ...int) *Circuit { return c.Gate(g, nil, qubits...) }
 
-// Gate adds the gate with the given angles on the given qubits; the builder methods call it.
+// Gate adds the gate with the given angles on the given qubits; the builder methods call it. With
+// no angles the gate keeps its own Params, as constant angles.
 func (c *Circuit) Gate(g circuit.Gate, angles []Expr, qubits ...int) *Circuit {
+	g = g.Clone()
 	if len(angles) == 0 {
 		angles = nil
+		for _, x := range g.Params {
+			angles = append(angles, Const(x))
+		}
 	}
+	g.Params = nil
 	c.Ops = append(c.Ops, Op{Gate: g, Angles: slices.Clone(angles), Qubits: slices.Clone(qubits)})
 	return c
 }

@@ -3,6 +3,9 @@ package param
 import (
 	"math"
 	"math/cmplx"
+	"slices"
+
+	"gonum.org/v1/gonum/mat"
 
 	"qcheck.dev/metric"
 	"qcheck.dev/qcheck/circuit"
@@ -87,11 +90,7 @@ func newPair(left, right *Circuit, exact bool) (*pair, error) {
 // phase counts), together with the rounding allowance η for that evaluation (package doc).
 func (p *pair) residual(theta []float64) (res, eta float64, err error) {
 	size := p.l.bind(theta) + p.r.bind(theta)
-	u, err := sim.Unitary(p.l.c)
-	if err != nil {
-		return 0, 0, err
-	}
-	v, err := sim.Unitary(p.r.c)
+	u, v, err := unitaries(p.l.c, p.r.c)
 	if err != nil {
 		return 0, 0, err
 	}
@@ -133,22 +132,10 @@ func roundingAllowance(gates, dim int, angles float64) float64 {
 func (p *pair) distance(theta []float64) (float64, error) {
 	p.l.bind(theta)
 	p.r.bind(theta)
-	u, err := sim.Unitary(p.l.c)
-	if err != nil {
-		return 0, err
-	}
-	v, err := sim.Unitary(p.r.c)
-	if err != nil {
-		return 0, err
-	}
-	if p.exact {
-		return metric.Distance(u, v), nil
-	}
-	return metric.PhaseDistance(u, v), nil
+	return denseDistance(p.l.c, p.r.c, p.exact)
 }
 
-// distanceAt binds both circuits at the values and returns their distance from the dense engine:
-// metric.PhaseDistance, or metric.Distance when the phase counts.
+// distanceAt binds both circuits at the values and returns their distance from the dense engine.
 func distanceAt(left, right *Circuit, values Values, exact bool) (float64, error) {
 	lc, err := left.Bind(values)
 	if err != nil {
@@ -158,11 +145,13 @@ func distanceAt(left, right *Circuit, values Values, exact bool) (float64, error
 	if err != nil {
 		return 0, err
 	}
-	u, err := sim.Unitary(lc)
-	if err != nil {
-		return 0, err
-	}
-	v, err := sim.Unitary(rc)
+	return denseDistance(lc, rc, exact)
+}
+
+// denseDistance returns metric.PhaseDistance of the dense unitaries of two circuits, or
+// metric.Distance when the phase counts.
+func denseDistance(left, right *circuit.Circuit, exact bool) (float64, error) {
+	u, v, err := unitaries(left, right)
 	if err != nil {
 		return 0, err
 	}
@@ -172,23 +161,20 @@ func distanceAt(left, right *Circuit, values Values, exact bool) (float64, error
 	return metric.PhaseDistance(u, v), nil
 }
 
-// mergeNames returns the sorted union of two sorted lists of names.
-func mergeNames(a, b []string) []string {
-	out := make([]string, 0, len(a)+len(b))
-	i, j := 0, 0
-	for i < len(a) || j < len(b) {
-		switch {
-		case j == len(b) || (i < len(a) && a[i] < b[j]):
-			out = append(out, a[i])
-			i++
-		case i == len(a) || b[j] < a[i]:
-			out = append(out, b[j])
-			j++
-		default:
-			out = append(out, a[i])
-			i++
-			j++
-		}
+// unitaries returns the dense unitaries of two circuits.
+func unitaries(left, right *circuit.Circuit) (u, v *mat.CDense, err error) {
+	if u, err = sim.Unitary(left); err != nil {
+		return nil, nil, err
 	}
-	return out
+	if v, err = sim.Unitary(right); err != nil {
+		return nil, nil, err
+	}
+	return u, v, nil
+}
+
+// mergeNames returns the sorted union of two lists of names.
+func mergeNames(a, b []string) []string {
+	out := append(slices.Clone(a), b...)
+	slices.Sort(out)
+	return slices.Compact(out)
 }

@@ -124,7 +124,7 @@ func worstOn(left, right *Circuit, exact bool, maxPoints int, seed uint64, stop 
 		}
 		if d > w.dist {
 			w.dist = d
-			w.pt = point{theta: slices.Clone(pt.theta), pi: slices.Clone(pt.pi)}
+			w.pt = pt.clone()
 		}
 		if d > stop {
 			break
@@ -163,7 +163,7 @@ func shrink(p *pair, tol float64, maxPoints int, seed uint64) (Values, map[strin
 		at[name], pi[name] = f*math.Pi, s
 	}
 	for i, name := range w.names {
-		at[name], pi[name] = w.pt.theta[i], w.pt.pi[i]
+		at[name], pi[name] = w.pt.theta[i], w.pt.pi(i)
 	}
 	return at, pi, w.names, nil
 }

@@ -5,6 +5,7 @@ import (
 	"math"
 	"math/big"
 	"math/rand/v2"
+	"slices"
 	"strings"
 )
 
@@ -243,12 +244,20 @@ func (r *Result) String() string {
 	return b.String()
 }
 
-// point is one assignment of the pair's parameters: theta in radians, and pi its exact value as
-// a multiple of π.
+// point is one assignment of the pair's parameters: theta in radians, and its exact value as a
+// multiple of π, num[k]/den[k] (den nil when not known).
 type point struct {
-	theta []float64
-	pi    []*big.Rat
+	theta    []float64
+	num, den []int64
 }
+
+// clone returns a copy of the point that later yields do not change.
+func (pt point) clone() point {
+	return point{theta: slices.Clone(pt.theta), num: slices.Clone(pt.num), den: slices.Clone(pt.den)}
+}
+
+// pi returns parameter k's value as a multiple of π.
+func (pt point) pi(k int) *big.Rat { return big.NewRat(pt.num[k], pt.den[k]) }
 
 // values returns the point as Values.
 func (pt point) values(names []string) Values {
@@ -306,12 +315,11 @@ func (s pointSet) count() int {
 func (s pointSet) all() func(func(point) bool) {
 	return func(yield func(point) bool) {
 		n := len(s.deg)
-		pt := point{theta: make([]float64, n), pi: make([]*big.Rat, n)}
+		pt := point{theta: make([]float64, n), num: make([]int64, n), den: make([]int64, n)}
 		set := func(k int, j, levels int64) {
 			// θ = 2π·L·j/levels, exactly π·(2·L·j/levels).
-			pt.pi[k] = big.NewRat(2*s.deg[k].Scale*j, levels)
-			f, _ := pt.pi[k].Float64()
-			pt.theta[k] = math.Pi * f
+			pt.num[k], pt.den[k] = 2*s.deg[k].Scale*j, levels
+			pt.theta[k] = math.Pi * (float64(pt.num[k]) / float64(levels))
 		}
 		if s.random {
 			for _, row := range s.draws {
