@@ -69,9 +69,18 @@ func (e Expr) Times(num, den int64) Expr {
 	if den == 0 {
 		return Expr{bad: fmt.Sprintf("Times(%d, %d) has a zero denominator", num, den)}
 	}
-	r := big.NewRat(num, den)
-	out := Expr{shift: e.shift * float64(num) / float64(den), bad: e.bad}
-	if num == 0 {
+	return e.TimesRat(big.NewRat(num, den))
+}
+
+// TimesRat returns r·e for any rational r, such as the exact value of a decimal literal (0.1 is
+// 1/10); a nil r is recorded as an error.
+func (e Expr) TimesRat(r *big.Rat) Expr {
+	if r == nil {
+		return Expr{bad: "TimesRat(nil)"}
+	}
+	f, _ := r.Float64()
+	out := Expr{shift: e.shift * f, bad: e.bad}
+	if r.Sign() == 0 {
 		out.shift = 0
 		return out
 	}

@@ -56,6 +56,10 @@ func TestExprArithmetic(t *testing.T) {
 	if !a.Plus(b).Equal(b.Plus(a)) || a.Equal(b) || !a.Neg().Neg().Equal(a) {
 		t.Error("Equal")
 	}
+	tenth, _ := new(big.Rat).SetString("0.1")
+	if got := a.Plus(Pi(1, 1)).TimesRat(tenth); got.Coef("a").Cmp(big.NewRat(1, 10)) != 0 || math.Abs(got.Constant()-math.Pi/10) > 1e-16 {
+		t.Errorf("0.1·(a + π) = %v", got)
+	}
 	if a.Times(0, 5).String() != "0" {
 		t.Errorf("0·a = %v", a.Times(0, 5))
 	}
