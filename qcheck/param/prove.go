@@ -192,8 +192,10 @@ func Prove(left, right *Circuit, opts Options) (*Result, error) {
 		return nil, err
 	}
 	res.Failure = f
-	if f.At != nil {
+	if f.At != nil && f.Distance > tol {
 		res.Verdict = Refuted
+	} else {
+		f.At, f.Pi, f.Needs = nil, nil, nil
 	}
 	return res, nil
 }
