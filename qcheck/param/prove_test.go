@@ -4,6 +4,7 @@ import (
 	"math"
 	"math/big"
 	"slices"
+	"strings"
 	"testing"
 
 	"qcheck.dev/metric"
@@ -252,21 +253,22 @@ func TestProveErrors(t *testing.T) {
 		name        string
 		left, right *Circuit
 		opts        Options
+		want        string // in the error
 	}{
-		{"widths", New(1).RZ(a, 0), New(2).RZ(a, 0), Options{}},
-		{"qubit out of range", New(1).RZ(a, 1), New(1).RZ(a, 0), Options{}},
-		{"bad name", New(1).RZ(Var("1a"), 0), New(1).RZ(a, 0), Options{}},
-		{"zero denominator", New(1).RZ(a.Times(1, 0), 0), New(1).RZ(a, 0), Options{}},
-		{"not finite", New(1).RZ(a.Plus(Const(math.Inf(1))), 0), New(1).RZ(a, 0), Options{}},
-		{"negative tolerance", New(1).RZ(a, 0), New(1).RZ(a, 0), Options{Tolerance: -1}},
-		{"too wide", New(MaxQubits+1).RZ(a, 0), New(MaxQubits+1).RZ(a, 0), Options{}},
-		{"too fine", New(1).RZ(a.Times(1, 1<<21), 0), New(1).RZ(a, 0), Options{}},
-		{"unitary only", New(1).Gate(circuit.Gate{Name: "measure"}, nil, 0), New(1), Options{}},
+		{"widths", New(1).RZ(a, 0), New(2).RZ(a, 0), Options{}, "left has 1 qubit(s) and right 2"},
+		{"qubit out of range", New(1).H(0).RZ(a, 1), New(1).RZ(a, 0), Options{}, "left: param: circuit: op 1 (rz): qubit 1 out of range"},
+		{"bad name", New(1).RZ(a, 0), New(1).RZ(Var("1a"), 0), Options{}, `right: param: op 0 (rz): angle 1: parameter name "1a" is not an identifier`},
+		{"zero denominator", New(1).RZ(a.Times(1, 0), 0), New(1).RZ(a, 0), Options{}, "zero denominator"},
+		{"not finite", New(1).RZ(a.Plus(Const(math.Inf(1))), 0), New(1).RZ(a, 0), Options{}, "constant +Inf is not finite"},
+		{"wrong number of angles", New(1).Gate(circuit.Gate{Name: "rz"}, []Expr{a, b}, 0), New(1), Options{}, "takes 1 angle(s), got 2"},
+		{"negative tolerance", New(1).RZ(a, 0), New(1).RZ(a, 0), Options{Tolerance: -1}, "tolerance -1"},
+		{"too wide", New(MaxQubits+1).RZ(a, 0), New(MaxQubits+1).RZ(a, 0), Options{}, "above the limit of 10"},
+		{"too fine", New(1).RZ(a.Times(1, 1<<21), 0), New(1).RZ(a, 0), Options{}, "parameter a: the denominators"},
+		{"unitary only", New(1).Gate(circuit.Gate{Name: "measure"}, nil, 0), New(1), Options{}, "measure"},
 	} {
-		if res, err := Prove(tc.left, tc.right, tc.opts); err == nil {
-			t.Errorf("%s: no error, result %v", tc.name, res)
-		} else {
-			t.Logf("%s: %v", tc.name, err)
+		res, err := Prove(tc.left, tc.right, tc.opts)
+		if err == nil || !strings.Contains(err.Error(), tc.want) {
+			t.Errorf("%s: got error %v (result %v), want one saying %q", tc.name, err, res, tc.want)
 		}
 	}
 }
