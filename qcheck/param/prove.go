@@ -207,7 +207,7 @@ func errorProbability(deg []Degree) float64 {
 	for _, x := range deg {
 		d += 2 * float64(x.Degree)
 	}
-	return math.Pow(d/randomLevels, randomPoints)
+	return math.Min(1, math.Pow(d/randomLevels, randomPoints))
 }
 
 // String says what was proved, refuted or left open, with the figures that support it.
