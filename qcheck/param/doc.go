@@ -81,10 +81,13 @@
 //	min over φ of ‖U − e^{iφ}V‖ = min over φ of ‖M − e^{iφ}I‖ ≤ ‖E‖ + |1 − |M_00|| ≤ 2·n·ρ,
 //
 // and with ExactPhase ‖U − V‖ = ‖M − I‖ ≤ n·ρ. Let r_j be the largest condition computed at grid
-// point j and η_j the rounding allowance of that evaluation: 2^−53·(8·(gates + n) + 2·Σ|φ|) over
-// the angles φ of both circuits at that point (a first-order estimate of the rounding in the
-// products, in M and in the angles themselves, generous by a wide margin but not a proven
-// floating-point bound). Prove reports
+// point j and η_j the rounding allowance of that evaluation: 2^−52·(8·(gates + n) + 2·Σ|φ|) over
+// the angles φ of both circuits at that point. It is a first-order estimate, not a proven
+// floating-point bound: applying a gate to a unit column costs at most about 8·2^−53 in norm (a
+// few rounded complex products and sums, and the gate's own entries), an entry of M = V†U adds
+// n·2^−53 by Cauchy–Schwarz, an angle of size |φ| is off by |φ|·2^−53, which moves its gate by at
+// most 2·|φ|·2^−53, and a condition M_ii − M_00 is the difference of two entries (the leading 2).
+// Prove reports
 //
 //	Result.Bound = (2)·n · Λ · max_j (r_j + η_j),
 //

@@ -120,11 +120,10 @@ func (p *pair) residual(theta []float64) (res, eta float64, err error) {
 	return res, roundingAllowance(p.gates, n, size), nil
 }
 
-// roundingAllowance is η, the allowance for rounding in one evaluation of a condition: about
-// 2^-53 per gate and per term of the final product, plus the rounding of the angles themselves
-// (an angle of size |φ| is off by up to |φ|·2^-53, which moves a gate by at most that much).
+// roundingAllowance is η, the allowance for rounding in one evaluation of a condition, derived
+// in the package documentation.
 func roundingAllowance(gates, dim int, angles float64) float64 {
-	return 0x1p-53 * (8*float64(gates+dim) + 2*angles)
+	return 0x1p-52 * (8*float64(gates+dim) + 2*angles)
 }
 
 // distance binds the pair at theta and returns the distance of its sides from the dense engine,
