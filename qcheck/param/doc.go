@@ -94,7 +94,7 @@
 // the factor 2 only up to phase, and the verdict [Proved] when Bound ≤ Tolerance. What is
 // certified is exactly this: for every real value of every parameter, the distance between the
 // two sides (PhaseDistance, or ‖U − V‖ with ExactPhase) is at most Bound, given that η bounds the
-// rounding of each evaluation. For the rules of the tests Bound is between 8e-14 and 1.3e-11, far
+// rounding of each evaluation. For the rules of the tests Bound is between 1.5e-13 and 2.6e-11, far
 // below the default tolerance 1e-9.
 //
 // # When the grid is too large
