@@ -5,6 +5,8 @@ import (
 	"math/big"
 	"strings"
 	"testing"
+
+	"qcheck.dev/qcheck/circuit"
 )
 
 func TestExprString(t *testing.T) {
@@ -89,5 +91,23 @@ func TestCircuitBind(t *testing.T) {
 	}
 	if s := c.String(); !strings.Contains(s, "cp(-a/2) q0,q1") || !strings.Contains(s, "u(a, b, π/4) q1") {
 		t.Errorf("String:\n%s", s)
+	}
+}
+
+func TestFromCircuit(t *testing.T) {
+	c := circuit.New(2).H(0).RZ(0.5, 1).U(1, 2, 3, 0).CX(0, 1)
+	p, err := FromCircuit(c)
+	if err != nil {
+		t.Fatal(err)
+	}
+	if len(p.Params()) != 0 {
+		t.Errorf("params %v", p.Params())
+	}
+	back, err := p.Bind(nil)
+	if err != nil || !back.Equal(c) {
+		t.Errorf("bound back to %v (%v), want %v", back, err, c)
+	}
+	if _, err := FromCircuit(circuit.New(1).Measure(0, 0)); err == nil {
+		t.Error("a measurement was accepted")
 	}
 }
