@@ -14,10 +14,9 @@ import (
 // circuits of the same small width whose qubit i is the rule's i-th operand.
 type Rule func(t *rapid.T) (left, right *circuit.Circuit)
 
-// Sides are what a rule returns: two circuits, or two parametric circuits of package param, whose
-// angles are affine expressions of named parameters (rz(a+b)). CheckRule proves a rule with
-// parametric sides for every value of its parameters instead of drawing them.
-type Sides interface {
+// sides are what a rule returns: two circuits, or two parametric circuits of package param, whose
+// angles are affine expressions of named parameters (rz(a+b)).
+type sides interface {
 	*circuit.Circuit | *param.Circuit
 }
 
@@ -53,7 +52,9 @@ var ruleContextGates = []string{"h", "x", "s", "t", "sdg", "rz", "rx", "cx", "cz
 // counterexample, and a pair that can be neither proved nor refuted fails as undecided. Step 2
 // then draws each parameter with gen.Angle, which favours branch points, and checks the pass on
 // the bound left side as above.
-func CheckRule[S Sides](t TB, rule func(t *rapid.T) (left, right S), pass Pass, opts ...Option) {
+func CheckRule[S interface {
+	*circuit.Circuit | *param.Circuit
+}](t TB, rule func(t *rapid.T) (left, right S), pass Pass, opts ...Option) {
 	t.Helper()
 	cfg, err := ruleConfig[S](rule == nil, opts)
 	if err != nil {
@@ -65,7 +66,9 @@ func CheckRule[S Sides](t TB, rule func(t *rapid.T) (left, right S), pass Pass, 
 
 // RuleProperty returns the property CheckRule checks, for rapid.Check and rapid.MakeFuzz (see
 // Property for the fuzz target). Bad options fail every check with their error.
-func RuleProperty[S Sides](rule func(t *rapid.T) (left, right S), pass Pass, opts ...Option) func(*rapid.T) {
+func RuleProperty[S interface {
+	*circuit.Circuit | *param.Circuit
+}](rule func(t *rapid.T) (left, right S), pass Pass, opts ...Option) func(*rapid.T) {
 	cfg, err := ruleConfig[S](rule == nil, opts)
 	if err != nil {
 		return func(t *rapid.T) { t.Fatalf("qcheck: %v", err) }
@@ -73,7 +76,7 @@ func RuleProperty[S Sides](rule func(t *rapid.T) (left, right S), pass Pass, opt
 	return ruleProperty(cfg, rule, pass)
 }
 
-func ruleConfig[S Sides](nilRule bool, opts []Option) (*config, error) {
+func ruleConfig[S sides](nilRule bool, opts []Option) (*config, error) {
 	if nilRule {
 		return nil, fmt.Errorf("the rule is nil")
 	}
@@ -91,7 +94,7 @@ func ruleConfig[S Sides](nilRule bool, opts []Option) (*config, error) {
 	return cfg, nil
 }
 
-func ruleProperty[S Sides](cfg *config, rule func(t *rapid.T) (left, right S), pass Pass) func(*rapid.T) {
+func ruleProperty[S sides](cfg *config, rule func(t *rapid.T) (left, right S), pass Pass) func(*rapid.T) {
 	var s subject
 	if pass != nil {
 		s = pass.subject()
