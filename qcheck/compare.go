@@ -36,6 +36,9 @@ func compare(cfg *config, want, got *circuit.Circuit, full bool) (Result, error)
 	if err != nil {
 		return Result{}, err
 	}
+	if err := checkWork(cfg, f, eng); err != nil {
+		return Result{}, err
+	}
 	r := Result{
 		Measure:    cfg.measure,
 		Tolerance:  cfg.tol,

@@ -256,12 +256,13 @@ type config struct {
 	measuredSet  bool
 	measure      Measure
 	engine       Engine
+	workLimit    float64
 }
 
 // newConfig applies opts over the defaults and checks that they fit together; checks that need
 // the circuits (ranges, widths) are done by layoutOf.
 func newConfig(opts []Option) (*config, error) {
-	c := &config{tol: DefaultTolerance}
+	c := &config{tol: DefaultTolerance, workLimit: DefaultWorkLimit}
 	if err := Options(opts).apply(c); err != nil {
 		return nil, err
 	}

@@ -7,6 +7,7 @@ import (
 	"io"
 	"strconv"
 	"strings"
+	"time"
 
 	"qcheck.dev/qcheck"
 	"qcheck.dev/qcheck/qasm"
@@ -22,6 +23,8 @@ type compareFlags struct {
 	dirty      bool
 	measure    string
 	engine     string
+	work       float64
+	timeout    time.Duration
 }
 
 func (f *compareFlags) register(fs *flag.FlagSet) {
@@ -33,6 +36,8 @@ func (f *compareFlags) register(fs *flag.FlagSet) {
 	fs.BoolVar(&f.dirty, "dirty", false, "the -ancillas start in any state and must be restored")
 	fs.StringVar(&f.measure, "measure", "operator", "`MEASURE` that decides: operator (norm), diamond, or fidelity (average infidelity)")
 	fs.StringVar(&f.engine, "engine", "auto", "`ENGINE` that answers: auto, dense, tableau (Clifford circuits) or matrix-free (see above)")
+	fs.Float64Var(&f.work, "work", qcheck.DefaultWorkLimit, "refuse, before starting, a comparison estimated to take more than `UNITS` amplitude updates")
+	fs.DurationVar(&f.timeout, "timeout", 0, "give up on a comparison after `DURATION` (such as 30s or 5m; 0: no limit), exit 2")
 }
 
 // engines maps the -engine names to qcheck's engines.
@@ -43,7 +48,10 @@ var engines = map[string]qcheck.Engine{
 
 // options turns the flags into qcheck options.
 func (f *compareFlags) options() ([]qcheck.Option, error) {
-	opts := []qcheck.Option{qcheck.Tolerance(f.tol)}
+	opts := []qcheck.Option{qcheck.Tolerance(f.tol), qcheck.WorkLimit(f.work)}
+	if f.timeout < 0 {
+		return nil, fmt.Errorf("-timeout %v: the timeout must not be negative", f.timeout)
+	}
 	if f.exactPhase {
 		opts = append(opts, qcheck.ExactPhase())
 	}
@@ -126,11 +134,36 @@ func (f *compareFlags) compareFiles(a, b string) (qcheck.Result, error) {
 			}
 		}
 	}
-	r, err := qcheck.Compare(pa.Circuit, pb.Circuit, opts...)
+	r, err := f.compareWithin(pa, pb, opts)
 	if err != nil {
 		return qcheck.Result{}, fmt.Errorf("%s vs %s: %v", a, b, err)
 	}
 	return r, nil
+}
+
+// compareWithin runs the comparison, giving up after the -timeout. A comparison given up on keeps
+// running on its goroutine until it ends (Compare cannot be interrupted); the command exits.
+func (f *compareFlags) compareWithin(pa, pb *qasm.Program, opts []qcheck.Option) (qcheck.Result, error) {
+	if f.timeout == 0 {
+		return qcheck.Compare(pa.Circuit, pb.Circuit, opts...)
+	}
+	type answer struct {
+		r   qcheck.Result
+		err error
+	}
+	done := make(chan answer, 1)
+	go func() {
+		r, err := qcheck.Compare(pa.Circuit, pb.Circuit, opts...)
+		done <- answer{r, err}
+	}()
+	timer := time.NewTimer(f.timeout)
+	defer timer.Stop()
+	select {
+	case a := <-done:
+		return a.r, a.err
+	case <-timer.C:
+		return qcheck.Result{}, fmt.Errorf("gave up after -timeout %v", f.timeout)
+	}
 }
 
 const equivAbout = `
@@ -148,7 +181,10 @@ circuits are Clifford (exact, thousands of qubits), else the matrix-free estimat
 qubits (runs on statevectors; the witness certifies a lower bound, the upper bound holds with a
 stated probability, and a pair neither bound settles is not counted as equivalent). The wide engines compare in operator norm up to global phase only, without
 -exact-phase, -measured or clean -ancillas; -engine dense forces the dense engine at any width
-its memory allows (16·4^n bytes a matrix, at most 4 GiB: 14 qubits), which may take hours.
+its memory allows (16·4^n bytes a matrix, at most 4 GiB: 14 qubits). Before starting, the
+command estimates the work of the chosen engine (dense: ops·4^n + 6·8^n amplitude updates;
+matrix-free: 60·ops·2^n) and refuses more than -work (default 1e12, a few minutes), with the
+estimate; -timeout gives up on a comparison after a wall-clock time.
 
 With -json, one JSON object:
   equivalent         true when distance ≤ tolerance
