@@ -25,6 +25,7 @@ type compareFlags struct {
 	engine     string
 	work       float64
 	timeout    time.Duration
+	limits     readLimits
 }
 
 func (f *compareFlags) register(fs *flag.FlagSet) {
@@ -38,6 +39,7 @@ func (f *compareFlags) register(fs *flag.FlagSet) {
 	fs.StringVar(&f.engine, "engine", "auto", "`ENGINE` that answers: auto, dense, tableau (Clifford circuits) or matrix-free (see above)")
 	fs.Float64Var(&f.work, "work", qcheck.DefaultWorkLimit, "refuse, before starting, a comparison estimated to take more than `UNITS` amplitude updates")
 	fs.DurationVar(&f.timeout, "timeout", 0, "give up on a comparison after `DURATION` (such as 30s or 5m; 0: no limit), exit 2")
+	f.limits.register(fs)
 }
 
 // engines maps the -engine names to qcheck's engines.
@@ -116,11 +118,11 @@ func (f *compareFlags) compareFiles(a, b string) (qcheck.Result, error) {
 	if err != nil {
 		return qcheck.Result{}, err
 	}
-	pa, err := load(a)
+	pa, err := f.limits.load(a)
 	if err != nil {
 		return qcheck.Result{}, err
 	}
-	pb, err := load(b)
+	pb, err := f.limits.load(b)
 	if err != nil {
 		return qcheck.Result{}, err
 	}
