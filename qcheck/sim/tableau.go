@@ -105,7 +105,7 @@ func compileClifford(c *circuit.Circuit) ([]cliffordOp, float64, error) {
 	if err := c.Validate(); err != nil {
 		return nil, 0, err
 	}
-	cache := mapCache{}
+	cache := newMapCache()
 	ops := make([]cliffordOp, 0, len(c.Ops))
 	dev := 0.0
 	for i, op := range c.Ops {
