@@ -43,7 +43,10 @@ func compareTableau(cfg *config, f *frame, r *Result) error {
 		r.Certifies += fmt.Sprintf("; angles off Clifford ones by %.2g in total, which bounds the distance of equivalent circuits", rounding)
 	}
 	if res.Equivalent {
+		// The exact Cliffords agree, so the circuits are at most rounding apart: the distance
+		// reported is that bound (0 when no angle was rounded).
 		r.Equivalent = true
+		r.Distance, r.OperatorDistance = rounding, rounding
 		return nil
 	}
 	anti := anticommute(res.Want, res.Got)
