@@ -9,7 +9,7 @@ VERDICT is equivalent / differs / refused (exit 2) / timeout / crash (any other 
 EXPECTED is the manifest's entry for the meaning that mode claims (default: unitary when no
 file measures, else program; -measured: allinputs).
 
-Usage: python3 run.py QCHECK [TIMEOUT_S] [NAME_REGEX] > results.tsv
+Usage: python3 run.py QCHECK [TIMEOUT_S] [NAME_REGEX] [MODE_REGEX] > results.tsv
 """
 import json
 import os
@@ -20,8 +20,10 @@ import sys
 qc = sys.argv[1]
 timeout = float(sys.argv[2]) if len(sys.argv) > 2 else 60
 pat = re.compile(sys.argv[3] if len(sys.argv) > 3 else '')
+modepat = re.compile(sys.argv[4] if len(sys.argv) > 4 else '')
 here = os.path.dirname(os.path.abspath(__file__))
 os.chdir(here)
+tf = '/tmp/realistic.%d.time' % os.getpid()
 for line in open('manifest.txt'):
     if line.startswith('#') or not line.strip():
         continue
@@ -31,12 +33,14 @@ for line in open('manifest.txt'):
     a, b = name + '.before.qasm', name + '.after.qasm'
     measures = 'measure' in open(a).read() + open(b).read()
     for mode in (['default', 'measured'] if measures else ['default']):
+        if not modepat.search(mode):
+            continue
         args = [qc, 'equiv', '-json'] + (['-measured'] if mode == 'measured' else []) + [a, b]
         expected = (pg if measures else un) if mode == 'default' else al
-        cmd = ['/usr/bin/time', '-f', '%e %U %S %M', '-o', '/tmp/realistic.time',
+        cmd = ['/usr/bin/time', '-f', '%e %U %S %M', '-o', tf,
                'timeout', str(int(timeout))] + args
         p = subprocess.run(cmd, capture_output=True)
-        wall, user, sys_, rss = open('/tmp/realistic.time').read().split('\n')[-2].split()[-4:]
+        wall, user, sys_, rss = open(tf).read().split('\n')[-2].split()[-4:]
         rc = p.returncode
         engine = dist = ''
         msg = p.stderr.decode(errors='replace').strip().split('\n')[0][:300]
