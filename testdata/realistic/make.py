@@ -629,6 +629,27 @@ def build():
         cc3.ops[k] = ('if', 'c', 2, G('x', [0]))
         pair('condc%s_wrongcond' % w, cc, cc3, NA, NA, D, 'condition c==1 changed to c==2 (never true there): q[0] keeps the measured value, so c[0] is uniform instead of 0')
 
+    # --- small probes of how final measurements are read (2 qubits)
+    ow = Prog(2, [('c', 2)])
+    ow.g('x', [0])
+    ow.ops += [('measure', 0, 'c', 0), ('measure', 1, 'c', 0)]
+    ow2 = Prog(2, [('c', 2)])
+    ow2.g('x', [0])
+    ow2.ops += [('measure', 0, 'c', 0)]
+    pair('probe002_overwrite', ow, ow2, NA, D, D,
+         'the reference writes c[0] twice, last from q[1] (0 from |00>), the other once from q[0] after x (1): c[0] differs with certainty')
+    tw = ow2.copy()
+    tw.ops.append(('measure', 0, 'c', 1))
+    pair('probe002_measuretwice', tw, ow2, NA, D, D,
+         'the reference measures q[0] (1 after x) into c[0] and again into c[1]; the other leaves c[1] = 0: outcome 11 against 01')
+    ga = Prog(2, [('c', 2)])
+    ga.g('h', [0])
+    ga.ops.append(('measure', 0, 'c', 0))
+    gb = ga.copy()
+    ga.g('x', [0])
+    pair('probe002_gateafter', ga, gb, NA, E, E,
+         'an x on q[0] after its last measurement changes no classical bit, for any input')
+
 
 def swap_measure_targets(p, value):
     """Swaps the classical targets of the measurements of bit 0 and the carry bit."""
