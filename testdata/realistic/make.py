@@ -535,6 +535,17 @@ def build():
                 wrong.ops[k] = ('measure', op[1], op[2], j1 if op[3] == j0 else j0)
         pair('bv%s_route_wrongmap' % w, b, wrong, NA, D, D,
              'routed, but the measurements of logical qubits %d and %d write each other\'s classical bits; those bits are 1 and 0 in s, so the outcome changes with certainty' % (j0, j1))
+        # the same GHZ and hidden-string circuits without measurement: unitary meaning (Clifford)
+        gu = unmeasured(g)
+        pair('ghz%s_u_basis' % w, gu, translate(gu), E, NA, NA, 'basis translation, no measurement: the same unitary up to a global phase (every rule exact)', (2, 3))
+        pair('ghz%s_u_dropcx' % w, gu, unmeasured(drop_op(g, lambda i, op: i == nth_gate(g, 'cx', n // 2))), D, NA, NA,
+             'one cx dropped, no measurement: d(A·CX·B, A·B) = d(CX, I) > 0 (unitary invariance)')
+        bu = unmeasured(b)
+        pair('bv%s_u_basis' % w, bu, translate(bu), E, NA, NA, 'basis translation, no measurement', (2, 3))
+        pair('bv%s_u_route' % w, bu, unmeasured(rb), D, NA, NA,
+             'routed with swaps but no measurement to relabel: the routed unitary is the original followed by a qubit permutation that is not the identity (final layout moved the ancilla), so they differ without -perm')
+        pair('bv%s_u_diag' % w, unmeasured(add_final_diagonals(b, random.Random(n))), bu, D, NA, NA,
+             'trailing diagonal gates (rz of a random angle, cz, t, cp(0.7)) removed with no measurement after them: the unitaries differ by that diagonal, which is not a scalar')
         # --- inverse QFT on a Fourier state
         k = rng.getrandbits(n) | 1
         k &= ~2  # bit 1 is 0, bit 0 is 1
