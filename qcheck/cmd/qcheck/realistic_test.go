@@ -85,20 +85,30 @@ func readRealistic(t *testing.T) []realisticPair {
 	return out
 }
 
-// expected returns the verdict the pair must have in the meaning a run of the command claims:
-// without -measured, the unitary (files without measurements) or the program as OpenQASM 2.0
-// defines it (files that measure: qubits and bits start at 0, the joint distribution of the
-// classical bits at the end); with -measured, the distributions of the classical bits for every
-// input. Beyond the meaning itself, two implications hold for every meaning: a pair whose
-// unitaries agree up to phase agrees in every meaning, and a pair whose programs differ from
-// the all-zero input differs in every meaning that includes that input.
-func (p realisticPair) expected(measured, measures bool) (equivalent, different bool) {
-	m := p.allInputs
-	if !measured {
-		m = p.unitary
-		if measures {
-			m = p.program
+// expected returns the verdict the pair must have in the meaning a run of the command used. The
+// JSON key "meaning" names it when present: "program" (qubits and bits start at 0; the joint
+// distribution of the classical bits at the end, as OpenQASM 2.0 defines it), "unitary" (the
+// unitaries; with -measured, the distributions of the classical bits for every input); any other
+// meaning is checked only by the implications below. Without the key, the meaning follows the
+// command's documentation: the unitary for files without measurements, the program for files
+// that measure, and every input with -measured. Two implications hold whatever the meaning: a
+// pair whose unitaries agree up to phase agrees in every meaning, and a pair whose programs
+// differ from the all-zero input differs in every meaning that includes that input.
+func (p realisticPair) expected(meaning string, measured, measures bool) (equivalent, different bool) {
+	if meaning == "" {
+		meaning = "unitary"
+		if measures && !measured {
+			meaning = "program"
 		}
+	}
+	m := "-"
+	switch {
+	case meaning == "program":
+		m = p.program
+	case meaning == "unitary" && measured:
+		m = p.allInputs
+	case meaning == "unitary":
+		m = p.unitary
 	}
 	equivalent = m == "equivalent" || p.unitary == "equivalent"
 	different = m == "different" || p.program == "different"
@@ -124,18 +134,19 @@ func checkRealistic(t *testing.T, p realisticPair, measured, measures bool, r re
 		t.Logf("%s %s: undecided: no answer within %v", p.name, mode, *realisticTimeout)
 		return
 	}
-	wantEq, wantDiff := p.expected(measured, measures)
 	switch r.code {
 	case exitOK, exitDiffer:
 		var v struct {
 			Equivalent *bool   `json:"equivalent"`
 			Distance   float64 `json:"distance"`
 			Engine     string  `json:"engine"`
+			Meaning    string  `json:"meaning"`
 		}
 		if err := json.Unmarshal([]byte(r.stdout), &v); err != nil || v.Equivalent == nil {
 			t.Errorf("%s %s: exit %d with output that is not the documented JSON (%v): %.300s", p.name, mode, r.code, err, r.stdout)
 			return
 		}
+		wantEq, wantDiff := p.expected(v.Meaning, measured, measures)
 		if *v.Equivalent != (r.code == exitOK) {
 			t.Errorf("%s %s: exit %d but JSON equivalent=%v", p.name, mode, r.code, *v.Equivalent)
 		}
@@ -145,7 +156,7 @@ func checkRealistic(t *testing.T, p realisticPair, measured, measures bool, r re
 		if !*v.Equivalent && wantEq {
 			t.Errorf("%s %s: reported differs (distance %g, engine %s), but the pair is equivalent: %s", p.name, mode, v.Distance, v.Engine, p.reason)
 		}
-		t.Logf("%s %s: equivalent=%v distance %g engine %s", p.name, mode, *v.Equivalent, v.Distance, v.Engine)
+		t.Logf("%s %s: equivalent=%v distance %g meaning %q engine %s", p.name, mode, *v.Equivalent, v.Distance, v.Meaning, v.Engine)
 	case exitBadUsed:
 		msg := strings.TrimSpace(r.stderr)
 		if !strings.HasPrefix(msg, "qcheck") || len(msg) < 20 {
@@ -240,21 +251,25 @@ func runBinary(t *testing.T, bin string, limit time.Duration, args ...string) re
 func TestRealisticExpected(t *testing.T) {
 	for _, c := range []struct {
 		p                  realisticPair
+		meaning            string
 		measured, measures bool
 		eq, diff           bool
 	}{
-		{realisticPair{unitary: "equivalent", allInputs: "-", program: "-"}, false, false, true, false},
-		{realisticPair{unitary: "different", allInputs: "-", program: "-"}, false, false, false, true},
-		{realisticPair{unitary: "-", allInputs: "equivalent", program: "equivalent"}, false, true, true, false},
-		{realisticPair{unitary: "-", allInputs: "equivalent", program: "equivalent"}, true, true, true, false},
-		{realisticPair{unitary: "-", allInputs: "-", program: "different"}, true, true, false, true},
-		{realisticPair{unitary: "-", allInputs: "-", program: "equivalent"}, true, true, false, false},
-		{realisticPair{unitary: "-", allInputs: "different", program: "equivalent"}, true, true, false, true},
-		{realisticPair{unitary: "-", allInputs: "different", program: "equivalent"}, false, true, true, false},
+		{realisticPair{unitary: "equivalent", allInputs: "-", program: "-"}, "", false, false, true, false},
+		{realisticPair{unitary: "different", allInputs: "-", program: "-"}, "", false, false, false, true},
+		{realisticPair{unitary: "-", allInputs: "equivalent", program: "equivalent"}, "", false, true, true, false},
+		{realisticPair{unitary: "-", allInputs: "equivalent", program: "equivalent"}, "", true, true, true, false},
+		{realisticPair{unitary: "-", allInputs: "-", program: "different"}, "", true, true, false, true},
+		{realisticPair{unitary: "-", allInputs: "-", program: "equivalent"}, "", true, true, false, false},
+		{realisticPair{unitary: "-", allInputs: "different", program: "equivalent"}, "", true, true, false, true},
+		{realisticPair{unitary: "-", allInputs: "different", program: "equivalent"}, "", false, true, true, false},
+		{realisticPair{unitary: "-", allInputs: "different", program: "equivalent"}, "program", true, true, true, false},
+		{realisticPair{unitary: "-", allInputs: "different", program: "equivalent"}, "unitary", true, true, false, true},
+		{realisticPair{unitary: "-", allInputs: "different", program: "equivalent"}, "from-zero", false, true, false, false},
 	} {
-		eq, diff := c.p.expected(c.measured, c.measures)
+		eq, diff := c.p.expected(c.meaning, c.measured, c.measures)
 		if eq != c.eq || diff != c.diff {
-			t.Errorf("%+v measured=%v measures=%v: expected (%v, %v), want (%v, %v)", c.p, c.measured, c.measures, eq, diff, c.eq, c.diff)
+			t.Errorf("%+v meaning %q measured=%v measures=%v: expected (%v, %v), want (%v, %v)", c.p, c.meaning, c.measured, c.measures, eq, diff, c.eq, c.diff)
 		}
 	}
 }
