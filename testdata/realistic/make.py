@@ -589,7 +589,7 @@ def build():
             pair('adder%s_tangle' % wa, unmeasured(cq), unmeasured(replace(cq, ti, G('rz', cq.ops[ti][3], PI / 8))), D, NA, NA,
                  'one t replaced by rz(π/8) (wrong angle), no measurement: unitaries differ by d(T, rz(π/8)) > 0 up to phase (unitary invariance)')
             pair('adder%s_wrongmap' % wa, ad, swap_measure_targets(ad, av + bv_), NA, D, D,
-                 'the carry and the lowest sum bit measured into each other\'s classical bits; they differ in a+b, so the outcome changes')
+                 'two measurements write each other\'s classical bits, chosen where the bits of a+b differ (one 1, one 0), so the outcome changes with certainty (checked by classical simulation in make.py)')
         # --- random two-qubit blocks (unitary meaning)
         if n <= 30:
             rc = random_blocks(n, min(n, 12) if n > 12 else n, seed=n)
@@ -663,13 +663,14 @@ def build():
 
 
 def swap_measure_targets(p, value):
-    """Swaps the classical targets of the measurements of bit 0 and the carry bit."""
+    """Exchanges the classical targets of two measurements whose bits differ in value (the
+    outcome the program gives with certainty), so the outcome changes with certainty."""
     q = p.copy()
-    idx = [i for i, op in enumerate(q.ops) if op[0] == 'measure']
-    lo, hi = idx[0], idx[-1]
-    a, b = q.ops[lo], q.ops[hi]
-    q.ops[lo] = ('measure', a[1], a[2], b[3])
-    q.ops[hi] = ('measure', b[1], b[2], a[3])
+    i0 = next(i for i in range(64) if value >> i & 1)
+    i1 = next(i for i in range(64) if not value >> i & 1)
+    for k, op in enumerate(q.ops):
+        if op[0] == 'measure' and op[3] in (i0, i1):
+            q.ops[k] = ('measure', op[1], op[2], i1 if op[3] == i0 else i0)
     return q
 
 
