@@ -1,6 +1,9 @@
 package qasm
 
-import "qcheck.dev/qcheck/circuit"
+import (
+	"qcheck.dev/qcheck/circuit"
+	"qcheck.dev/qcheck/param"
+)
 
 // Program is a parsed OpenQASM file: the circuit, with every qreg laid end to end in the order
 // of declaration (the first qreg's qubit 0 is the circuit's qubit 0), and the registers that say
@@ -16,6 +19,12 @@ type Program struct {
 	// Inputs are the names of the input parameters of a version 3 source, in the order of
 	// declaration, each given its value by the Inputs option.
 	Inputs []string
+	// Free are the input parameters left free by the FreeInputs option, in the order of
+	// declaration; Parametric is then the circuit with their angles as param.Exprs, and Circuit
+	// holds placeholder angles (each expression at every parameter 0). Both are nil without free
+	// parameters.
+	Free       []string
+	Parametric *param.Circuit
 	// Lines gives, for each op of Circuit, the 1-based source line of the statement it came
 	// from, so that a report about op k can point into the file.
 	Lines []int
@@ -54,6 +63,7 @@ type config struct {
 	dropBarriers bool
 	maxOps       int
 	inputs       map[string]float64
+	freeInputs   bool
 }
 
 // DefaultMaxOps bounds the ops one source may expand to (gate definitions can double the count
@@ -104,3 +114,10 @@ func Inputs(values map[string]float64) Option {
 		}
 	}
 }
+
+// FreeInputs makes each input float (or float[64]) of an OpenQASM 3 source that Inputs gives no
+// value a free real parameter: ParseProgram lists them in Program.Free and returns the circuit as
+// a param.Circuit in Program.Parametric, for param.Prove. A free parameter may appear only in the
+// angles of the rotation and phase gates, affinely with rational coefficients; any other use is
+// an error at its line and column (see the package documentation).
+func FreeInputs() Option { return func(c *config) { c.freeInputs = true } }

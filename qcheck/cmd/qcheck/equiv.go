@@ -131,15 +131,20 @@ func intList(s string) ([]int, error) {
 
 // compareFiles parses both files and compares them; errors name the file and line at fault.
 func (f *compareFlags) compareFiles(a, b string) (qcheck.Result, error) {
-	opts, err := f.options()
-	if err != nil {
-		return qcheck.Result{}, err
-	}
 	pa, err := f.limits.load(a)
 	if err != nil {
 		return qcheck.Result{}, err
 	}
 	pb, err := f.limits.load(b)
+	if err != nil {
+		return qcheck.Result{}, err
+	}
+	return f.comparePrograms(a, b, pa, pb)
+}
+
+// comparePrograms compares the programs read from files a and b.
+func (f *compareFlags) comparePrograms(a, b string, pa, pb *qasm.Program) (qcheck.Result, error) {
+	opts, err := f.options()
 	if err != nil {
 		return qcheck.Result{}, err
 	}
@@ -248,7 +253,19 @@ func equiv(args []string, stdout, stderr io.Writer) int {
 	if !ok {
 		return code
 	}
-	r, err := f.compareFiles(files[0], files[1])
+	f.limits.free = true
+	pa, err := f.limits.load(files[0])
+	if err != nil {
+		return c.fail("%v", err)
+	}
+	pb, err := f.limits.load(files[1])
+	if err != nil {
+		return c.fail("%v", err)
+	}
+	if len(pa.Free) > 0 || len(pb.Free) > 0 {
+		return f.proveFiles(c, files[0], files[1], pa, pb, *asJSON)
+	}
+	r, err := f.comparePrograms(files[0], files[1], pa, pb)
 	if err != nil {
 		return c.fail("%v", err)
 	}

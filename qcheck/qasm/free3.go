@@ -1,0 +1,201 @@
+package qasm
+
+import (
+	"math/big"
+	"strings"
+
+	"qcheck.dev/qcheck/circuit"
+	"qcheck.dev/qcheck/param"
+)
+
+// Free input parameters. With the FreeInputs option, an input float without a value is a named
+// real parameter: the gates whose angles use it carry those angles as param.Exprs, and the program
+// also comes out as a param.Circuit (Program.Parametric) that param.Prove can compare for every
+// value. Only what keeps the angles affine, with rational coefficients, and exactly equal to the
+// file's meaning for every real value is accepted; anything else is an error at its line and
+// column:
+//
+//   - the parameter may appear only in the angle arguments of a call, at the top level, without
+//     modifiers and outside any if, of a gate that is one gate of package circuit whose angles
+//     param knows (rx, ry, rz, crx, cry, crz, p, cp, U, and rxx, ryy, rzz read from their
+//     canonical definitions);
+//   - there, +, −, unary −, and × or ÷ by a rational constant (integer and decimal literals,
+//     exact: 0.1 is 1/10, and their sums, products and quotients) may act on it; other
+//     constants (π, names) may be added but not multiplied with it;
+//   - input angle is refused: its value is reduced modulo 2π, so the file's angle is not affine in
+//     the declared value; so is float[n] with n other than 64, whose value is rounded.
+
+// freeAngleGates are the circuit gates a call with a free parameter in its angles may become.
+var freeAngleGates = map[string]bool{
+	"rx": true, "ry": true, "rz": true, "crx": true, "cry": true, "crz": true,
+	"p": true, "cp": true, "u": true, "rxx": true, "ryy": true, "rzz": true,
+}
+
+// usesFree reports whether the expression reads a free parameter.
+func (p *parser3) usesFree(n *node) bool {
+	if n == nil {
+		return false
+	}
+	if n.op == 'n' {
+		if s := p.lookup(n.text); s != nil && s.kind == sFree {
+			return true
+		}
+	}
+	for _, k := range n.kids {
+		if p.usesFree(k) {
+			return true
+		}
+	}
+	if ix := n.idx; ix != nil {
+		for _, k := range append([]*node{ix.one, ix.lo, ix.step, ix.hi}, ix.set...) {
+			if p.usesFree(k) {
+				return true
+			}
+		}
+	}
+	return false
+}
+
+// freeError is the error for a use of a free parameter that this reader cannot keep exact.
+func (p *parser3) freeError(n *node, what string) error {
+	return p.errorf(n.off, "%s: a free input parameter may only be added to, subtracted from, negated, or multiplied or divided by a rational constant, in the angles of a gate call (give inputs values with the Inputs option, qcheck: -input NAME=VALUE)", what)
+}
+
+// affine computes an angle expression that reads free parameters as a param.Expr.
+func (p *parser3) affine(n *node) (param.Expr, error) {
+	if !p.usesFree(n) {
+		v, err := p.eval(n)
+		if err != nil {
+			return param.Expr{}, err
+		}
+		f, err := p.toFloat(v, n.begin())
+		if err != nil {
+			return param.Expr{}, err
+		}
+		return param.Const(f), nil
+	}
+	switch {
+	case n.op == 'n':
+		return param.Var(n.text), nil
+	case n.op == 'u' && n.text == "-":
+		e, err := p.affine(n.kids[0])
+		return e.Neg(), err
+	case n.op == 'b' && (n.text == "+" || n.text == "-"):
+		a, err := p.affine(n.kids[0])
+		if err != nil {
+			return param.Expr{}, err
+		}
+		b, err := p.affine(n.kids[1])
+		if err != nil {
+			return param.Expr{}, err
+		}
+		if n.text == "+" {
+			return a.Plus(b), nil
+		}
+		return a.Minus(b), nil
+	case n.op == 'b' && n.text == "*":
+		e, k := n.kids[0], n.kids[1]
+		if p.usesFree(k) {
+			e, k = k, e
+		}
+		r := p.rational(k)
+		if r == nil {
+			return param.Expr{}, p.freeError(n, "multiplication of a free parameter by something other than a rational constant")
+		}
+		a, err := p.affine(e)
+		return a.TimesRat(r), err
+	case n.op == 'b' && n.text == "/":
+		r := p.rational(n.kids[1])
+		if r == nil || r.Sign() == 0 || p.usesFree(n.kids[1]) {
+			return param.Expr{}, p.freeError(n, "division of a free parameter by something other than a nonzero rational constant")
+		}
+		a, err := p.affine(n.kids[0])
+		return a.TimesRat(new(big.Rat).Inv(r)), err
+	}
+	what := "operator " + n.text
+	switch n.op {
+	case 'c':
+		what = n.text + "(…)"
+		if n.text == "cast" {
+			what = "a cast to " + n.typ.String()
+		}
+	case 'i':
+		what = "an index"
+	}
+	return param.Expr{}, p.freeError(n, what+" on a free parameter")
+}
+
+// rational returns the exact value of a constant expression made of integer and decimal
+// literals with + − × ÷, or nil when it is not one.
+func (p *parser3) rational(n *node) *big.Rat {
+	switch n.op {
+	case 'l':
+		switch n.val.kind {
+		case kInt:
+			return big.NewRat(n.val.i, 1)
+		case kFloat:
+			r, ok := new(big.Rat).SetString(strings.ReplaceAll(n.text, "_", ""))
+			if ok {
+				return r
+			}
+		}
+		return nil
+	case 'u':
+		if n.text == "-" {
+			if r := p.rational(n.kids[0]); r != nil {
+				return r.Neg(r)
+			}
+		}
+		return nil
+	case 'b':
+		a, b := p.rational(n.kids[0]), p.rational(n.kids[1])
+		if a == nil || b == nil {
+			return nil
+		}
+		switch n.text {
+		case "+":
+			return a.Add(a, b)
+		case "-":
+			return a.Sub(a, b)
+		case "*":
+			return a.Mul(a, b)
+		case "/":
+			if b.Sign() != 0 {
+				return a.Quo(a, b)
+			}
+		}
+	}
+	return nil
+}
+
+// freeCall checks that a call whose angles read free parameters can carry them exactly.
+func (p *parser3) freeCall(def *gateDef, name token, mods []modifier, at int) error {
+	switch {
+	case len(mods) > 0:
+		return p.errorf(name.off, "gate %s with modifiers takes a free input parameter in its angles: not supported; give the inputs values (qcheck: -input NAME=VALUE)", name.text)
+	case def.native == "" || !freeAngleGates[def.native]:
+		return p.errorf(at, "gate %s takes a free input parameter in its angles: only the rotation and phase gates rx, ry, rz, crx, cry, crz, p, cp, U (and rxx, ryy, rzz) accept one; give the inputs values (qcheck: -input NAME=VALUE)", name.text)
+	case p.cond != nil:
+		return p.errorf(name.off, "gate %s under an if takes a free input parameter: not supported", name.text)
+	}
+	return nil
+}
+
+// parametric returns the program's circuit as a param.Circuit, the angles recorded for calls
+// with free parameters in place of their placeholder values. It fails at the first op that is
+// not a gate (measure, reset, a conditioned op), naming its line.
+func (p *parser3) parametric(c *circuit.Circuit) (*param.Circuit, error) {
+	out := param.New(c.Qubits())
+	for i, op := range c.Ops {
+		if !op.Unitary() && op.Gate.Name != "barrier" {
+			return nil, p.errorf(p.offs[i], "a source with free input parameters (%s) must be a circuit of gates only; %s is not one (give the inputs values, qcheck: -input NAME=VALUE)",
+				strings.Join(p.free, ", "), op.Gate.Name)
+		}
+		if angles, ok := p.angles[i]; ok {
+			out.Gate(op.Gate, angles, op.Qubits...)
+			continue
+		}
+		out.Append(op.Gate, op.Qubits...)
+	}
+	return out, nil
+}
