@@ -20,8 +20,9 @@ import (
 //     param knows (rx, ry, rz, crx, cry, crz, p, cp, U, and rxx, ryy, rzz read from their
 //     canonical definitions);
 //   - there, +, −, unary −, and × or ÷ by a rational constant (integer and decimal literals,
-//     exact: 0.1 is 1/10, and their sums, products and quotients) may act on it; other
-//     constants (π, names) may be added but not multiplied with it;
+//     exact: 0.1 is 1/10, integer constants and loop variables, and their sums, products and
+//     quotients) may act on it; other constants (π, real-valued names) may be added but not
+//     multiplied with it;
 //   - input angle is refused: its value is reduced modulo 2π, so the file's angle is not affine in
 //     the declared value; so is float[n] with n other than 64, whose value is rounded.
 
@@ -126,8 +127,12 @@ func (p *parser3) affine(n *node) (param.Expr, error) {
 }
 
 // rational returns the exact value of a constant expression made of integer and decimal
-// literals with + − × ÷, or nil when it is not one.
+// literals, and names or other expressions of integer value, with + − × ÷; or nil when it is
+// not one.
 func (p *parser3) rational(n *node) *big.Rat {
+	if p.usesFree(n) {
+		return nil
+	}
 	switch n.op {
 	case 'l':
 		switch n.val.kind {
@@ -164,6 +169,10 @@ func (p *parser3) rational(n *node) *big.Rat {
 				return a.Quo(a, b)
 			}
 		}
+		return nil
+	}
+	if v, err := p.eval(n); err == nil && v.kind == kInt && !v.measured() {
+		return big.NewRat(v.i, 1)
 	}
 	return nil
 }
