@@ -32,8 +32,8 @@ func TestEquivProvesForEveryValue(t *testing.T) {
 	f := writeFiles3(t, map[string]string{
 		// rzz, read from its canonical definition as the gate exp(−iθ Z⊗Z/2), against the
 		// circuit of Nielsen & Chuang §4.7.3 (Figure 4.19, with one Z): cx · rz(a) · cx.
-		"rzz":     "input float a;\nqubit[2] q;\ngate rzz(theta) a, b { cx a, b; rz(theta) b; cx a, b; }\nrzz(a) q[0], q[1];\n",
-		"rzz_cx":  "input float a;\nqubit[2] q;\ncx q[0], q[1];\nrz(a) q[1];\ncx q[0], q[1];\n",
+		"rzz":    "input float a;\nqubit[2] q;\ngate rzz(theta) a, b { cx a, b; rz(theta) b; cx a, b; }\nrzz(a) q[0], q[1];\n",
+		"rzz_cx": "input float a;\nqubit[2] q;\ncx q[0], q[1];\nrz(a) q[1];\ncx q[0], q[1];\n",
 		// The Z-Y decomposition, Nielsen & Chuang Theorem 4.1 (§4.2), for U(θ, φ, λ) as the
 		// OpenQASM 3 specification defines it: U(θ,φ,λ) = e^{i(φ+λ)/2}·Rz(φ)Ry(θ)Rz(λ).
 		"euler":   "input float a;\ninput float b;\ninput float c;\nqubit q;\nU(a, b, c) q;\n",
