@@ -1,17 +1,15 @@
 package qasm
 
 import (
+	"maps"
 	"math/big"
+	"slices"
 	"strings"
-
-	"qcheck.dev/qcheck/circuit"
-	"qcheck.dev/qcheck/param"
 )
 
 // Free input parameters. With the FreeInputs option, an input float without a value is a named
-// real parameter: the gates whose angles use it carry those angles as param.Exprs, and the program
-// also comes out as a param.Circuit (Program.Parametric) that param.Prove can compare for every
-// value. Only what keeps the angles affine, with rational coefficients, and exactly equal to the
+// real parameter: the gates whose angles use it carry those angles as Angles (Program.Angles),
+// from which package param's circuits are built for param.Prove to compare for every value. Only what keeps the angles affine, with rational coefficients, and exactly equal to the
 // file's meaning for every real value is accepted; anything else is an error at its line and
 // column:
 //
@@ -62,38 +60,38 @@ func (p *parser3) freeError(n *node, what string) error {
 	return p.errorf(n.off, "%s: a free input parameter may only be added to, subtracted from, negated, or multiplied or divided by a rational constant, in the angles of a gate call (give inputs values with the Inputs option, qcheck: -input NAME=VALUE)", what)
 }
 
-// affine computes an angle expression that reads free parameters as a param.Expr.
-func (p *parser3) affine(n *node) (param.Expr, error) {
+// affine computes an angle expression that reads free parameters as a Angle.
+func (p *parser3) affine(n *node) (Angle, error) {
 	if !p.usesFree(n) {
 		v, err := p.eval(n)
 		if err != nil {
-			return param.Expr{}, err
+			return Angle{}, err
 		}
 		f, err := p.toFloat(v, n.begin())
 		if err != nil {
-			return param.Expr{}, err
+			return Angle{}, err
 		}
-		return param.Const(f), nil
+		return Angle{Const: f}, nil
 	}
 	switch {
 	case n.op == 'n':
-		return param.Var(n.text), nil
+		return Angle{Coefs: map[string]*big.Rat{n.text: big.NewRat(1, 1)}}, nil
 	case n.op == 'u' && n.text == "-":
 		e, err := p.affine(n.kids[0])
-		return e.Neg(), err
+		return e.scale(big.NewRat(-1, 1)), err
 	case n.op == 'b' && (n.text == "+" || n.text == "-"):
 		a, err := p.affine(n.kids[0])
 		if err != nil {
-			return param.Expr{}, err
+			return Angle{}, err
 		}
 		b, err := p.affine(n.kids[1])
 		if err != nil {
-			return param.Expr{}, err
+			return Angle{}, err
 		}
-		if n.text == "+" {
-			return a.Plus(b), nil
+		if n.text == "-" {
+			b = b.scale(big.NewRat(-1, 1))
 		}
-		return a.Minus(b), nil
+		return a.plus(b), nil
 	case n.op == 'b' && n.text == "*":
 		e, k := n.kids[0], n.kids[1]
 		if p.usesFree(k) {
@@ -101,17 +99,17 @@ func (p *parser3) affine(n *node) (param.Expr, error) {
 		}
 		r := p.rational(k)
 		if r == nil {
-			return param.Expr{}, p.freeError(n, "multiplication of a free parameter by something other than a rational constant")
+			return Angle{}, p.freeError(n, "multiplication of a free parameter by something other than a rational constant")
 		}
 		a, err := p.affine(e)
-		return a.TimesRat(r), err
+		return a.scale(r), err
 	case n.op == 'b' && n.text == "/":
 		r := p.rational(n.kids[1])
 		if r == nil || r.Sign() == 0 || p.usesFree(n.kids[1]) {
-			return param.Expr{}, p.freeError(n, "division of a free parameter by something other than a nonzero rational constant")
+			return Angle{}, p.freeError(n, "division of a free parameter by something other than a nonzero rational constant")
 		}
 		a, err := p.affine(n.kids[0])
-		return a.TimesRat(new(big.Rat).Inv(r)), err
+		return a.scale(new(big.Rat).Inv(r)), err
 	}
 	what := "operator " + n.text
 	switch n.op {
@@ -123,7 +121,7 @@ func (p *parser3) affine(n *node) (param.Expr, error) {
 	case 'i':
 		what = "an index"
 	}
-	return param.Expr{}, p.freeError(n, what+" on a free parameter")
+	return Angle{}, p.freeError(n, what+" on a free parameter")
 }
 
 // rational returns the exact value of a constant expression made of integer and decimal
@@ -190,21 +188,37 @@ func (p *parser3) freeCall(def *gateDef, name token, mods []modifier, at int) er
 	return nil
 }
 
-// parametric returns the program's circuit as a param.Circuit, the angles recorded for calls
-// with free parameters in place of their placeholder values. It fails at the first op that is
-// not a gate (measure, reset, a conditioned op), naming its line.
-func (p *parser3) parametric(c *circuit.Circuit) (*param.Circuit, error) {
-	out := param.New(c.Qubits())
-	for i, op := range c.Ops {
-		if !op.Unitary() && op.Gate.Name != "barrier" {
-			return nil, p.errorf(p.offs[i], "a source with free input parameters (%s) must be a circuit of gates only; %s is not one (give the inputs values, qcheck: -input NAME=VALUE)",
-				strings.Join(p.free, ", "), op.Gate.Name)
+// Angle is a gate angle that reads free input parameters: Const + Σ Coefs[name]·name, in
+// radians, with exact rational coefficients.
+type Angle struct {
+	Coefs map[string]*big.Rat
+	Const float64
+}
+
+// Params returns the names of the parameters the angle reads, sorted.
+func (a Angle) Params() []string { return slices.Sorted(maps.Keys(a.Coefs)) }
+
+func (a Angle) plus(b Angle) Angle {
+	out := Angle{Coefs: map[string]*big.Rat{}, Const: a.Const + b.Const}
+	for _, m := range []map[string]*big.Rat{a.Coefs, b.Coefs} {
+		for name, c := range m {
+			if old, ok := out.Coefs[name]; ok {
+				c = new(big.Rat).Add(old, c)
+			}
+			out.Coefs[name] = c
 		}
-		if angles, ok := p.angles[i]; ok {
-			out.Gate(op.Gate, angles, op.Qubits...)
-			continue
-		}
-		out.Append(op.Gate, op.Qubits...)
 	}
-	return out, nil
+	maps.DeleteFunc(out.Coefs, func(_ string, c *big.Rat) bool { return c.Sign() == 0 })
+	return out
+}
+
+func (a Angle) scale(r *big.Rat) Angle {
+	f, _ := r.Float64()
+	out := Angle{Coefs: map[string]*big.Rat{}, Const: a.Const * f}
+	if r.Sign() != 0 {
+		for name, c := range a.Coefs {
+			out.Coefs[name] = new(big.Rat).Mul(c, r)
+		}
+	}
+	return out
 }

@@ -90,10 +90,7 @@ func ParseProgram(src []byte, opts ...Option) (*Program, error) {
 		prog.Lines[i] = line
 	}
 	if free != nil {
-		prog.Free = free.free
-		if prog.Parametric, err = free.parametric(c); err != nil {
-			return nil, err
-		}
+		prog.Free, prog.Angles = free.free, free.angles
 	}
 	return prog, nil
 }

@@ -4,7 +4,6 @@ import (
 	"strconv"
 
 	"qcheck.dev/qcheck/circuit"
-	"qcheck.dev/qcheck/param"
 )
 
 // parser3 reads OpenQASM 3. It shares the 2.0 reader's source, tokens, gate definitions, op
@@ -15,8 +14,8 @@ type parser3 struct {
 	measured []bool // per classical bit: whether a measurement may have written it
 	physical bool   // the source addresses physical qubits $n
 	inputs   []string
-	free     []string             // the free input parameters, in the order of declaration
-	angles   map[int][]param.Expr // the angles of the ops whose angles read free parameters
+	free     []string        // the free input parameters, in the order of declaration
+	angles   map[int][]Angle // the angles of the ops whose angles read free parameters
 	// condScope is the depth of the scope where the current condition on measured bits began;
 	// names declared outside it cannot be assigned under the condition.
 	condScope int

@@ -1,9 +1,6 @@
 package qasm
 
-import (
-	"qcheck.dev/qcheck/circuit"
-	"qcheck.dev/qcheck/param"
-)
+import "qcheck.dev/qcheck/circuit"
 
 // Program is a parsed OpenQASM file: the circuit, with every qreg laid end to end in the order
 // of declaration (the first qreg's qubit 0 is the circuit's qubit 0), and the registers that say
@@ -20,11 +17,11 @@ type Program struct {
 	// declaration, each given its value by the Inputs option.
 	Inputs []string
 	// Free are the input parameters left free by the FreeInputs option, in the order of
-	// declaration; Parametric is then the circuit with their angles as param.Exprs, and Circuit
-	// holds placeholder angles (each expression at every parameter 0). Both are nil without free
-	// parameters.
-	Free       []string
-	Parametric *param.Circuit
+	// declaration. Angles then gives, for each op of Circuit whose angles read them, all its
+	// angles (in the order of its Params); Circuit holds placeholders there (each angle with
+	// every parameter 0). Both are nil without free parameters.
+	Free   []string
+	Angles map[int][]Angle
 	// Lines gives, for each op of Circuit, the 1-based source line of the statement it came
 	// from, so that a report about op k can point into the file.
 	Lines []int
@@ -116,8 +113,9 @@ func Inputs(values map[string]float64) Option {
 }
 
 // FreeInputs makes each input float (or float[64]) of an OpenQASM 3 source that Inputs gives no
-// value a free real parameter: ParseProgram lists them in Program.Free and returns the circuit as
-// a param.Circuit in Program.Parametric, for param.Prove. A free parameter may appear only in the
-// angles of the rotation and phase gates, affinely with rational coefficients; any other use is
+// value a free real parameter: ParseProgram lists them in Program.Free and the angles that read
+// them in Program.Angles (the qcheck command builds package param's circuits from them). A free
+// parameter may appear only in the angles of the rotation and phase gates, affinely with
+// rational coefficients; any other use is
 // an error at its line and column (see the package documentation).
 func FreeInputs() Option { return func(c *config) { c.freeInputs = true } }

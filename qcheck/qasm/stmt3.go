@@ -1,10 +1,6 @@
 package qasm
 
-import (
-	"math"
-
-	"qcheck.dev/qcheck/param"
-)
+import "math"
 
 // modifiers3 reads the modifiers in front of a gate call. params are the enclosing gate's
 // parameters (nil at the top level), over which pow's exponent is compiled; ctrl(n) must be a
@@ -106,7 +102,7 @@ func (p *parser3) callStatement() error {
 		return err
 	}
 	var vals []float64
-	var angles []param.Expr // set when an angle reads a free parameter
+	var angles []Angle // set when an angle reads a free parameter
 	if p.tok.is("(") {
 		if err := p.next(); err != nil {
 			return err
@@ -126,10 +122,10 @@ func (p *parser3) callStatement() error {
 					return err
 				}
 				for len(angles) < len(vals) {
-					angles = append(angles, param.Const(vals[len(angles)]))
+					angles = append(angles, Angle{Const: vals[len(angles)]})
 				}
 				angles = append(angles, a)
-				vals = append(vals, a.Constant())
+				vals = append(vals, a.Const)
 				if !p.tok.is(",") {
 					break
 				}
@@ -209,10 +205,10 @@ func (p *parser3) callStatement() error {
 				return p.errorf(name.off, "gate %s with a free input parameter did not become one %s gate", name.text, def.native)
 			}
 			for len(angles) < len(vals) {
-				angles = append(angles, param.Const(vals[len(angles)]))
+				angles = append(angles, Angle{Const: vals[len(angles)]})
 			}
 			if p.angles == nil {
-				p.angles = map[int][]param.Expr{}
+				p.angles = map[int][]Angle{}
 			}
 			p.angles[before] = angles
 		}

@@ -30,7 +30,15 @@ func (f *compareFlags) proveFiles(c *command, a, b string, pa, pb *qasm.Program,
 			}
 		}
 	}
-	res, err := param.Prove(pa.Parametric, pb.Parametric, param.Options{ExactPhase: f.exactPhase, Tolerance: f.tol})
+	left, err := parametric(a, pa)
+	if err != nil {
+		return c.fail("%v", err)
+	}
+	right, err := parametric(b, pb)
+	if err != nil {
+		return c.fail("%v", err)
+	}
+	res, err := param.Prove(left, right, param.Options{ExactPhase: f.exactPhase, Tolerance: f.tol})
 	if err != nil {
 		return c.fail("%s vs %s: %v", a, b, err)
 	}
@@ -68,4 +76,32 @@ func (f *compareFlags) proveFlags() error {
 		}
 	}
 	return nil
+}
+
+// parametric returns the program read from path as a param.Circuit: the ops whose angles read
+// free parameters take them from p.Angles, the others keep their constant angles. It fails at
+// the first op that is not a gate (measure, reset, a conditioned op), naming its line.
+func parametric(path string, p *qasm.Program) (*param.Circuit, error) {
+	out := param.New(p.Circuit.Qubits())
+	for i, op := range p.Circuit.Ops {
+		if !op.Unitary() && op.Gate.Name != "barrier" {
+			return nil, fmt.Errorf("%s:%d: %s: a file with free input parameters (%s) must be a circuit of gates only (give the inputs values, -input NAME=VALUE)",
+				path, p.Lines[i], op.Gate.Name, strings.Join(p.Free, ", "))
+		}
+		angles, ok := p.Angles[i]
+		if !ok {
+			out.Append(op.Gate, op.Qubits...)
+			continue
+		}
+		exprs := make([]param.Expr, len(angles))
+		for k, a := range angles {
+			e := param.Const(a.Const)
+			for _, name := range a.Params() {
+				e = e.Plus(param.Var(name).TimesRat(a.Coefs[name]))
+			}
+			exprs[k] = e
+		}
+		out.Gate(op.Gate, exprs, op.Qubits...)
+	}
+	return out, nil
 }

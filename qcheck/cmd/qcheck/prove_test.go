@@ -112,6 +112,7 @@ func TestEquivFreeInputsRefused(t *testing.T) {
 		"a":      "input float a;\nqubit q;\nrz(a) q;\n",
 		"b":      "input float b;\nqubit q;\nrz(b) q;\n",
 		"square": "input float a;\nqubit q;\nrz(a*a) q;\n",
+		"meas":   "input float a;\nqubit q;\nbit c;\nrz(a) q;\nc = measure q;\n",
 	})
 	for _, c := range []struct {
 		args []string
@@ -119,6 +120,7 @@ func TestEquivFreeInputsRefused(t *testing.T) {
 	}{
 		{[]string{f["a"], f["b"]}, "a.qasm: input a is a free parameter of this file but not of " + f["b"]},
 		{[]string{f["a"], f["square"]}, "square.qasm:5:5: multiplication of a free parameter"},
+		{[]string{f["meas"], f["a"]}, "meas.qasm:7: measure: a file with free input parameters (a) must be a circuit of gates only"},
 		{[]string{"-perm", "0", f["a"], f["a"]}, "-perm is not supported with free input parameters"},
 		{[]string{"-measure", "diamond", f["a"], f["a"]}, "-measure diamond is not supported"},
 	} {
