@@ -101,8 +101,8 @@ func MaxOps(n int) Option {
 }
 
 // Inputs gives values to the input parameters of an OpenQASM 3 source (input angle θ;), by
-// name. Until circuits can carry free parameters, every input a source declares needs a value;
-// ParseProgram records the names in Program.Inputs.
+// name. Without FreeInputs every input a source declares needs a value; ParseProgram records the
+// names of those given one in Program.Inputs.
 func Inputs(values map[string]float64) Option {
 	return func(c *config) {
 		c.inputs = make(map[string]float64, len(values))

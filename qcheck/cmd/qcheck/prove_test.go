@@ -3,7 +3,6 @@ package main
 import (
 	"encoding/json"
 	"math"
-	"os"
 	"path/filepath"
 	"strconv"
 	"strings"
@@ -16,13 +15,13 @@ const head3 = "OPENQASM 3.0;\ninclude \"stdgates.inc\";\n"
 // directory and returns the paths.
 func writeFiles3(t *testing.T, srcs map[string]string) map[string]string {
 	t.Helper()
-	dir := t.TempDir()
-	paths := map[string]string{}
+	files, paths := map[string]string{}, map[string]string{}
 	for name, src := range srcs {
+		files[name+".qasm"] = src
+	}
+	dir := writeFilesWith(t, head3, files)
+	for name := range srcs {
 		paths[name] = filepath.Join(dir, name+".qasm")
-		if err := os.WriteFile(paths[name], []byte(head3+src), 0o644); err != nil {
-			t.Fatal(err)
-		}
 	}
 	return paths
 }
