@@ -124,32 +124,37 @@ func (p *parser3) affine(n *node) (Angle, error) {
 	return Angle{}, p.freeError(n, what+" on a free parameter")
 }
 
-// rational returns the exact value of a constant expression made of integer and decimal
-// literals, and names or other expressions of integer value, with + − × ÷; or nil when it is
-// not one.
+// rational returns the exact value of a constant expression that rational multiples may use, or
+// nil when it is not one. Integer-valued expressions take the value the reader computes (so 1/2
+// is 0, integer division, as OpenQASM 3 defines it); real-valued ones are built exactly from
+// decimal literals (0.1 is 1/10) and rational parts with + − × ÷; anything else (π, a real
+// variable, a function, a cast) is not rational here.
 func (p *parser3) rational(n *node) *big.Rat {
 	if p.usesFree(n) {
 		return nil
 	}
+	v, err := p.eval(n)
+	if err != nil || v.measured() {
+		return nil
+	}
+	switch {
+	case v.kind == kInt:
+		return big.NewRat(v.i, 1)
+	case v.kind == kUint:
+		return new(big.Rat).SetInt(new(big.Int).SetUint64(uint64(v.i)))
+	case v.kind != kFloat || v.width != 0:
+		return nil
+	}
 	switch n.op {
 	case 'l':
-		switch n.val.kind {
-		case kInt:
-			return big.NewRat(n.val.i, 1)
-		case kFloat:
-			r, ok := new(big.Rat).SetString(strings.ReplaceAll(n.text, "_", ""))
-			if ok {
-				return r
-			}
+		r, ok := new(big.Rat).SetString(strings.ReplaceAll(n.text, "_", ""))
+		if ok {
+			return r
 		}
-		return nil
 	case 'u':
-		if n.text == "-" {
-			if r := p.rational(n.kids[0]); r != nil {
-				return r.Neg(r)
-			}
+		if r := p.rational(n.kids[0]); r != nil && n.text == "-" {
+			return r.Neg(r)
 		}
-		return nil
 	case 'b':
 		a, b := p.rational(n.kids[0]), p.rational(n.kids[1])
 		if a == nil || b == nil {
@@ -167,10 +172,6 @@ func (p *parser3) rational(n *node) *big.Rat {
 				return a.Quo(a, b)
 			}
 		}
-		return nil
-	}
-	if v, err := p.eval(n); err == nil && v.kind == kInt && !v.measured() {
-		return big.NewRat(v.i, 1)
 	}
 	return nil
 }

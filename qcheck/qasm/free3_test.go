@@ -22,6 +22,7 @@ U(a, b + 0.5, 1.0) q[0];
 for int i in [1:2] { ry(i*b) q[1]; }
 h q[0];
 rz(k*a/4) q[0];
+rz(a*(1/2) + a/(1/2.0)) q[0];
 `
 	p, err := ParseProgram([]byte(src), FreeInputs())
 	if err != nil {
@@ -41,8 +42,9 @@ rz(k*a/4) q[0];
 		4: {{0, r(0, 1), r(1, 1)}},
 		5: {{0, r(0, 1), r(2, 1)}},
 		7: {{0, r(3, 4), r(0, 1)}},
+		8: {{0, r(2, 1), r(0, 1)}}, // 1/2 is integer division, 0 (OpenQASM 3 specification)
 	}
-	names := []string{"rz", "rx", "cp", "u", "ry", "ry", "h", "rz"}
+	names := []string{"rz", "rx", "cp", "u", "ry", "ry", "h", "rz", "rz"}
 	if strings.Join(p.Free, ",") != "a,b" || len(p.Circuit.Ops) != len(names) || len(p.Angles) != len(want) {
 		t.Fatalf("free %v, ops %v, angles %v", p.Free, p.Circuit.Ops, p.Angles)
 	}
