@@ -208,9 +208,15 @@ func TestEquivEngineFlag(t *testing.T) {
 
 func writeFiles(t *testing.T, files map[string]string) string {
 	t.Helper()
+	return writeFilesWith(t, "OPENQASM 2.0;\ninclude \"qelib1.inc\";\n", files)
+}
+
+// writeFilesWith writes each named source, after head, into a temporary directory it returns.
+func writeFilesWith(t *testing.T, head string, files map[string]string) string {
+	t.Helper()
 	dir := t.TempDir()
 	for name, src := range files {
-		if err := os.WriteFile(filepath.Join(dir, name), []byte("OPENQASM 2.0;\ninclude \"qelib1.inc\";\n"+src), 0o644); err != nil {
+		if err := os.WriteFile(filepath.Join(dir, name), []byte(head+src), 0o644); err != nil {
 			t.Fatal(err)
 		}
 	}
