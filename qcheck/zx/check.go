@@ -1,0 +1,179 @@
+package zx
+
+import (
+	"fmt"
+	"math"
+	
+	"gonum.org/v1/gonum/mat"
+	"qcheck.dev/metric"
+	"qcheck.dev/qcheck/circuit"
+)
+
+// Verdict is what Check concluded.
+type Verdict int
+
+const (
+	// Undecided: the diagram did not reduce far enough; Result.Reason says how far it got.
+	Undecided Verdict = iota
+	// Equivalent: proved, within Result.Bound; see the package documentation.
+	Equivalent
+	// Different: the distance computed from the remainder exceeds its uncertainty.
+	Different
+)
+
+func (v Verdict) String() string {
+	switch v {
+	case Equivalent:
+		return "equivalent"
+	case Different:
+		return "different"
+	}
+	return "undecided"
+}
+
+// Options tune Check. The zero value is useful.
+type Options struct {
+	// Tol is how far, in radians, a phase may be from a multiple of π/4 and still be treated as
+	// that multiple; each such step adds what it dropped to the bound. Zero means DefaultTol.
+	Tol float64
+	// MaxSupport is the largest number of wires on which a remainder's matrix is computed to give
+	// the exact distance. Zero means 10.
+	MaxSupport int
+	// Budget caps the rewriting, counted in edge operations per vertex of the initial diagram.
+	// Zero means 200.
+	Budget int
+}
+
+// DefaultTol is the default phase tolerance: far above the rounding of angles that compilers
+// write as floating-point multiples of π, far below any angle a pass changes on purpose.
+const DefaultTol = 1e-10
+
+// Result is the answer of Check about D = min over φ of ‖U − e^{iφ}V‖, the operator-norm distance
+// with the global phase taken out.
+type Result struct {
+	Verdict Verdict
+	// Bound is the proved uncertainty: for Equivalent, D ≤ Bound; for a Distance, |D − Distance|
+	// ≤ Bound plus the rounding of a 2^k-dimensional matrix computation (about 1e-13).
+	Bound float64
+	// Distance is D computed from the remainder's matrix, when Known.
+	Distance float64
+	Known    bool
+	// Support lists the wires on which V†U does not reduce to a plain wire, when it was found.
+	Support []int
+	// Spiders is the number of spiders left in the simplified diagram (scalar parts included).
+	Spiders int
+	// Reason says why the verdict is Undecided.
+	Reason string
+}
+
+// Check simplifies the ZX-diagram of V†U. If it becomes plain wires, each input joined to the
+// output of its own wire, U and V are proved equal up to a global phase within Result.Bound. If the
+// wires that remain are at most MaxSupport, the remainder's matrix gives the distance. Otherwise the
+// answer is Undecided. It fails for ill-formed circuits, different widths, non-unitary ops and
+// custom gates.
+func Check(u, v *circuit.Circuit, opts Options) (Result, error) {
+	if u == nil || v == nil {
+		return Result{}, fmt.Errorf("zx: nil circuit")
+	}
+	if err := u.Validate(); err != nil {
+		return Result{}, fmt.Errorf("zx: first circuit: %w", err)
+	}
+	if err := v.Validate(); err != nil {
+		return Result{}, fmt.Errorf("zx: second circuit: %w", err)
+	}
+	if u.Qubits() != v.Qubits() {
+		return Result{}, fmt.Errorf("zx: circuits of %d and %d qubits", u.Qubits(), v.Qubits())
+	}
+	if opts.Tol == 0 {
+		opts.Tol = DefaultTol
+	}
+	if opts.MaxSupport == 0 {
+		opts.MaxSupport = 10
+	}
+	if opts.Budget == 0 {
+		opts.Budget = 200
+	}
+	g, err := miter(u, v, opts.Tol)
+	if err != nil {
+		return Result{}, err
+	}
+	done := g.simplify(opts.Budget * (len(g.v) + 1))
+	r := Result{Bound: g.bound()}
+	for _, x := range g.alive() {
+		if g.isSpider(x) {
+			r.Spiders++
+		}
+	}
+	for q := range g.in {
+		if t, ok := g.v[g.in[q]].nbr[g.out[q]]; !ok || t != plain {
+			r.Support = append(r.Support, q)
+		}
+	}
+	if len(r.Support) == 0 {
+		r.Verdict = Equivalent
+		return r, nil
+	}
+	if len(r.Support) > opts.MaxSupport {
+		r.Reason = fmt.Sprintf("V†U reduced to %d spiders acting on %d wires, more than %d", r.Spiders, len(r.Support), opts.MaxSupport)
+		if !done {
+			r.Reason += " (rewriting budget exhausted)"
+		}
+		return r, nil
+	}
+	m, ok := g.matrix(r.Support)
+	if !ok {
+		r.Reason = fmt.Sprintf("the remainder on %d wires has %d spiders, too many to contract", len(r.Support), r.Spiders)
+		return r, nil
+	}
+	d, ok := phaseDistanceFromIdentity(m, len(r.Support))
+	if !ok {
+		r.Reason = "the remainder's matrix is not a multiple of a unitary to 1e-9; the contraction lost accuracy"
+		return r, nil
+	}
+	r.Distance, r.Known = d, true
+	if d > r.Bound+1e-12 {
+		r.Verdict = Different
+	} else {
+		r.Verdict = Equivalent
+	}
+	return r, nil
+}
+
+// bound is the proved bound on the distance the rewriting may have hidden: half the residuals
+// dropped and half the rounding slack (package documentation).
+func (g *graph) bound() float64 { return (g.snapped + g.slack) / 2 }
+
+// phaseDistanceFromIdentity scales m, which is c·W for an unknown c ≠ 0 and unitary W, to W and
+// returns min over φ of ‖W − e^{iφ}I‖. It reports false when m is not close to a multiple of a
+// unitary.
+func phaseDistanceFromIdentity(m []complex128, k int) (float64, bool) {
+	n := 1 << k
+	w := mat.NewCDense(n, n, m)
+	var fro float64
+	for _, x := range m {
+		fro += real(x)*real(x) + imag(x)*imag(x)
+	}
+	if fro == 0 {
+		return 0, false
+	}
+	s := complex(math.Sqrt(float64(n)/fro), 0)
+	for i := range m {
+		m[i] *= s
+	}
+	// W is unitary by construction (the diagram is c·V†U on these wires); its columns having unit
+	// norm is a cheap check that the contraction kept its accuracy.
+	for j := range n {
+		var c float64
+		for i := range n {
+			c += real(m[i*n+j])*real(m[i*n+j]) + imag(m[i*n+j])*imag(m[i*n+j])
+		}
+		if math.Abs(c-1) > 1e-9 {
+			return 0, false
+		}
+	}
+	id := mat.NewCDense(n, n, nil)
+	for i := range n {
+		id.Set(i, i, 1)
+	}
+	return metric.PhaseDistance(w, id), true
+}

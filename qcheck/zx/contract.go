@@ -1,0 +1,236 @@
+package zx
+
+import (
+	"math"
+	"math/cmplx"
+	"slices"
+)
+
+// factor is a tensor over binary variables: entry i holds the value at the assignment whose bit j
+// is the value of vars[j].
+type factor struct {
+	vars []int
+	data []complex128
+}
+
+func (f factor) at(assign func(int) int) complex128 {
+	i := 0
+	for j, x := range f.vars {
+		i |= assign(x) << j
+	}
+	return f.data[i]
+}
+
+// maxScope caps the variables of an intermediate tensor (2^maxScope entries).
+const maxScope = 22
+
+// maxComponent caps the vertices of the part of the diagram matrix contracts.
+const maxComponent = 4000
+
+// matrix returns, up to a non-zero scalar, the matrix of the part of the diagram that joins the
+// inputs and outputs of the given wires, rows indexed by the outputs and columns by the inputs
+// (wires[0] the least significant bit). Every other wire must be a plain wire from its input to
+// its own output. The diagram is read as a sum over the values of its spiders (each spider one
+// binary variable, a Hadamard edge the factor (−1)^{xy}, a phase α the factor e^{iαx}, a plain
+// edge an equality), and summed out one variable at a time, always the one whose removal makes
+// the smallest tensor. It reports false when a tensor would exceed 2^maxScope entries.
+func (g *graph) matrix(wires []int) ([]complex128, bool) {
+	// Collect the component of the given boundaries.
+	seen := map[int]bool{}
+	var stack []int
+	for _, q := range wires {
+		for _, b := range []int{g.in[q], g.out[q]} {
+			if !seen[b] {
+				seen[b] = true
+				stack = append(stack, b)
+			}
+		}
+	}
+	for len(stack) > 0 {
+		v := stack[len(stack)-1]
+		stack = stack[:len(stack)-1]
+		for w := range g.v[v].nbr {
+			if !seen[w] {
+				seen[w] = true
+				stack = append(stack, w)
+			}
+		}
+	}
+	if len(seen) > maxComponent {
+		return nil, false
+	}
+	// Plain edges merge variables.
+	parent := map[int]int{}
+	var find func(int) int
+	find = func(x int) int {
+		p, ok := parent[x]
+		if !ok || p == x {
+			return x
+		}
+		r := find(p)
+		parent[x] = r
+		return r
+	}
+	var fs []factor
+	for v := range seen {
+		if g.isSpider(v) {
+			if p := g.v[v].ph; p.k != 0 || p.r != 0 {
+				a := float64(p.k)*quarter + p.r
+				fs = append(fs, factor{vars: []int{v}, data: []complex128{1, cmplx.Exp(complex(0, a))}})
+			}
+		}
+		for w, t := range g.v[v].nbr {
+			if w < v {
+				continue
+			}
+			if t == plain {
+				parent[find(w)] = find(v)
+			} else {
+				fs = append(fs, factor{vars: []int{v, w}, data: []complex128{1, 1, 1, -1}})
+			}
+		}
+	}
+	for i := range fs {
+		for j, x := range fs[i].vars {
+			fs[i].vars[j] = find(x)
+		}
+		fs[i] = dedupe(fs[i])
+	}
+	open := map[int]bool{}
+	for _, q := range wires {
+		open[find(g.in[q])] = true
+		open[find(g.out[q])] = true
+	}
+	// Eliminate the closed variables.
+	for {
+		best, bestSize := -1, math.MaxInt
+		vars := map[int]bool{}
+		for _, f := range fs {
+			for _, x := range f.vars {
+				if !open[x] {
+					vars[x] = true
+				}
+			}
+		}
+		if len(vars) == 0 {
+			break
+		}
+		for x := range vars {
+			scope := map[int]bool{}
+			for _, f := range fs {
+				if slices.Contains(f.vars, x) {
+					for _, y := range f.vars {
+						scope[y] = true
+					}
+				}
+			}
+			if len(scope) < bestSize || len(scope) == bestSize && x < best {
+				best, bestSize = x, len(scope)
+			}
+		}
+		if bestSize > maxScope {
+			return nil, false
+		}
+		var with, rest []factor
+		for _, f := range fs {
+			if slices.Contains(f.vars, best) {
+				with = append(with, f)
+			} else {
+				rest = append(rest, f)
+			}
+		}
+		fs = append(rest, sumOut(with, best))
+	}
+	// Multiply what is left into the matrix.
+	k := len(wires)
+	if 2*k > maxScope {
+		return nil, false
+	}
+	m := make([]complex128, 1<<(2*k))
+	vals := map[int]int{}
+	for row := 0; row < 1<<k; row++ {
+		for col := 0; col < 1<<k; col++ {
+			clear(vals)
+			consistent := true
+			set := func(x, b int) {
+				if old, ok := vals[x]; ok && old != b {
+					consistent = false
+				}
+				vals[x] = b
+			}
+			for j, q := range wires {
+				set(find(g.in[q]), col>>j&1)
+				set(find(g.out[q]), row>>j&1)
+			}
+			if !consistent {
+				continue
+			}
+			e := complex(1, 0)
+			for _, f := range fs {
+				e *= f.at(func(x int) int { return vals[x] })
+			}
+			m[row<<k|col] = e
+		}
+	}
+	return m, true
+}
+
+// dedupe merges repeated variables of a factor (two ends of an edge joined by plain edges), keeping
+// the diagonal.
+func dedupe(f factor) factor {
+	var vars []int
+	for _, x := range f.vars {
+		if !slices.Contains(vars, x) {
+			vars = append(vars, x)
+		}
+	}
+	if len(vars) == len(f.vars) {
+		return f
+	}
+	out := factor{vars: vars, data: make([]complex128, 1<<len(vars))}
+	for i := range out.data {
+		out.data[i] = f.at(func(x int) int { return i >> slices.Index(vars, x) & 1 })
+	}
+	return out
+}
+
+// sumOut multiplies the factors and sums variable x out.
+func sumOut(fs []factor, x int) factor {
+	var vars []int
+	for _, f := range fs {
+		for _, y := range f.vars {
+			if y != x && !slices.Contains(vars, y) {
+				vars = append(vars, y)
+			}
+		}
+	}
+	out := factor{vars: vars, data: make([]complex128, 1<<len(vars))}
+	// Precompute, per factor, where each of its variables sits in vars (−1 for x).
+	pos := make([][]int, len(fs))
+	for i, f := range fs {
+		pos[i] = make([]int, len(f.vars))
+		for j, y := range f.vars {
+			pos[i][j] = slices.Index(vars, y)
+		}
+	}
+	for i := range out.data {
+		var s complex128
+		for b := 0; b < 2; b++ {
+			e := complex(1, 0)
+			for fi, f := range fs {
+				idx := 0
+				for j, p := range pos[fi] {
+					bit := b
+					if p >= 0 {
+						bit = i >> p & 1
+					}
+					idx |= bit << j
+				}
+				e *= f.data[idx]
+			}
+			s += e
+		}
+		out.data[i] = s
+	}
+	return out
+}
