@@ -54,9 +54,12 @@ func (b *builder) z(q int) int {
 	return v
 }
 
-func (b *builder) h(q int)             { b.pend[q] = !b.pend[q] }
-func (b *builder) zk(q, k int)         { v := b.z(q); b.g.v[v].ph = b.g.v[v].ph.add(exact(k), b.g) }
-func (b *builder) za(q int, a float64) { v := b.z(q); b.g.v[v].ph = b.g.v[v].ph.add(angleToPhase(a, b.g), b.g) }
+func (b *builder) h(q int)     { b.pend[q] = !b.pend[q] }
+func (b *builder) zk(q, k int) { v := b.z(q); b.g.v[v].ph = b.g.v[v].ph.add(exact(k), b.g) }
+func (b *builder) za(q int, a float64) {
+	v := b.z(q)
+	b.g.v[v].ph = b.g.v[v].ph.add(angleToPhase(a, b.g), b.g)
+}
 func (b *builder) xk(q, k int)         { b.h(q); b.zk(q, k); b.h(q) }
 func (b *builder) xa(q int, a float64) { b.h(q); b.za(q, a); b.h(q) }
 

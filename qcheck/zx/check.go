@@ -3,7 +3,7 @@ package zx
 import (
 	"fmt"
 	"math"
-	
+
 	"gonum.org/v1/gonum/mat"
 	"qcheck.dev/metric"
 	"qcheck.dev/qcheck/circuit"
@@ -46,7 +46,7 @@ type Options struct {
 
 // DefaultTol is the default phase tolerance: far above the rounding of angles that compilers
 // write as floating-point multiples of π, far below any angle a pass changes on purpose.
-const DefaultTol = 1e-10
+const DefaultTol = 1e-12
 
 // Result is the answer of Check about D = min over φ of ‖U − e^{iφ}V‖, the operator-norm distance
 // with the global phase taken out.

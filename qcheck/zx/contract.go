@@ -146,33 +146,77 @@ func (g *graph) matrix(wires []int) ([]complex128, bool) {
 	if 2*k > maxScope {
 		return nil, false
 	}
-	m := make([]complex128, 1<<(2*k))
-	vals := map[int]int{}
-	for row := 0; row < 1<<k; row++ {
-		for col := 0; col < 1<<k; col++ {
-			clear(vals)
-			consistent := true
-			set := func(x, b int) {
-				if old, ok := vals[x]; ok && old != b {
-					consistent = false
-				}
-				vals[x] = b
+	all := product(fs)
+	pos := make([]int, len(all.vars))
+	for j, x := range all.vars {
+		pos[j] = -1
+		for i, q := range wires {
+			if find(g.in[q]) == x {
+				pos[j] = i
+			} else if find(g.out[q]) == x {
+				pos[j] = k + i
 			}
-			for j, q := range wires {
-				set(find(g.in[q]), col>>j&1)
-				set(find(g.out[q]), row>>j&1)
-			}
-			if !consistent {
-				continue
-			}
-			e := complex(1, 0)
-			for _, f := range fs {
-				e *= f.at(func(x int) int { return vals[x] })
-			}
-			m[row<<k|col] = e
 		}
 	}
+	inC, outC := make([]int, k), make([]int, k)
+	for i, q := range wires {
+		inC[i], outC[i] = find(g.in[q]), find(g.out[q])
+	}
+	m := make([]complex128, 1<<(2*k))
+	for idx := range m {
+		col, row := idx&(1<<k-1), idx>>k
+		// Every wire end reads its bit; ends merged into one variable must agree.
+		ok := true
+		for j := range k {
+			for i := range k {
+				if inC[i] == inC[j] && col>>i&1 != col>>j&1 || outC[i] == inC[j] && row>>i&1 != col>>j&1 ||
+					outC[i] == outC[j] && row>>i&1 != row>>j&1 {
+					ok = false
+				}
+			}
+		}
+		if !ok {
+			continue
+		}
+		e := 0
+		for j, p := range pos {
+			if p >= 0 && idx>>p&1 == 1 {
+				e |= 1 << j
+			}
+		}
+		m[row<<k|col] = all.data[e]
+	}
 	return m, true
+}
+
+// product multiplies factors into one.
+func product(fs []factor) factor {
+	var vars []int
+	for _, f := range fs {
+		for _, y := range f.vars {
+			if !slices.Contains(vars, y) {
+				vars = append(vars, y)
+			}
+		}
+	}
+	out := factor{vars: vars, data: make([]complex128, 1<<len(vars))}
+	for i := range out.data {
+		out.data[i] = 1
+	}
+	for _, f := range fs {
+		pos := make([]int, len(f.vars))
+		for j, y := range f.vars {
+			pos[j] = slices.Index(vars, y)
+		}
+		for i := range out.data {
+			idx := 0
+			for j, p := range pos {
+				idx |= (i >> p & 1) << j
+			}
+			out.data[i] *= f.data[idx]
+		}
+	}
+	return out
 }
 
 // dedupe merges repeated variables of a factor (two ends of an edge joined by plain edges), keeping

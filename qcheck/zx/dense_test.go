@@ -1,6 +1,7 @@
 package zx
 
 import (
+	"flag"
 	"fmt"
 	"math/rand/v2"
 	"testing"
@@ -17,7 +18,7 @@ func TestAgainstDense(t *testing.T) {
 	rng := rand.New(rand.NewPCG(5, 6))
 	undecided, total := 0, 0
 	for trial := range 60 {
-		n := 2 + trial%9
+		n := 2 + trial%maxDenseQubits()
 		var c *circuit.Circuit
 		switch trial % 3 {
 		case 0:
@@ -66,4 +67,15 @@ func TestAgainstDense(t *testing.T) {
 		}
 	}
 	t.Logf("%d of %d verdicts undecided", undecided, 2*total)
+}
+
+var wide = flag.Bool("zx.wide", false, "run the wide cases: dense checks up to 10 qubits, 64+-qubit proofs")
+
+// maxDenseQubits is the range of widths of TestAgainstDense beyond 2: up to 10 qubits with
+// -zx.wide, 7 otherwise.
+func maxDenseQubits() int {
+	if *wide {
+		return 9
+	}
+	return 6
 }

@@ -25,6 +25,12 @@ func (g *graph) simplify(budget int) bool {
 	}
 }
 
+// sorted returns the neighbours of v in increasing order, so that the rewriting is the same on
+// every run.
+func (g *graph) sorted(v int) []int {
+	return slices.Sorted(maps.Keys(g.v[v].nbr))
+}
+
 func (g *graph) alive() []int {
 	out := make([]int, 0, len(g.v))
 	for v := range g.v {
@@ -42,8 +48,8 @@ func (g *graph) basic() bool {
 		if !g.v[v].alive || !g.isSpider(v) {
 			continue
 		}
-		for w, t := range g.v[v].nbr {
-			if t == plain && g.isSpider(w) {
+		for _, w := range g.sorted(v) {
+			if g.v[v].nbr[w] == plain && g.isSpider(w) {
 				g.fuse(v, w)
 				changed = true
 				break
@@ -108,7 +114,7 @@ func (g *graph) pivotAll() bool {
 		if !g.v[u].alive || !g.interior(u) || !g.pauli(u) {
 			continue
 		}
-		for v := range g.v[u].nbr {
+		for _, v := range g.sorted(u) {
 			if g.interior(v) && g.pauli(v) {
 				g.pivot(u, v)
 				changed = true
@@ -202,7 +208,9 @@ func (g *graph) gadgets() bool {
 			continue
 		}
 		key := supportKey(g.support(a, p))
-		if q, ok := seen[key]; ok && g.v[q].alive {
+		// A gadget seen earlier in this pass may have lost or changed its support since; merge only
+		// when it still hangs off an axle with exactly this support.
+		if q, ok := seen[key]; ok && g.v[q].alive && g.leaf(q) && g.sameGadget(q, key) {
 			g.v[q].ph = g.v[q].ph.add(g.v[p].ph, g)
 			g.remove(p)
 			g.remove(a)
@@ -213,6 +221,14 @@ func (g *graph) gadgets() bool {
 		seen[key] = p
 	}
 	return changed
+}
+
+func (g *graph) sameGadget(q int, key string) bool {
+	var a int
+	for w := range g.v[q].nbr {
+		a = w
+	}
+	return g.v[a].alive && g.isSpider(a) && g.v[a].ph.k == 0 && g.v[a].ph.r == 0 && supportKey(g.support(a, q)) == key
 }
 
 func (g *graph) support(a, p int) []int {
@@ -242,7 +258,7 @@ func (g *graph) pivotGadgets() bool {
 		if !g.v[u].alive || !g.interior(u) || g.hasLeaf(u) || g.leaf(u) || !g.pauli(u) {
 			continue
 		}
-		for v := range g.v[u].nbr {
+		for _, v := range g.sorted(u) {
 			if !g.interior(v) || g.leaf(v) || g.hasLeaf(v) || g.clifford(v) {
 				continue
 			}
@@ -274,7 +290,7 @@ func (g *graph) pivotBoundaries() bool {
 		if !g.v[u].alive || !g.interior(u) || g.hasLeaf(u) || g.leaf(u) || !g.pauli(u) {
 			continue
 		}
-		for v := range g.v[u].nbr {
+		for _, v := range g.sorted(u) {
 			if g.interior(v) || g.hasLeaf(v) || !g.pauli(v) {
 				continue
 			}
