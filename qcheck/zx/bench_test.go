@@ -60,7 +60,7 @@ func BenchmarkVolume(b *testing.B) {
 		v := rewritten(c, 3)
 		b.Run(fmt.Sprint(n, "/equivalent"), func(b *testing.B) { benchPair(b, c, v, Equivalent) })
 		for kind, name := range []string{"angle", "flip", "drop"} {
-			w := bug(v, kind, 0.3, rand.New(rand.NewPCG(uint64(kind), 11)))
+			w := rewritten(bug(c, kind, 0.3, rand.New(rand.NewPCG(uint64(kind), 11))), 3)
 			b.Run(fmt.Sprint(n, "/", name), func(b *testing.B) { benchPair(b, c, w, Different) })
 		}
 	}

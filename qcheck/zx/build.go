@@ -15,7 +15,7 @@ type builder struct {
 }
 
 func newBuilder(n int, tol float64) *builder {
-	b := &builder{g: &graph{tol: tol}, last: make([]int, n), pend: make([]bool, n)}
+	b := &builder{g: &graph{tol: tol, origin: -1}, last: make([]int, n), pend: make([]bool, n)}
 	b.g.in = make([]int, n)
 	for q := range n {
 		b.g.in[q] = b.g.add(boundary, phase{})
@@ -65,6 +65,8 @@ func (b *builder) xa(q int, a float64) { b.h(q); b.za(q, a); b.h(q) }
 
 func (b *builder) cz(c, t int) {
 	vc, vt := b.z(c), b.z(t)
+	b.g.v[vc].from = max(b.g.v[vc].from, b.g.origin)
+	b.g.v[vt].from = max(b.g.v[vt].from, b.g.origin)
 	b.g.connect(vc, vt, hadamard)
 }
 
@@ -73,6 +75,8 @@ func (b *builder) cx(c, t int) {
 	b.h(t)
 	vt := b.z(t)
 	b.h(t)
+	b.g.v[vc].from = max(b.g.v[vc].from, b.g.origin)
+	b.g.v[vt].from = max(b.g.v[vt].from, b.g.origin)
 	b.g.connect(vc, vt, hadamard)
 }
 
@@ -242,19 +246,32 @@ func (b *builder) op(i int, o circuit.Op) error {
 	return nil
 }
 
-// miter returns the diagram of V†·U: U's ops, then the inverse of V's, on shared wires.
-func miter(u, v *circuit.Circuit, tol float64) (*graph, error) {
+// miter returns the diagram of U[:cut]·V†·U[cut:], ops applied left to right: the ops of U from
+// cut on, the inverse of V, then the first cut ops of U. It is U1·(V†U)·U1† for U1 the first cut
+// ops, so it has the spectrum of V†U, and cut = 0 gives V†U itself.
+func miter(u, v *circuit.Circuit, cut int, tol float64) (*graph, error) {
 	b := newBuilder(u.Qubits(), tol)
-	for i, o := range u.Ops {
-		if err := b.op(i, o); err != nil {
-			return nil, fmt.Errorf("%w (first circuit)", err)
+	lay := func(from, to int) error {
+		for i := from; i < to; i++ {
+			b.g.origin = i
+			if err := b.op(i, u.Ops[i]); err != nil {
+				return fmt.Errorf("%w (first circuit)", err)
+			}
 		}
+		b.g.origin = -1
+		return nil
+	}
+	if err := lay(cut, len(u.Ops)); err != nil {
+		return nil, err
 	}
 	inv := v.Inverse()
 	for i, o := range inv.Ops {
 		if err := b.op(len(v.Ops)-1-i, o); err != nil {
 			return nil, fmt.Errorf("%w (second circuit)", err)
 		}
+	}
+	if err := lay(0, cut); err != nil {
+		return nil, err
 	}
 	return b.finish(), nil
 }

@@ -62,6 +62,10 @@ type Result struct {
 	Support []int
 	// Spiders is the number of spiders left in the simplified diagram (scalar parts included).
 	Spiders int
+	// Cut is the number of ops of U moved to the end of the product when V†U itself did not reduce
+	// (see Check); Support is then in the frame of U[:Cut]·V†·U[Cut:], which has the spectrum of
+	// V†U.
+	Cut int
 	// Reason says why the verdict is Undecided.
 	Reason string
 }
@@ -93,12 +97,40 @@ func Check(u, v *circuit.Circuit, opts Options) (Result, error) {
 	if opts.Budget == 0 {
 		opts.Budget = 200
 	}
-	g, err := miter(u, v, opts.Tol)
+	r, hi, err := check(u, v, 0, opts)
+	if err != nil || r.Verdict != Undecided || hi < 0 {
+		return r, err
+	}
+	// V†U did not reduce. If the circuits differ by a local change at op i of U, the diagram of V†U
+	// keeps U's ops before i (and V's), conjugating the change; the latest op of U still present,
+	// hi, is about i. Cutting U there puts both halves of each circuit next to their partner, and
+	// U[:cut]·V†·U[cut:] has the spectrum, hence the distance, of V†U.
+	for _, cut := range []int{hi, hi + 1} {
+		if cut <= 0 || cut > len(u.Ops) {
+			continue
+		}
+		rc, _, err := check(u, v, cut, opts)
+		if err != nil {
+			return r, err
+		}
+		if rc.Verdict != Undecided {
+			rc.Cut = cut
+			return rc, nil
+		}
+	}
+	return r, nil
+}
+
+// check simplifies the diagram of U[:cut]·V†·U[cut:] and returns the verdict and the latest op of
+// U that a spider still joined to the wires came from (−1 if none).
+func check(u, v *circuit.Circuit, cut int, opts Options) (Result, int, error) {
+	g, err := miter(u, v, cut, opts.Tol)
 	if err != nil {
-		return Result{}, err
+		return Result{}, -1, err
 	}
 	done := g.simplify(opts.Budget * (len(g.v) + 1))
 	r := Result{Bound: g.bound()}
+	hi := -1
 	for _, x := range g.alive() {
 		if g.isSpider(x) {
 			r.Spiders++
@@ -111,32 +143,58 @@ func Check(u, v *circuit.Circuit, opts Options) (Result, error) {
 	}
 	if len(r.Support) == 0 {
 		r.Verdict = Equivalent
-		return r, nil
+		return r, hi, nil
 	}
+	hi = g.latest(r.Support)
 	if len(r.Support) > opts.MaxSupport {
 		r.Reason = fmt.Sprintf("V†U reduced to %d spiders acting on %d wires, more than %d", r.Spiders, len(r.Support), opts.MaxSupport)
 		if !done {
 			r.Reason += " (rewriting budget exhausted)"
 		}
-		return r, nil
+		return r, hi, nil
 	}
 	m, ok := g.matrix(r.Support)
 	if !ok {
 		r.Reason = fmt.Sprintf("the remainder on %d wires has %d spiders, too many to contract", len(r.Support), r.Spiders)
-		return r, nil
+		return r, hi, nil
 	}
 	d, ok := phaseDistanceFromIdentity(m, len(r.Support))
 	if !ok {
 		r.Reason = "the remainder's matrix is not a multiple of a unitary to 1e-9; the contraction lost accuracy"
-		return r, nil
+		return r, hi, nil
 	}
 	r.Distance, r.Known = d, true
-	if d > r.Bound+1e-12 {
+	if d > r.Bound+roundingAllowance {
 		r.Verdict = Different
 	} else {
 		r.Verdict = Equivalent
 	}
-	return r, nil
+	return r, hi, nil
+}
+
+// latest returns the largest from of the spiders joined to the given wires.
+func (g *graph) latest(wires []int) int {
+	hi := -1
+	seen := map[int]bool{}
+	var stack []int
+	for _, q := range wires {
+		stack = append(stack, g.in[q], g.out[q])
+	}
+	for len(stack) > 0 {
+		x := stack[len(stack)-1]
+		stack = stack[:len(stack)-1]
+		if seen[x] {
+			continue
+		}
+		seen[x] = true
+		if g.isSpider(x) {
+			hi = max(hi, g.v[x].from)
+		}
+		for w := range g.v[x].nbr {
+			stack = append(stack, w)
+		}
+	}
+	return hi
 }
 
 // bound is the proved bound on the distance the rewriting may have hidden: half the residuals

@@ -23,6 +23,8 @@ type vertex struct {
 	alive bool
 	ph    phase
 	nbr   map[int]edge
+	// from is the latest op of the first circuit whose gate laid part of this spider, or −1.
+	from int
 }
 
 // graph is a ZX-diagram: Z spiders and boundaries joined by plain and Hadamard edges, no two
@@ -36,10 +38,13 @@ type graph struct {
 	snapped float64
 	slack   float64
 	steps   int
+	// origin is the op of the first circuit being laid, −1 while laying the second; new spiders
+	// record it in from.
+	origin int
 }
 
 func (g *graph) add(k kind, p phase) int {
-	g.v = append(g.v, vertex{kind: k, alive: true, ph: p, nbr: map[int]edge{}})
+	g.v = append(g.v, vertex{kind: k, alive: true, ph: p, nbr: map[int]edge{}, from: g.origin})
 	return len(g.v) - 1
 }
 
@@ -81,6 +86,7 @@ func (g *graph) connect(u, w int, t edge) {
 // fuse merges spider v into spider u, to which it is joined by a plain edge: phases add.
 func (g *graph) fuse(u, v int) {
 	g.v[u].ph = g.v[u].ph.add(g.v[v].ph, g)
+	g.v[u].from = max(g.v[u].from, g.v[v].from)
 	nbr := g.v[v].nbr
 	g.remove(v)
 	for w, t := range nbr {

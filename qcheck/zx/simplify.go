@@ -277,6 +277,7 @@ func (g *graph) pivotGadgets() bool {
 func (g *graph) gadgetize(v int) {
 	a := g.add(spider, phase{})
 	p := g.add(spider, g.v[v].ph)
+	g.v[a].from, g.v[p].from = g.v[v].from, g.v[v].from
 	g.v[v].ph = phase{}
 	g.connect(v, a, hadamard)
 	g.connect(a, p, hadamard)
