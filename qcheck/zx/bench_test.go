@@ -20,6 +20,8 @@ func benchPair(b *testing.B, u, v *circuit.Circuit, want Verdict) {
 		b.Skip("needs -zx.wide")
 	}
 	b.ReportAllocs()
+	start := processCPU()
+	defer func() { b.ReportMetric((processCPU()-start)/float64(b.N), "cpu-s/op") }()
 	for b.Loop() {
 		r, err := Compare(u, v, Options{})
 		if err != nil {

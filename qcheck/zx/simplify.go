@@ -48,12 +48,16 @@ func (g *graph) basic() bool {
 		if !g.v[v].alive || !g.isSpider(v) {
 			continue
 		}
-		for _, w := range g.sorted(v) {
-			if g.v[v].nbr[w] == plain && g.isSpider(w) {
-				g.fuse(v, w)
-				changed = true
-				break
+		// Fuse with the lowest-numbered spider on a plain edge, so that runs repeat exactly.
+		w := -1
+		for x, t := range g.v[v].nbr {
+			if t == plain && g.isSpider(x) && (w < 0 || x < w) {
+				w = x
 			}
+		}
+		if w >= 0 {
+			g.fuse(v, w)
+			changed = true
 		}
 	}
 	for _, v := range g.alive() {
