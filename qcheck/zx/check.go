@@ -3,6 +3,7 @@ package zx
 import (
 	"fmt"
 	"math"
+	"slices"
 
 	"gonum.org/v1/gonum/mat"
 	"qcheck.dev/metric"
@@ -146,30 +147,157 @@ func check(u, v *circuit.Circuit, cut int, opts Options) (Result, int, error) {
 		return r, hi, nil
 	}
 	hi = g.latest(r.Support)
-	if len(r.Support) > opts.MaxSupport {
-		r.Reason = fmt.Sprintf("V†U reduced to %d spiders acting on %d wires, more than %d", r.Spiders, len(r.Support), opts.MaxSupport)
-		if !done {
-			r.Reason += " (rewriting budget exhausted)"
+	groups := g.components(r.Support)
+	var phases []float64
+	for i, wires := range groups {
+		if len(wires) > opts.MaxSupport {
+			r.Reason = fmt.Sprintf("V†U reduced to %d spiders on %d wires, in a part joining %d wires, more than %d", r.Spiders, len(r.Support), len(wires), opts.MaxSupport)
+			if !done {
+				r.Reason += " (rewriting budget exhausted)"
+			}
+			return r, hi, nil
 		}
-		return r, hi, nil
+		m, ok := g.matrix(wires)
+		if !ok {
+			r.Reason = fmt.Sprintf("the part of the remainder on %d wires is too large to contract", len(wires))
+			return r, hi, nil
+		}
+		w, ok := unitaryFromScaled(m, len(wires))
+		if !ok {
+			r.Reason = "the remainder's matrix is not a multiple of a unitary to 1e-9; the contraction lost accuracy"
+			return r, hi, nil
+		}
+		ph := metric.Eigenphases(w)
+		if i == 0 {
+			phases = distinct(ph)
+		} else if phases = sumset(phases, ph); len(phases) > maxPhases {
+			r.Reason = fmt.Sprintf("the remainder is a product of %d parts whose spectra combine into more than %d eigenphases", len(groups), maxPhases)
+			return r, hi, nil
+		}
 	}
-	m, ok := g.matrix(r.Support)
-	if !ok {
-		r.Reason = fmt.Sprintf("the remainder on %d wires has %d spiders, too many to contract", len(r.Support), r.Spiders)
-		return r, hi, nil
-	}
-	d, ok := phaseDistanceFromIdentity(m, len(r.Support))
-	if !ok {
-		r.Reason = "the remainder's matrix is not a multiple of a unitary to 1e-9; the contraction lost accuracy"
-		return r, hi, nil
-	}
-	r.Distance, r.Known = d, true
-	if d > r.Bound+roundingAllowance {
+	r.Distance, r.Known = 2*math.Sin(arc(phases)/4), true
+	if r.Distance > r.Bound+roundingAllowance {
 		r.Verdict = Different
 	} else {
 		r.Verdict = Equivalent
 	}
 	return r, hi, nil
+}
+
+// maxPhases caps the distinct eigenphases kept while combining the parts of a remainder.
+const maxPhases = 1 << 14
+
+// phaseMerge is how close two eigenphases must be to count as one when combining parts: far
+// above their rounding (about 1e-13 for these sizes), far below any gap that matters.
+const phaseMerge = 1e-11
+
+// components splits the wires by the connected parts of the remainder that join them. If
+// V†U = c·(W_1 ⊗ … ⊗ W_m) on those parts, the eigenphases of V†U are, up to the global phase,
+// the sums of one eigenphase of each W_j.
+func (g *graph) components(wires []int) [][]int {
+	comp := map[int]int{}
+	parts := 0
+	for _, q := range wires {
+		for _, start := range []int{g.in[q], g.out[q]} {
+			if _, ok := comp[start]; ok {
+				continue
+			}
+			stack := []int{start}
+			for len(stack) > 0 {
+				x := stack[len(stack)-1]
+				stack = stack[:len(stack)-1]
+				if _, ok := comp[x]; ok {
+					continue
+				}
+				comp[x] = parts
+				for w := range g.v[x].nbr {
+					stack = append(stack, w)
+				}
+			}
+			parts++
+		}
+	}
+	// A part that joins the input of one wire to the output of another (a permutation) is merged
+	// with the part of that wire, so that each group maps its wires' inputs to the same wires'
+	// outputs.
+	parent := make([]int, parts)
+	for i := range parent {
+		parent[i] = i
+	}
+	var find func(int) int
+	find = func(x int) int {
+		for parent[x] != x {
+			x = parent[x]
+		}
+		return x
+	}
+	for _, q := range wires {
+		parent[find(comp[g.in[q]])] = find(comp[g.out[q]])
+	}
+	index := map[int]int{}
+	var out [][]int
+	for _, q := range wires {
+		r := find(comp[g.in[q]])
+		i, ok := index[r]
+		if !ok {
+			i = len(out)
+			index[r] = i
+			out = append(out, nil)
+		}
+		out[i] = append(out[i], q)
+	}
+	return out
+}
+
+// distinct returns the phases, reduced to [0, 2π), sorted, with near-equal ones merged.
+func distinct(ph []float64) []float64 {
+	out := make([]float64, 0, len(ph))
+	for _, p := range ph {
+		p = math.Mod(p, 2*math.Pi)
+		if p < 0 {
+			p += 2 * math.Pi
+		}
+		out = append(out, p)
+	}
+	slices.Sort(out)
+	k := 0
+	for _, p := range out {
+		if k > 0 && p-out[k-1] < phaseMerge {
+			continue
+		}
+		out[k] = p
+		k++
+	}
+	out = out[:k]
+	if k > 1 && out[0]+2*math.Pi-out[k-1] < phaseMerge {
+		out = out[:k-1]
+	}
+	return out
+}
+
+// sumset returns the distinct sums a + b mod 2π.
+func sumset(a, b []float64) []float64 {
+	s := make([]float64, 0, len(a)*len(b))
+	for _, x := range a {
+		for _, y := range b {
+			s = append(s, x+y)
+		}
+	}
+	return distinct(s)
+}
+
+// arc returns the length of the shortest arc of the circle that holds every phase: 2π minus the
+// widest gap between neighbours. min over φ of ‖W − e^{iφ}I‖ = 2·sin(arc/4) for a unitary W
+// with these eigenphases (metric.PhaseDistance).
+func arc(ph []float64) float64 {
+	if len(ph) <= 1 {
+		return 0
+	}
+	gap := ph[0] + 2*math.Pi - ph[len(ph)-1]
+	for i := 1; i < len(ph); i++ {
+		gap = max(gap, ph[i]-ph[i-1])
+	}
+	return 2*math.Pi - gap
 }
 
 // latest returns the largest from of the spiders joined to the given wires.
@@ -201,18 +329,16 @@ func (g *graph) latest(wires []int) int {
 // dropped and half the rounding slack (package documentation).
 func (g *graph) bound() float64 { return (g.snapped + g.slack) / 2 }
 
-// phaseDistanceFromIdentity scales m, which is c·W for an unknown c ≠ 0 and unitary W, to W and
-// returns min over φ of ‖W − e^{iφ}I‖. It reports false when m is not close to a multiple of a
-// unitary.
-func phaseDistanceFromIdentity(m []complex128, k int) (float64, bool) {
+// unitaryFromScaled scales m, which is c·W for an unknown c ≠ 0 and unitary W, to W. It reports
+// false when m is not close to a multiple of a unitary.
+func unitaryFromScaled(m []complex128, k int) (*mat.CDense, bool) {
 	n := 1 << k
-	w := mat.NewCDense(n, n, m)
 	var fro float64
 	for _, x := range m {
 		fro += real(x)*real(x) + imag(x)*imag(x)
 	}
 	if fro == 0 {
-		return 0, false
+		return nil, false
 	}
 	s := complex(math.Sqrt(float64(n)/fro), 0)
 	for i := range m {
@@ -226,12 +352,8 @@ func phaseDistanceFromIdentity(m []complex128, k int) (float64, bool) {
 			c += real(m[i*n+j])*real(m[i*n+j]) + imag(m[i*n+j])*imag(m[i*n+j])
 		}
 		if math.Abs(c-1) > 1e-9 {
-			return 0, false
+			return nil, false
 		}
 	}
-	id := mat.NewCDense(n, n, nil)
-	for i := range n {
-		id.Set(i, i, 1)
-	}
-	return metric.PhaseDistance(w, id), true
+	return mat.NewCDense(n, n, m), true
 }
