@@ -99,7 +99,7 @@ func TestBadInput(t *testing.T) {
 		{"exact phase with diamond", c2, c2, []Option{ExactPhase(), UseMeasure(Diamond)}, "ExactPhase with the diamond norm"},
 		{"measure ops without Measured", circuit.New(1).H(0).Measure(0, 0), circuit.New(1).H(0).Measure(0, 0), nil, "op 1 (measure): not a unitary"},
 		{"unknown measure", c2, c2, []Option{UseMeasure(Measure(42))}, "UseMeasure(Measure(42))"},
-		{"too wide for auto", circuit.New(25).T(0), circuit.New(25).T(0), nil, "25 qubits is too wide for every engine that handles non-Clifford circuits"},
+		{"too wide for auto", circuit.New(25).T(0), circuit.New(25).T(0), nil, "25 qubits is too wide for the dense engine (up to 12) and the matrix-free engine (up to 22), and the tableau engine cannot answer: want is not"},
 		{"measured at width", circuit.New(13).T(0), circuit.New(13).T(0), []Option{Measured(0)}, "13 qubits is wider than the dense engine"},
 	}
 	for _, tc := range cases {

@@ -2,7 +2,6 @@ package qcheck
 
 import (
 	"fmt"
-	"math"
 
 	"qcheck.dev/qcheck/circuit"
 	"qcheck.dev/qcheck/sim"
@@ -32,14 +31,15 @@ func chooseEngine(cfg *config, f *frame) (Engine, error) {
 		if f.m <= denseAuto {
 			return Dense, nil
 		}
-		if err := wideEngineFits(cfg, f, Tableau); err == nil {
+		tabErr := wideEngineFits(cfg, f, Tableau)
+		if tabErr == nil {
 			return Tableau, nil
 		}
 		if err := wideEngineFits(cfg, f, MatrixFree); err != nil {
 			return 0, fmt.Errorf("qcheck: %d qubits is wider than the dense engine handles automatically (%d), and %v", f.m, denseAuto, err)
 		}
 		if f.m > matrixFreeAuto {
-			return 0, fmt.Errorf("qcheck: %d qubits is too wide for every engine that handles non-Clifford circuits (dense up to %d, matrix-free up to %d); only Clifford circuits are compared at this width", f.m, denseAuto, matrixFreeAuto)
+			return 0, fmt.Errorf("qcheck: %d qubits is too wide for the dense engine (up to %d) and the matrix-free engine (up to %d), and the tableau engine cannot answer: %v", f.m, denseAuto, matrixFreeAuto, tabErr)
 		}
 		return MatrixFree, nil
 	}
@@ -61,43 +61,30 @@ func wideEngineFits(cfg *config, f *frame, e Engine) error {
 		return fmt.Errorf("the %v engine reports the operator-norm distance only, not %v", e, cfg.measure)
 	}
 	if e == Tableau {
-		if !sim.IsClifford(f.want) {
-			return fmt.Errorf("want is not a Clifford circuit, which the tableau engine needs")
-		}
-		if !sim.IsClifford(f.got) {
-			return fmt.Errorf("got is not a Clifford circuit, which the tableau engine needs")
-		}
-		b, ok := cliffordRounding(f.want, f.got)
-		if !ok {
-			return fmt.Errorf("the tableau engine cannot bound how far custom gates are from the Cliffords it computes with")
+		b, err := cliffordRounding(f.want, f.got)
+		if err != nil {
+			return err
 		}
 		if b >= cfg.tol {
-			return fmt.Errorf("the angles are off exact Clifford angles by %.3g in total, not below the tolerance %g, so the tableau's exact answer would not settle it", b, cfg.tol)
+			return fmt.Errorf("the angles are off exact Clifford angles by up to %.3g in operator norm in total, not below the tolerance %g, so the tableau's exact answer would not settle it", b, cfg.tol)
 		}
 	}
 	return nil
 }
 
-// cliffordRounding bounds how far the circuits the tableau accepts are, in operator norm, from
-// the exact Clifford circuits it computes with. The tableau accepts a gate whose angles lie within
-// sim.CliffordTolerance of Clifford ones; an angle off by δ moves its gate by at most |δ| (every
-// gate's derivative in each of its angles has norm at most 1: ½ for the rotations exp(−iθP/2),
-// 1 for p, cp and u), and such deviations add up over a circuit (Nielsen & Chuang §4.5.3). It
-// reports false for custom gates, which have no angle to measure by.
-func cliffordRounding(cs ...*circuit.Circuit) (float64, bool) {
-	const quarter = math.Pi / 2
-	b := 0.0
-	for _, c := range cs {
-		for _, op := range c.Ops {
-			if op.Gate.IsCustom() {
-				return 0, false
-			}
-			for _, p := range op.Gate.Params {
-				b += math.Abs(p - math.Round(p/quarter)*quarter)
-			}
-		}
+// cliffordRounding bounds, in operator norm, how far want and got are from the exact Clifford
+// circuits the tableau computes with (sim.CliffordDeviation), or says why the tableau cannot
+// answer for them.
+func cliffordRounding(want, got *circuit.Circuit) (float64, error) {
+	a, err := sim.CliffordDeviation(want)
+	if err != nil {
+		return 0, fmt.Errorf("want is not a circuit the tableau engine can answer for: %v", err)
 	}
-	return b, true
+	b, err := sim.CliffordDeviation(got)
+	if err != nil {
+		return 0, fmt.Errorf("got is not a circuit the tableau engine can answer for: %v", err)
+	}
+	return a + b, nil
 }
 
 // certifies says in words what an engine's verdict guarantees.

@@ -35,7 +35,10 @@ func compareTableau(cfg *config, f *frame, r *Result) error {
 	}
 	// Angles within rounding of Clifford ones move each circuit by at most rounding from the
 	// exact Clifford circuit the tableau compared (wideEngineFits keeps it below the tolerance).
-	rounding, _ := cliffordRounding(f.want, got)
+	rounding, err := cliffordRounding(f.want, got)
+	if err != nil {
+		return fmt.Errorf("qcheck: %v", err)
+	}
 	if rounding > 0 {
 		r.Certifies += fmt.Sprintf("; angles off Clifford ones by %.2g in total, which bounds the distance of equivalent circuits", rounding)
 	}

@@ -348,3 +348,53 @@ func TestTableauRefusesRoundedAnglesBeyondTolerance(t *testing.T) {
 		t.Errorf("engine %v, equivalent %v, certifies %q", r.Engine, r.Equivalent, r.Certifies)
 	}
 }
+
+// Issue 17, reproducer 1: angles far from 0 whose offsets from multiples of 2π float64 cannot
+// see. 4,096 × rz(2π·2050) (each 9.995e-13 rad below 4100π) and 8,000 × rz(6697.8755374534385)
+// (each 7.016e-13 below 4264π) add up to rz(Nδ), at distance 2 sin(N|δ|/4) from the identity
+// up to phase: 2.0469e-9 and 2.8065e-9, from δ computed by mpmath at 2,000 bits
+// (testdata/circuit/angles.py). The tableau, which once rounded the offsets to 0, must not call
+// these equivalent at the default tolerance.
+func TestLargeCliffordAnglesAreNotRoundedAway(t *testing.T) {
+	cases := []struct {
+		n     int
+		angle float64
+		want  float64
+	}{
+		{4096, 0x1.92843d3193e23p+13, 2.046945490293729e-09}, // 2π·2050 evaluated in float64, as a QASM file's 2*pi*2050
+		{8000, 6697.8755374534385, 2.806524774997911e-09},
+	}
+	for _, c := range cases {
+		got := circuit.New(13)
+		for range c.n {
+			got.RZ(c.angle, 0)
+		}
+		if _, err := Compare(circuit.New(13), got, UseEngine(Tableau)); err == nil {
+			t.Errorf("%d × rz(%v): the tableau answered although the angles are off Clifford ones by more than the tolerance", c.n, c.angle)
+		}
+		r, err := Compare(circuit.New(13), got)
+		if err != nil {
+			t.Fatal(err)
+		}
+		if r.Equivalent || math.Abs(r.Distance-c.want) > 1e-12 {
+			t.Errorf("%d × rz(%v), engine %v: equivalent %v, distance %.5g, want %.5g", c.n, c.angle, r.Engine, r.Equivalent, r.Distance, c.want)
+		}
+	}
+}
+
+// Issue 17, reproducer 13: a Clifford pair too wide for the other engines, refused because its
+// angles' offsets exceed the tolerance, is refused for that reason, with the bound.
+func TestWideRefusalSaysTheRoundingBound(t *testing.T) {
+	got := circuit.New(30)
+	for range 4000 {
+		got.RZ(math.Pi/2+9e-13, 0)
+	}
+	_, err := Compare(circuit.New(30), got)
+	if err == nil {
+		t.Fatal("Compare answered")
+	}
+	// 4000 offsets of 9e-13 (to float64 rounding of π/2 + 9e-13): a bound of 3.6e-9.
+	if msg := err.Error(); !strings.Contains(msg, "off exact Clifford angles by up to 3.6e-09") || !strings.Contains(msg, "tolerance 1e-09") {
+		t.Errorf("the refusal does not give the reason and the bound: %v", err)
+	}
+}

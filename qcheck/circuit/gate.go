@@ -115,7 +115,8 @@ func (g Gate) Matrix() *mat.CDense {
 }
 
 // Elements returns the gate's matrix as a fresh row-major slice of 4^k entries, in the same order
-// as Matrix, or nil where Matrix returns nil. Engines use it to avoid the mat wrapper.
+// as Matrix, or nil where Matrix returns nil. Engines use it to avoid the mat wrapper. Angles are
+// reduced modulo 4π exactly first (see ReduceAngle), so every finite angle gives a finite matrix.
 func (g Gate) Elements() []complex128 {
 	if g.custom != nil {
 		return append([]complex128(nil), g.custom.data...)
@@ -124,7 +125,7 @@ func (g Gate) Elements() []complex128 {
 	if !ok || d.matrix == nil || len(g.Params) != d.spec.Params {
 		return nil
 	}
-	return d.matrix(g.Params)
+	return d.matrix(reduceAngles(g.Params))
 }
 
 // Inverse returns the exact inverse of the gate: self-inverse gates return themselves, pairs such

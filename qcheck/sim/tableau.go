@@ -2,6 +2,7 @@ package sim
 
 import (
 	"fmt"
+	"math"
 	"math/bits"
 
 	"qcheck.dev/qcheck/circuit"
@@ -45,7 +46,7 @@ func identityTableau(n int) *Tableau {
 // CliffordTolerance, and custom gates on more than three qubits or that do not map Pauli strings to
 // Pauli strings. Barriers and gates that act as the identity are skipped.
 func NewTableau(c *circuit.Circuit) (*Tableau, error) {
-	ops, err := compileClifford(c)
+	ops, _, err := compileClifford(c)
 	if err != nil {
 		return nil, err
 	}
@@ -59,8 +60,32 @@ func NewTableau(c *circuit.Circuit) (*Tableau, error) {
 // IsClifford reports whether the circuit is well formed and every op is a Clifford gate the
 // tableau accepts (see NewTableau), so that the tableau engine can decide its equivalence.
 func IsClifford(c *circuit.Circuit) bool {
-	_, err := compileClifford(c)
+	_, _, err := compileClifford(c)
 	return err == nil
+}
+
+// CliffordDeviation returns a bound, in operator norm, on how far the unitary of c is from the
+// exact Clifford unitary whose tableau NewTableau builds: NewTableau accepts a gate whose angles lie
+// within CliffordTolerance of multiples of π/2 and uses the gate at those multiples, and an angle
+// off by δ moves its gate by at most |δ| (every library gate's derivative in each angle has norm
+// at most 1), deviations that add up over a circuit (Nielsen & Chuang §4.5.3). The
+// offsets are computed exactly (circuit.QuarterTurns), so the bound holds for angles of any size,
+// and the sum is rounded upwards. It fails where NewTableau fails, and for a circuit with a custom
+// gate other than the identity, which has no angle to measure its distance by.
+func CliffordDeviation(c *circuit.Circuit) (float64, error) {
+	_, dev, err := compileClifford(c)
+	if err != nil {
+		return 0, err
+	}
+	if math.IsNaN(dev) {
+		for i, op := range c.Ops {
+			if op.Gate.IsCustom() {
+				return 0, &circuit.OpError{Index: i, Gate: op.Gate.Name, Err: "a custom gate has no angles by which to bound its distance from the Clifford gate the tableau uses"}
+			}
+		}
+	}
+	// Each term is an exact offset rounded once, and the sum adds one rounding per term.
+	return dev * (1 + float64(len(c.Ops)+2)*0x1p-52), nil
 }
 
 // cliffordOp is an op reduced to its Pauli map and operands.
@@ -69,23 +94,27 @@ type cliffordOp struct {
 	qubits []int
 }
 
-// compileClifford validates c and returns the Pauli map of every op that is not skipped.
-func compileClifford(c *circuit.Circuit) ([]cliffordOp, error) {
+// compileClifford validates c and returns the Pauli map of every op that is not skipped, with the
+// sum of the ops' deviations from their Clifford gates (see mapCache.lookup); NaN when a custom
+// gate has no such bound.
+func compileClifford(c *circuit.Circuit) ([]cliffordOp, float64, error) {
 	if err := c.Validate(); err != nil {
-		return nil, err
+		return nil, 0, err
 	}
 	cache := mapCache{}
 	ops := make([]cliffordOp, 0, len(c.Ops))
+	dev := 0.0
 	for i, op := range c.Ops {
-		m, err := cache.lookup(i, op)
+		m, d, err := cache.lookup(i, op)
 		if err != nil {
-			return nil, err
+			return nil, 0, err
 		}
+		dev += d
 		if m != nil {
 			ops = append(ops, cliffordOp{m: m, qubits: op.Qubits})
 		}
 	}
-	return ops, nil
+	return ops, dev, nil
 }
 
 // conjugate replaces every row R by G R G† for the gate G with map m on the given qubits. Each

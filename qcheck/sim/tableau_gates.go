@@ -206,60 +206,119 @@ var fixedMaps = sync.OnceValue(func() map[string]*pauliMap {
 	return out
 })
 
-// angleKey identifies a gate with angles for the per-circuit cache of maps.
+// angleKey identifies a gate with angles for the per-circuit cache of maps: its name and each
+// angle's nearest multiple of π/2, as a count of quarter turns mod 8 (every library gate has
+// period 4π in each angle).
 type angleKey struct {
-	name   string
-	params [3]float64
+	name  string
+	turns [3]int
 }
 
-// mapCache finds the Pauli map of each op, analysing gates with angles once per distinct angle.
+// mapCache finds the Pauli map of each op, analysing gates with angles once per distinct rounded
+// angle.
 type mapCache map[angleKey]*pauliMap
 
 // lookup returns the op's map, nil for an op the tableau skips (barrier, id, or any gate that
-// acts as the identity), or an error naming the op.
-func (mc mapCache) lookup(i int, op circuit.Op) (*pauliMap, error) {
+// acts as the identity), or an error naming the op. It also returns the op's deviation (see
+// cliffordAngles): 0 for gates without angles, NaN for custom gates, which have none. The map of
+// a gate with angles is analysed from its matrix at the rounded angles k·π/2 with k in −3…4, far
+// from where floating point loses digits, and is the map of the exact Clifford gate there.
+func (mc mapCache) lookup(i int, op circuit.Op) (*pauliMap, float64, error) {
 	g := op.Gate
 	refuse := func(why string) error { return &circuit.OpError{Index: i, Gate: g.Name, Err: why} }
 	if g.Name == "barrier" {
-		return nil, nil
+		return nil, 0, nil
 	}
 	if !op.Unitary() {
-		return nil, refuse("not a unitary operation (a measure, a reset or a classically controlled gate); a tableau describes unitary Clifford circuits only")
+		return nil, 0, refuse("not a unitary operation (a measure, a reset or a classically controlled gate); a tableau describes unitary Clifford circuits only")
 	}
 	if pm, ok := fixedMaps()[g.Name]; ok && !g.IsCustom() {
 		if pm.identity {
-			return nil, nil
+			return nil, 0, nil
 		}
-		return pm, nil
+		return pm, 0, nil
 	}
 	spec, std := circuit.Lookup(g.Name)
 	if std && !g.IsCustom() && spec.Params == 0 {
-		return nil, refuse("not a Clifford gate; the tableau engine needs a Clifford circuit")
+		return nil, 0, refuse("not a Clifford gate; the tableau engine needs a Clifford circuit")
 	}
 	if g.IsCustom() {
 		// Custom gates may share names, so each occurrence is analysed on its own.
 		pm, why := analysePauliMap(g.Elements(), g.Qubits())
 		if pm == nil {
-			return nil, refuse(why)
+			return nil, 0, refuse(why)
 		}
 		if pm.identity {
-			return nil, nil
+			return nil, 0, nil
 		}
-		return pm, nil
+		return pm, math.NaN(), nil
 	}
-	key := angleKey{name: g.Name}
-	copy(key.params[:], g.Params)
+	turns, dev, why := cliffordAngles(g)
+	if why != "" {
+		return nil, 0, refuse(why)
+	}
+	key := angleKey{name: g.Name, turns: turns}
 	pm, seen := mc[key]
 	if !seen {
+		rounded := circuit.Gate{Name: g.Name, Params: make([]float64, len(g.Params))} // the exact Clifford gate
+		for k := range rounded.Params {
+			t := key.turns[k]
+			if t > 4 {
+				t -= 8
+			}
+			rounded.Params[k] = float64(t) * (math.Pi / 2)
+		}
 		var why string
-		pm, why = analysePauliMap(g.Elements(), g.Qubits())
+		pm, why = analysePauliMap(rounded.Elements(), g.Qubits())
 		if pm == nil {
-			return nil, refuse(why)
+			return nil, 0, refuse(why)
 		}
 		mc[key] = pm
 	}
 	if pm.identity {
-		return nil, nil
+		return nil, dev, nil
 	}
-	return pm, nil
+	return pm, dev, nil
+}
+
+// cliffordAngles rounds the angles of a library gate to multiples of π/2, as counts of quarter
+// turns mod 8, and returns the gate's deviation: a bound, in operator norm up to global phase, on
+// how far the gate is from the same gate at the rounded angles. The deviation is Σ|δ| over the
+// exact offsets δ of the angles from their multiples (circuit.QuarterTurns), because every
+// library gate's derivative in each of its angles has operator norm at most 1 (½ for the
+// rotations exp(−iθP/2) and their controlled forms, 1 for p, cp and u), so moving an angle by δ
+// moves the gate by at most |δ|. It explains the refusal when an offset exceeds
+// CliffordTolerance.
+//
+// One gate is Clifford away from such angles: u(θ, φ, λ) with θ a multiple of π, where the
+// matrix above shows u = ±diag(1, e^{i(φ+λ)}) for θ ≡ 0 (mod 2π) and
+// u = ±e^{iλ}·[[0, −1], [e^{i(φ−λ)}, 0]] for θ ≡ π, which depend, up to phase, only on φ+λ or φ−λ.
+// Those are rounded instead (exactly, as sums), and the gate becomes u(θ, φ±λ, 0).
+func cliffordAngles(g circuit.Gate) (turns [3]int, dev float64, why string) {
+	spec, _ := circuit.Lookup(g.Name)
+	var offsets [3]float64
+	worst := -1
+	for k, p := range g.Params {
+		turns[k], offsets[k] = circuit.QuarterTurns(p)
+		dev += math.Abs(offsets[k])
+		if !(math.Abs(offsets[k]) <= CliffordTolerance) && worst < 0 {
+			worst = k
+		}
+	}
+	if worst > 0 && g.Name == "u" && turns[0]%2 == 0 && math.Abs(offsets[0]) <= CliffordTolerance {
+		lambda := g.Params[2]
+		if turns[0]%4 == 2 {
+			lambda = -lambda
+		}
+		t, off := circuit.QuarterTurns(g.Params[1], lambda)
+		if math.Abs(off) <= CliffordTolerance {
+			return [3]int{turns[0], t, 0}, math.Abs(offsets[0]) + math.Abs(off), ""
+		}
+	}
+	if worst >= 0 {
+		p := g.Params[worst]
+		return turns, 0, fmt.Sprintf("angle %d (%s) = %s is %.3g from the nearest multiple of π/2; only Clifford gates (rotations at multiples of π/2) have a tableau",
+			worst+1, spec.AngleName(worst), circuit.FormatAngle(p), math.Abs(offsets[worst]))
+	}
+	return turns, dev, ""
 }

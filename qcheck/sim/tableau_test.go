@@ -272,6 +272,10 @@ func TestTableauAngles(t *testing.T) {
 		circuit.New(1).U(math.Pi/2, math.Pi, -math.Pi/2, 0),
 		// u(0, φ, λ) = p(φ+λ): Clifford although φ and λ are not multiples of π/2.
 		circuit.New(1).U(0, math.Pi/8, 3*math.Pi/8, 0),
+		// u(π, φ, λ) = e^{iλ}·[[0, −1], [e^{i(φ−λ)}, 0]]: Clifford when φ−λ is a multiple of π/2.
+		circuit.New(1).U(math.Pi, 0.3, 0.3, 0),
+		circuit.New(1).U(-math.Pi, 0.3+math.Pi/2, 0.3, 0),
+		circuit.New(1).P(0x1.92843d3193e23p+13, 0), // 2π·2050 in float64, 1e-12 off 4100π
 		circuit.New(2).RZZ(math.Pi/2, 0, 1),
 		circuit.New(2).CP(math.Pi, 0, 1),
 		circuit.New(2).CRZ(3*math.Pi, 0, 1),
@@ -288,6 +292,9 @@ func TestTableauAngles(t *testing.T) {
 		circuit.New(2).CP(math.Pi/2, 0, 1), // controlled-S is not Clifford
 		circuit.New(2).CRZ(math.Pi/2, 0, 1),
 		circuit.New(2).RXX(0.3, 0, 1),
+		// 2^20·π/2 rounded to float64 is 6.4e-11 off it, too far for the tableau (issue 17; in
+		// float64, x − round(x/(π/2))·π/2 is 0 here).
+		circuit.New(1).RX(0x1.921fb54442d18p+20, 0),
 	}
 	for _, c := range refuse {
 		if IsClifford(c) {
@@ -476,4 +483,31 @@ func ExampleNewTableau() {
 	// Output:
 	// +Z0 | +X0 X1 | +X1 | +Z0 Z1
 	// circuit: op 1 (t): not a Clifford gate; the tableau engine needs a Clifford circuit
+}
+
+// Issue 17, reproducer 1: CliffordDeviation bounds the distance to the exact Clifford circuit for
+// angles whose offsets float64 arithmetic cannot see. 4,096 × rz(2π·2050), with 2π·2050 evaluated
+// in float64, is rz(4096·δ) up to phase with δ = −9.99485e-13 (mpmath at 2,000 bits,
+// testdata/circuit/angles.py), at distance 2 sin(4096|δ|/4) = 2.04695e-9 from the identity; the
+// bound, 4096|δ|, must not be smaller, and is twice it.
+func TestCliffordDeviationOfLargeAngles(t *testing.T) {
+	c := circuit.New(13)
+	for range 4096 {
+		c.RZ(0x1.92843d3193e23p+13, 0)
+	}
+	b, err := CliffordDeviation(c)
+	if err != nil {
+		t.Fatal(err)
+	}
+	const distance, delta = 2.046945490293729e-09, 9.99485102682485e-13
+	if b < distance || math.Abs(b-4096*delta) > 1e-20 {
+		t.Errorf("CliffordDeviation = %.6g, want 4096·|δ| = %.6g ≥ the distance %.6g", b, 4096*delta, distance)
+	}
+	if r, err := CompareClifford(circuit.New(13), c); err != nil || !r.Equivalent {
+		t.Errorf("the rounded circuit is the identity: %+v, %v", r, err)
+	}
+	custom, _ := circuit.Custom("sq", mat.NewCDense(2, 2, []complex128{1, 0, 0, 1i}))
+	if _, err := CliffordDeviation(circuit.New(1).Append(custom, 0)); err == nil {
+		t.Error("CliffordDeviation bounded a custom gate")
+	}
 }
