@@ -1,6 +1,10 @@
 package zx
 
-import "math"
+import (
+	"math"
+
+	"qcheck.dev/qcheck/circuit"
+)
 
 // quarter is π/4 in float64, the unit of the exact part of a phase.
 const quarter = math.Pi / 4
@@ -45,13 +49,10 @@ func (p phase) class(tol float64) (k int, ok bool) {
 	return ((int(p.k)+m)%8 + 8) % 8, true
 }
 
-// angleToPhase converts an angle in radians, adding to g.slack a bound on the difference between
-// the angle and the real number the phase stands for.
+// angleToPhase converts an angle in radians exactly (circuit.QuarterTurns reduces it against a
+// many-digit π), adding to g.slack the half ulp by which the residual may be off.
 func angleToPhase(theta float64, g *graph) phase {
-	m := math.Round(theta / quarter)
-	r := theta - m*quarter
-	// m·quarter is rounded once, quarter differs from π/4 by at most eps·π/4 relative, and the
-	// subtraction is rounded once.
-	g.slack += 4 * eps * (math.Abs(theta) + math.Abs(m)*quarter)
-	return phase{k: int8((int(math.Mod(m, 8)) + 8) % 8), r: r}
+	k, off := circuit.QuarterTurns(theta)
+	g.slack += eps * math.Abs(off)
+	return phase{k: int8(2 * k % 8), r: off}
 }
