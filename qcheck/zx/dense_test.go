@@ -17,7 +17,11 @@ import (
 func TestAgainstDense(t *testing.T) {
 	rng := rand.New(rand.NewPCG(5, 6))
 	undecided, total := 0, 0
-	for trial := range 60 {
+	trials := 60
+	if testing.Short() {
+		trials = 24
+	}
+	for trial := range trials {
 		n := 2 + trial%maxDenseQubits()
 		var c *circuit.Circuit
 		switch trial % 3 {

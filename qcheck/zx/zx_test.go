@@ -93,7 +93,11 @@ func TestRewritesKeepMeaning(t *testing.T) {
 // The QFT generator against the textbook matrix F_{yx} = e^{2πixy/N}/√N (Nielsen & Chuang §5.1,
 // eq. 5.1), up to 10 qubits.
 func TestQFTMatrix(t *testing.T) {
-	for n := 1; n <= 10; n++ {
+	top := 10
+	if testing.Short() {
+		top = 8
+	}
+	for n := 1; n <= top; n++ {
 		N := 1 << n
 		f := mat.NewCDense(N, N, nil)
 		for y := range N {
