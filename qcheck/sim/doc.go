@@ -12,6 +12,9 @@
 // Compile prepares a circuit once for many statevectors, and Apply(c.Inverse(), state) applies
 // the inverse.
 //
+// DifferenceWindow cancels the ops two circuits share at their ends, commuting ops past ops on
+// other qubits; the distance of the circuits is exactly that of what is left (see Window).
+//
 // # How the work is done
 //
 // Both engines share one set of kernels (kernel.go). Gates are first fused: consecutive gates on
