@@ -41,6 +41,8 @@ type graph struct {
 	// origin is the op of the first circuit being laid, −1 while laying the second; new spiders
 	// record it in from.
 	origin int
+	// fuseQ lists the plain edges made, which may join two spiders that should fuse.
+	fuseQ [][2]int
 }
 
 func (g *graph) add(k kind, p phase) int {
@@ -73,12 +75,16 @@ func (g *graph) connect(u, w int, t edge) {
 	switch {
 	case !ok:
 		g.v[u].nbr[w], g.v[w].nbr[u] = t, t
+		if t == plain {
+			g.fuseQ = append(g.fuseQ, [2]int{u, w})
+		}
 	case old == plain && t == plain:
 	case old == hadamard && t == hadamard:
 		delete(g.v[u].nbr, w)
 		delete(g.v[w].nbr, u)
 	default:
 		g.v[u].nbr[w], g.v[w].nbr[u] = plain, plain
+		g.fuseQ = append(g.fuseQ, [2]int{u, w})
 		g.v[u].ph = g.v[u].ph.add(exact(4), g)
 	}
 }

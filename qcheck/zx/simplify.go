@@ -44,19 +44,15 @@ func (g *graph) alive() []int {
 // basic fuses spiders joined by plain edges and removes phase-free spiders of degree two.
 func (g *graph) basic() bool {
 	changed := false
-	for _, v := range g.alive() {
-		if !g.v[v].alive || !g.isSpider(v) {
+	for len(g.fuseQ) > 0 {
+		e := g.fuseQ[len(g.fuseQ)-1]
+		g.fuseQ = g.fuseQ[:len(g.fuseQ)-1]
+		u, w := e[0], e[1]
+		if !g.v[u].alive || !g.v[w].alive || !g.isSpider(u) || !g.isSpider(w) {
 			continue
 		}
-		// Fuse with the lowest-numbered spider on a plain edge, so that runs repeat exactly.
-		w := -1
-		for x, t := range g.v[v].nbr {
-			if t == plain && g.isSpider(x) && (w < 0 || x < w) {
-				w = x
-			}
-		}
-		if w >= 0 {
-			g.fuse(v, w)
+		if t, ok := g.v[u].nbr[w]; ok && t == plain {
+			g.fuse(min(u, w), max(u, w))
 			changed = true
 		}
 	}
@@ -77,11 +73,7 @@ func (g *graph) basic() bool {
 		}
 		g.remove(v)
 		g.connect(ns[0], ns[1], t)
-		if t == plain && g.isSpider(ns[0]) && g.isSpider(ns[1]) {
-			if _, ok := g.v[ns[0]].nbr[ns[1]]; ok {
-				g.fuse(ns[0], ns[1])
-			}
-		}
+
 		g.steps++
 		changed = true
 	}
@@ -93,7 +85,7 @@ func (g *graph) basic() bool {
 func (g *graph) lcompAll() bool {
 	changed := false
 	for _, v := range g.alive() {
-		if !g.v[v].alive || !g.interior(v) || !g.properClifford(v) {
+		if !g.v[v].alive || !g.isSpider(v) || !g.clifford(v) || !g.interior(v) || !g.properClifford(v) {
 			continue
 		}
 		ph := g.v[v].ph.neg()
@@ -115,11 +107,11 @@ func (g *graph) lcompAll() bool {
 func (g *graph) pivotAll() bool {
 	changed := false
 	for _, u := range g.alive() {
-		if !g.v[u].alive || !g.interior(u) || !g.pauli(u) {
+		if !g.v[u].alive || !g.isSpider(u) || !g.clifford(u) || !g.interior(u) || !g.pauli(u) {
 			continue
 		}
 		for _, v := range g.sorted(u) {
-			if g.interior(v) && g.pauli(v) {
+			if g.clifford(v) && g.interior(v) && g.pauli(v) {
 				g.pivot(u, v)
 				changed = true
 				break
@@ -259,7 +251,7 @@ func supportKey(s []int) string {
 func (g *graph) pivotGadgets() bool {
 	changed := false
 	for _, u := range g.alive() {
-		if !g.v[u].alive || !g.interior(u) || g.hasLeaf(u) || g.leaf(u) || !g.pauli(u) {
+		if !g.v[u].alive || !g.isSpider(u) || !g.clifford(u) || !g.interior(u) || g.hasLeaf(u) || g.leaf(u) || !g.pauli(u) {
 			continue
 		}
 		for _, v := range g.sorted(u) {
@@ -292,7 +284,7 @@ func (g *graph) gadgetize(v int) {
 func (g *graph) pivotBoundaries() bool {
 	changed := false
 	for _, u := range g.alive() {
-		if !g.v[u].alive || !g.interior(u) || g.hasLeaf(u) || g.leaf(u) || !g.pauli(u) {
+		if !g.v[u].alive || !g.isSpider(u) || !g.clifford(u) || !g.interior(u) || g.hasLeaf(u) || g.leaf(u) || !g.pauli(u) {
 			continue
 		}
 		for _, v := range g.sorted(u) {
