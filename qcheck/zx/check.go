@@ -53,8 +53,9 @@ const DefaultTol = 1e-12
 // with the global phase taken out.
 type Result struct {
 	Verdict Verdict
-	// Bound is the proved uncertainty: for Equivalent, D ≤ Bound; for a Distance, |D − Distance|
-	// ≤ Bound plus the rounding of a 2^k-dimensional matrix computation (about 1e-13).
+	// Bound is the proved uncertainty: for Equivalent, D ≤ Bound; for Different, |D − Distance|
+	// ≤ Bound plus the rounding of 2^k-dimensional matrix computations (roundingAllowance, 1e-12,
+	// for k ≤ 10), so that D ≥ Lower().
 	Bound float64
 	// Distance is D computed from the remainder's matrix, when Known.
 	Distance float64
@@ -63,7 +64,7 @@ type Result struct {
 	Support []int
 	// Spiders is the number of spiders left in the simplified diagram (scalar parts included).
 	Spiders int
-	// Cut is the number of ops of U moved to the end of the product when V†U itself did not reduce
+	// Cut is the number of ops of U (of U's window, from Compare) moved to the end of the product when V†U itself did not reduce
 	// (see Check); Support is then in the frame of U[:Cut]·V†·U[Cut:], which has the spectrum of
 	// V†U.
 	Cut int
@@ -176,12 +177,28 @@ func check(u, v *circuit.Circuit, cut int, opts Options) (Result, int, error) {
 		}
 	}
 	r.Distance, r.Known = 2*math.Sin(arc(phases)/4), true
+	r.decide()
+	return r, hi, nil
+}
+
+// decide sets the verdict from a known distance: different when it exceeds its uncertainty;
+// otherwise equivalent, with Bound widened to cover the distance found.
+func (r *Result) decide() {
 	if r.Distance > r.Bound+roundingAllowance {
 		r.Verdict = Different
-	} else {
-		r.Verdict = Equivalent
+		return
 	}
-	return r, hi, nil
+	r.Verdict = Equivalent
+	r.Bound += r.Distance + roundingAllowance
+}
+
+// Lower returns the certified lower bound on D: Distance less its uncertainty, or 0 when the
+// distance is not known.
+func (r Result) Lower() float64 {
+	if !r.Known {
+		return 0
+	}
+	return max(0, r.Distance-r.Bound-roundingAllowance)
 }
 
 // maxPhases caps the distinct eigenphases kept while combining the parts of a remainder.

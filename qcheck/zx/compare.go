@@ -39,12 +39,8 @@ func Compare(u, v *circuit.Circuit, opts Options) (Result, error) {
 			return Result{}, err
 		}
 		d := metric.PhaseDistance(ua, ub)
-		r := Result{Distance: d, Known: true, Bound: roundingAllowance, Support: w.Support}
-		if d > roundingAllowance {
-			r.Verdict = Different
-		} else {
-			r.Verdict = Equivalent
-		}
+		r := Result{Distance: d, Known: true, Support: w.Support}
+		r.decide()
 		return r, nil
 	}
 	r, err := Check(a, b, opts)

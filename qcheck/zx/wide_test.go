@@ -1,6 +1,7 @@
 package zx
 
 import (
+	"math"
 	"math/rand/v2"
 	"testing"
 
@@ -128,5 +129,36 @@ func TestLocalBugsAtWidth(t *testing.T) {
 		if diff := r.Distance - want; diff > r.Bound+1e-9 || -diff > r.Bound+1e-9 {
 			t.Errorf("trial %d: distance %.15g, the changed gate alone %.15g", trial, r.Distance, want)
 		}
+	}
+}
+
+// A near miss, one angle off by 1e-7, in wide rewritten circuits: never equivalent; when measured,
+// the distance is the changed gate's alone.
+func TestNearMissAtWidth(t *testing.T) {
+	rng := rand.New(rand.NewPCG(18, 19))
+	for _, c := range []*circuit.Circuit{qft(32), volume(24, 6, rng), adder(15)} {
+		d := bug(c, 0, 1e-7, rng)
+		if d == nil {
+			// The adder has no angles: put one in, as a compiler's peephole slip would.
+			d = c.Clone()
+			d.Append(gate("rz", 1e-7), 5)
+		}
+		want := 0.0
+		if i := firstChange(c, d); i < len(c.Ops) {
+			want = localDistance(t, c, d, i)
+		} else {
+			want = 2 * math.Sin(1e-7/4)
+		}
+		r, err := Check(c, rewritten(d, 6), Options{})
+		if err != nil {
+			t.Fatal(err)
+		}
+		if r.Verdict == Equivalent {
+			t.Errorf("%d qubits: a 1e-7 change proved equivalent within %g", c.Qubits(), r.Bound)
+		}
+		if r.Known && math.Abs(r.Distance-want) > r.Bound+1e-12 {
+			t.Errorf("%d qubits: distance %g, the changed gate alone %g", c.Qubits(), r.Distance, want)
+		}
+		t.Logf("%d qubits: %v, distance %g (want %g), bound %g %s", c.Qubits(), r.Verdict, r.Distance, want, r.Bound, r.Reason)
 	}
 }
