@@ -15,10 +15,13 @@
 // and cancel by local rules, whatever the gate order and gate set, since the diagram does not
 // depend on how the gates were aligned (a SWAP is a crossing of wires, a reorder of commuting
 // gates is the same diagram). Decision diagrams would need numerical tolerances on every node and
-// depend on the alternation schedule; path sums need the same Hadamard eliminations the ZX
-// pivots perform. Measured on our own corpora (BenchmarkQFT, BenchmarkAdder, BenchmarkVolume;
-// figures in the README), the rewriting proves translated, reordered and routed adders at 64 and
-// 128 qubits in a fraction of a second to two seconds.
+// depend on the alternation schedule, and a DD's size for random circuits grows with the part of
+// V†U not yet cancelled; path sums need the same Hadamard eliminations the ZX pivots perform, with
+// phases kept as polynomials. Only the ZX engine was built and measured; on our own corpora
+// (BenchmarkQFT, BenchmarkAdder, BenchmarkVolume, figures in the README) it proves translated,
+// reordered and routed QFTs and adders at 64 and 128 qubits and random two-qubit-block circuits at
+// 32 and 40 qubits in 0.1 to 3 CPU seconds, and refutes one-gate changes in the latter with the
+// exact distance in under a CPU second.
 //
 // # What is proved
 //
