@@ -61,11 +61,26 @@
 //
 // # Distances and undecided pairs
 //
-// When the simplified diagram leaves plain wires on all but k ≤ MaxSupport qubits, V†U = c·(I ⊗ W)
-// with W on those k qubits, and W's matrix is computed from the remainder by summing out its
-// spiders one at a time (a ZX-diagram is a sum over the values of its spiders). Scaling it to
-// unit column norm removes c; the distance min_φ ‖W − e^{iφ}I‖ is then the distance of U and V to
-// within Bound. A distance above Bound is a certified difference. Otherwise the answer is
-// Undecided with the size of what is left; the package never says "different" without that
-// computed distance.
+// When the simplified diagram leaves plain wires on all but some wires, and what remains on those
+// falls into connected parts each joining at most MaxSupport wires, then
+//
+//	V†U = c·(I ⊗ W_1 ⊗ … ⊗ W_m)
+//
+// and each W_j's matrix is computed from its part by summing out the spiders one at a time (a
+// ZX-diagram is a sum over the values of its spiders: a phase α contributes e^{iαx}, a Hadamard
+// edge (−1)^{xy}). Scaling to unit column norm removes the unknown scalar. The eigenphases of
+// V†U are, up to the global phase, the sums of one eigenphase of each W_j (metric.Eigenphases,
+// merged within 1e-11); with θ the shortest arc of the circle holding them all,
+//
+//	min_φ ‖U − e^{iφ}V‖ = 2·sin(θ/4),
+//
+// the same closed form as metric.PhaseDistance. The value is the distance of U and V to within
+// Bound plus rounding; above that it is a certified difference (Result.Lower).
+//
+// A change deep inside a wide circuit is conjugated by everything before it, so V†U itself does
+// not shrink. Check then cuts U after the latest of its ops still present in the remainder, at k,
+// and simplifies U[:k]·V†·U[k:] (the ops of U from k, the inverse of V, then the first k ops of U),
+// which equals U1·(V†U)·U1† for U1 the first k ops: the same spectrum, hence the same distance,
+// and both halves of each circuit now meet their partner. Otherwise the answer is Undecided with
+// the size of what is left; the package never says "different" without the computed distance.
 package zx
