@@ -25,7 +25,7 @@ func (f factor) at(assign func(int) int) complex128 {
 const maxScope = 22
 
 // maxComponent caps the vertices of the part of the diagram matrix contracts.
-const maxComponent = 4000
+const maxComponent = 2000
 
 // matrix returns, up to a non-zero scalar, the matrix of the part of the diagram that joins the
 // inputs and outputs of the given wires, rows indexed by the outputs and columns by the inputs
@@ -104,28 +104,28 @@ func (g *graph) matrix(wires []int) ([]complex128, bool) {
 	// Eliminate the closed variables.
 	for {
 		best, bestSize := -1, math.MaxInt
-		vars := map[int]bool{}
+		scopes := map[int]map[int]bool{}
 		for _, f := range fs {
 			for _, x := range f.vars {
-				if !open[x] {
-					vars[x] = true
+				if open[x] {
+					continue
+				}
+				sc := scopes[x]
+				if sc == nil {
+					sc = map[int]bool{}
+					scopes[x] = sc
+				}
+				for _, y := range f.vars {
+					sc[y] = true
 				}
 			}
 		}
-		if len(vars) == 0 {
+		if len(scopes) == 0 {
 			break
 		}
-		for x := range vars {
-			scope := map[int]bool{}
-			for _, f := range fs {
-				if slices.Contains(f.vars, x) {
-					for _, y := range f.vars {
-						scope[y] = true
-					}
-				}
-			}
-			if len(scope) < bestSize || len(scope) == bestSize && x < best {
-				best, bestSize = x, len(scope)
+		for x, sc := range scopes {
+			if len(sc) < bestSize || len(sc) == bestSize && x < best {
+				best, bestSize = x, len(sc)
 			}
 		}
 		if bestSize > maxScope {
