@@ -41,12 +41,14 @@ func DifferenceWindow(a, b *circuit.Circuit) (Window, error) {
 	if a == nil || b == nil {
 		return Window{}, fmt.Errorf("sim: nil circuit")
 	}
-	for _, c := range []*circuit.Circuit{a, b} {
+	for k, c := range []*circuit.Circuit{a, b} {
 		if err := c.Validate(); err != nil {
 			return Window{}, err
 		}
-		if !c.Unitary() {
-			return Window{}, fmt.Errorf("sim: difference windows need unitary circuits")
+		for i, op := range c.Ops {
+			if !op.Unitary() && op.Gate.Name != "barrier" {
+				return Window{}, fmt.Errorf("sim: op %d (%s) of circuit %d is not unitary; difference windows need unitary circuits", i, op, k+1)
+			}
 		}
 	}
 	if a.Qubits() != b.Qubits() {
