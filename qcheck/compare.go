@@ -47,6 +47,7 @@ func compare(cfg *config, want, got *circuit.Circuit, full bool) (Result, error)
 		Options:    cfg.describe(),
 		Qubits:     f.m,
 		Measured:   f.measured,
+		Bits:       f.bits,
 	}
 	switch eng {
 	case Dense:

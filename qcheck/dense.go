@@ -83,8 +83,17 @@ func compareDense(cfg *config, f *frame, r *Result, full bool) error {
 	r.WitnessGap = p.deviation(r.Witness)
 	if f.measured != nil {
 		r.Measure = Distribution
-		r.Distance, r.Measurement = p.distributions(r.Witness)
-		r.Equivalent = r.Distance <= cfg.tol
+		lower, upper, m := p.distributions(r.Witness)
+		r.Measurement = m
+		switch {
+		case upper <= cfg.tol:
+			r.Equivalent, r.Distance = true, upper
+		case lower > cfg.tol:
+			r.Distance = lower
+		default:
+			return fmt.Errorf("qcheck: undecided: the largest total-variation distance of the measured distributions over all inputs is at least %.4g (found on an input) and at most %.4g (certified bound); the tolerance %g lies between", lower, upper, cfg.tol)
+		}
+		r.Certifies += fmt.Sprintf("; the largest over all inputs lies in [%.4g, %.4g]", lower, upper)
 		if !full && r.Equivalent {
 			return nil
 		}

@@ -91,7 +91,7 @@ func cliffordRounding(want, got *circuit.Circuit) (float64, error) {
 func certifies(e Engine, f *frame) string {
 	switch {
 	case e == Dense && f.measured != nil:
-		return "exact unitaries; distributions from every basis input, the witness and 4 fixed random inputs, so a lower bound on the largest over all inputs"
+		return "certified from exact unitaries: the total-variation distance is an upper bound on the largest over all inputs when equivalent (from the part of U·V† that moves probability between outcomes) and a distance found on an input when not"
 	case e == Dense:
 		return "exact: both full unitaries, to floating-point rounding"
 	case e == Tableau:

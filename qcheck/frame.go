@@ -2,6 +2,7 @@ package qcheck
 
 import (
 	"fmt"
+	"slices"
 	"sort"
 
 	"qcheck.dev/qcheck/circuit"
@@ -21,9 +22,15 @@ type frame struct {
 	clean   bool
 	// perm is the output permutation (logical i on physical perm[i]) or nil.
 	perm []int
-	// measured lists the measured qubits of got's register, or nil when not comparing
-	// distributions.
-	measured []int
+	// measured and measuredWant say what each bit of an outcome reads when comparing
+	// distributions (nil otherwise): outcome bit i is the result of measuring qubit measured[i]
+	// of got's register after got (with its output permutation undone, so logical qubits), and
+	// qubit measuredWant[i] of got's register after want (moved onto got's register); −1 means
+	// the circuit never writes that bit, which then reads 0. bits lists the classical bits the
+	// outcome bits are, when the circuits measure into classical bits; nil when the outcome
+	// bits are qubits named by Measured (the two lists are then equal).
+	measured, measuredWant []int
+	bits                   []int
 	// want and got are the circuits to give meaning to: want moved onto got's register, and both
 	// with their final measurements removed when comparing distributions.
 	want, got *circuit.Circuit
@@ -124,15 +131,87 @@ func checkPermutation(perm []int, m int) error {
 	return nil
 }
 
-// setMeasured resolves the measured qubits (given in want's register) onto got's register and
-// removes the final measurements of both circuits.
+// setMeasured decides what an outcome is, and removes the final measurements of both circuits.
+//
+// When the circuits measure (final measure ops), the outcome is the classical bits they write:
+// a program's result is its classical bits, so each circuit is read through its own
+// measurements, and a routed circuit that measures a different qubit into the same bit is
+// compared through that bit. The bits are those want's measurements of the given qubits write
+// (all of want's written bits when none are given); a bit written by the last final measure
+// writing it; a bit one circuit never writes reads 0. When neither circuit measures, the
+// outcome is the given qubits of want (all of them when none are given), read on the same
+// logical qubits of got.
 func (f *frame) setMeasured(qubits []int) error {
+	wantW, gotW := finalWrites(f.want), finalWrites(f.got)
+	if len(wantW) == 0 && len(gotW) == 0 {
+		return f.setMeasuredQubits(qubits)
+	}
+	if len(wantW) == 0 || len(gotW) == 0 {
+		which, other := "want", "got"
+		if len(wantW) == 0 {
+			which, other = "got", "want"
+		}
+		return fmt.Errorf("qcheck: Measured: %s measures into classical bits and %s measures nothing; the classical bits are the result, so both circuits must write them", which, other)
+	}
+	var bits []int
 	if len(qubits) == 0 {
-		qubits = measuredQubits(f.want)
-		if len(qubits) == 0 {
-			for q := 0; q < f.n; q++ {
-				qubits = append(qubits, q)
+		for b := range wantW {
+			bits = append(bits, b)
+		}
+		for b := range gotW {
+			if _, ok := wantW[b]; !ok {
+				bits = append(bits, b)
 			}
+		}
+	} else {
+		for _, q := range qubits {
+			found := false
+			for b, wq := range wantW {
+				if wq == q {
+					bits, found = append(bits, b), true
+				}
+			}
+			if !found {
+				return fmt.Errorf("qcheck: Measured(%v): want does not measure qubit %d at the end; with measure ops the classical bits they write are the result", qubits, q)
+			}
+		}
+	}
+	sort.Ints(bits)
+	bits = slices.Compact(bits)
+	// Positions of got's physical qubits among the logical qubits of the undone permutation.
+	at := make([]int, f.m)
+	for q := range at {
+		at[q] = q
+	}
+	for i, p := range f.perm {
+		at[p] = i
+	}
+	f.bits = bits
+	f.measured = make([]int, len(bits))
+	f.measuredWant = make([]int, len(bits))
+	for i, b := range bits {
+		f.measured[i], f.measuredWant[i] = -1, -1
+		if q, ok := gotW[b]; ok {
+			f.measured[i] = at[q]
+		}
+		if q, ok := wantW[b]; ok {
+			if f.data != nil {
+				q = f.data[q]
+			}
+			f.measuredWant[i] = q
+		}
+	}
+	f.want = withoutFinalMeasurements(f.want)
+	f.got = withoutFinalMeasurements(f.got)
+	return nil
+}
+
+// setMeasuredQubits resolves measured qubits (given in want's register) onto got's register,
+// for circuits that do not measure.
+func (f *frame) setMeasuredQubits(qubits []int) error {
+	if len(qubits) == 0 {
+		for q := 0; q < f.n; q++ {
+			qubits = append(qubits, q)
 		}
 	}
 	seen := make(map[int]bool, len(qubits))
@@ -149,29 +228,44 @@ func (f *frame) setMeasured(qubits []int) error {
 		}
 		f.measured = append(f.measured, q)
 	}
-	f.want = withoutFinalMeasurements(f.want)
-	f.got = withoutFinalMeasurements(f.got)
+	f.measuredWant = f.measured
 	return nil
 }
 
-// measuredQubits lists, in increasing order, the qubits that c measures.
-func measuredQubits(c *circuit.Circuit) []int {
-	var qs []int
-	seen := map[int]bool{}
-	for _, op := range c.Ops {
-		if op.Gate.Name == "measure" && !seen[op.Qubits[0]] {
-			seen[op.Qubits[0]] = true
-			qs = append(qs, op.Qubits[0])
+// finalWrites maps each classical bit that a final measurement of c writes (one after which
+// nothing acts on its qubit) to the qubit whose result it holds: the last such measurement
+// writing the bit, since a later write replaces an earlier one.
+func finalWrites(c *circuit.Circuit) map[int]int {
+	final := finalMeasurements(c)
+	w := map[int]int{}
+	for i, op := range c.Ops {
+		if final != nil && final[i] {
+			w[op.Bits[0]] = op.Qubits[0]
 		}
 	}
-	sort.Ints(qs)
-	return qs
+	return w
 }
 
-// withoutFinalMeasurements returns c without the measure ops after which nothing acts on their
-// qubit (and without barriers, which carry no meaning); a measurement in the middle of the
-// circuit is kept so that the engine refuses it with its position.
+// withoutFinalMeasurements returns c without its final measure ops (see finalMeasurements) and
+// without barriers, which carry no meaning; a measurement in the middle of the circuit is kept
+// so that the engine refuses it with its position.
 func withoutFinalMeasurements(c *circuit.Circuit) *circuit.Circuit {
+	final := finalMeasurements(c)
+	if final == nil {
+		return c
+	}
+	d := circuit.New(c.Qubits())
+	for i, op := range c.Ops {
+		if !final[i] {
+			d.Ops = append(d.Ops, op)
+		}
+	}
+	return d
+}
+
+// finalMeasurements marks the measure ops of c after which nothing acts on their qubit (barriers
+// aside); nil when there are none.
+func finalMeasurements(c *circuit.Circuit) []bool {
 	final := make([]bool, len(c.Ops))
 	later := make([]bool, c.Qubits())
 	found := false
@@ -187,15 +281,9 @@ func withoutFinalMeasurements(c *circuit.Circuit) *circuit.Circuit {
 		}
 	}
 	if !found {
-		return c
+		return nil
 	}
-	d := circuit.New(c.Qubits())
-	for i, op := range c.Ops {
-		if !final[i] {
-			d.Ops = append(d.Ops, op)
-		}
-	}
-	return d
+	return final
 }
 
 // relabel returns c moved onto a register of m qubits, its qubit i becoming qubit to[i]. The ops

@@ -122,17 +122,24 @@ func Ancillas(qubits []int, state AncillaState) Option {
 	})
 }
 
-// Measured compares only what measuring the given qubits of want (in the computational basis, at
-// the end) would show: the output distributions, from every computational-basis input and from
-// the inputs that separate the two unitaries most. The distance is then the largest
-// total-variation distance found, compared against the tolerance; the result also gives the
-// operator-norm distance and its bound 2ε on any probability difference. Use it for passes that
-// only promise to keep measurement statistics, such as dropping diagonal gates before a final
-// measurement. The qubits are want's; with none given, they are the qubits want measures (its
-// measure ops), or all of want's qubits if it has none. Final measure ops of both circuits (those
-// after which nothing acts on their qubit) are dropped before comparing; a measurement in the
-// middle of a circuit is refused. The search over inputs makes the verdict a lower bound on the
-// largest total-variation distance over all inputs, which Result.Certifies says.
+// Measured compares only what measuring (in the computational basis, at the end) would show:
+// the output distributions, for every input state. When the circuits measure, the outcome is the
+// classical bits their final measure ops write (each circuit read through its own measurements,
+// so a routed circuit that measures a moved qubit into the right bit agrees); the qubits given,
+// if any, select the bits want's measurements of them write. When neither circuit measures, the
+// outcome is the given qubits of want (all of them when none are given) on the same logical
+// qubits of got. Final measure ops (those after which nothing acts on their qubit) are dropped
+// before comparing; a measurement in the middle of a circuit is refused, as is a pair where only
+// one circuit measures.
+//
+// The verdict is certified, not searched: the distributions agree for every input exactly when
+// U·V† moves no amplitude between outcomes, and the part that does bounds the largest
+// total-variation distance over all inputs from above (metric.DistributionGap). Equivalent means
+// that bound is within the tolerance, and Distance is the bound; different means an input was
+// found whose distributions differ by more, and Distance is that difference; when the tolerance
+// lies between the two, Compare returns an error saying the comparison is undecided. Use it for
+// passes that only promise to keep measurement statistics, such as dropping diagonal gates
+// before a final measurement.
 func Measured(qubits ...int) Option {
 	qs := append([]int(nil), qubits...)
 	return optionFunc(func(c *config) error {

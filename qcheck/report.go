@@ -51,6 +51,9 @@ func (r Result) Report() string {
 func (r Result) phaseWords() string {
 	switch {
 	case r.Measure == Distribution:
+		if r.Bits != nil {
+			return "distributions of classical bits " + bitNames(r.Bits, ", ")
+		}
 		return "distributions of measuring " + qubitList(r.Measured)
 	case r.ExactPhase:
 		return "global phase counts"
@@ -233,9 +236,12 @@ func (r Result) writeEvidence(b *strings.Builder) {
 		case !m.Basis:
 			b.WriteString("  then test whether the output is want's output state (a projective measurement):\n")
 			fmt.Fprintf(b, "  want passes with probability %s, got with %s\n", prob(m.Want), prob(m.Got))
+		case r.Bits != nil:
+			fmt.Fprintf(b, "  the classical bits read %s with probability %s after want, %s after got\n",
+				outcomeWords(m.Outcome, r.Bits, "c"), prob(m.Want), prob(m.Got))
 		case r.Measured != nil:
 			fmt.Fprintf(b, "  measuring %s gives %s with probability %s after want, %s after got\n",
-				qubitList(r.Measured), outcomeWords(m.Outcome, r.Measured), prob(m.Want), prob(m.Got))
+				qubitList(r.Measured), outcomeWords(m.Outcome, r.Measured, "q"), prob(m.Want), prob(m.Got))
 		default:
 			fmt.Fprintf(b, "  measuring every qubit gives %s with probability %s after want, %s after got\n",
 				basisKet(m.Outcome, n), prob(m.Want), prob(m.Got))
@@ -268,14 +274,24 @@ func qubitList(qs []int) string {
 	return strings.Join(s, ", ")
 }
 
-// outcomeWords writes an outcome over the measured qubits as "q2=1 q0=0", highest qubit first.
-func outcomeWords(o int, measured []int) string {
+// outcomeWords writes an outcome over the measured qubits or classical bits as "q2=1 q0=0" or
+// "c2=1 c0=0", highest first.
+func outcomeWords(o int, measured []int, prefix string) string {
 	s := make([]string, len(measured))
 	for i := range measured {
 		j := len(measured) - 1 - i
-		s[i] = fmt.Sprintf("q%d=%d", measured[j], o>>j&1)
+		s[i] = fmt.Sprintf("%s%d=%d", prefix, measured[j], o>>j&1)
 	}
 	return strings.Join(s, " ")
+}
+
+// bitNames writes classical bits as "c0, c2".
+func bitNames(bits []int, sep string) string {
+	s := make([]string, len(bits))
+	for i, b := range bits {
+		s[i] = fmt.Sprintf("c%d", b)
+	}
+	return strings.Join(s, sep)
 }
 
 // Headline is the first line of the failure's report.

@@ -49,7 +49,7 @@ func TestHeadlineOfEquivalentCircuitsNamesTheComparison(t *testing.T) {
 		{mustCompare(t, circuit.New(1).P(0.5, 0), circuit.New(1).P(0.5, 0), ExactPhase()),
 			"(global phase counts)"},
 		{mustCompare(t, circuit.New(2).H(0).Measure(0, 0), circuit.New(2).H(0).Z(0).Measure(0, 0), Measured()),
-			"(distributions of measuring q0)"},
+			"(distributions of classical bits c0)"},
 	}
 	if h := cases[0].r.Headline(); !strings.HasSuffix(h, "≤ tolerance 1e-09 (up to global phase)") {
 		t.Errorf("rz against p: %q", h)

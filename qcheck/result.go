@@ -12,7 +12,10 @@ import "qcheck.dev/qcheck/circuit"
 type Result struct {
 	// Equivalent reports whether Distance ≤ Tolerance.
 	Equivalent bool
-	// Distance is the distance of the two circuits in Measure.
+	// Distance is the distance of the two circuits in Measure. For measured distributions it
+	// is certified on the side of the verdict: an upper bound on the largest total-variation
+	// distance over all inputs when Equivalent, a distance found on an input when not (Certifies
+	// gives both bounds).
 	Distance float64
 	// Measure is the measure of Distance and Tolerance.
 	Measure Measure
@@ -57,9 +60,13 @@ type Result struct {
 	Options   string
 	// Qubits is the width of the register that states and outcomes refer to (got's).
 	Qubits int
-	// Measured lists the measured qubits of got's register with Measured, else nil; outcomes
-	// are then bit strings over these qubits only, Measured[0] as the least-significant bit.
+	// Measured lists, with Measured, the qubit of got's register (logical, after undoing an
+	// output permutation) read by each bit of an outcome, else nil; outcomes are then bit
+	// strings, bit 0 least significant. Bits lists the classical bits those outcome bits are
+	// when the circuits measure into classical bits (an entry −1 in Measured is a bit got never
+	// writes, which reads 0); nil when the outcome bits are the qubits in Measured.
 	Measured []int
+	Bits     []int
 }
 
 // Measurement is a concrete experiment that tells the two circuits apart: prepare Input, run the

@@ -28,7 +28,7 @@ func (f *compareFlags) register(fs *flag.FlagSet) {
 	fs.Float64Var(&f.tol, "tol", qcheck.DefaultTolerance, "largest distance `EPS` that still counts as equivalent")
 	fs.BoolVar(&f.exactPhase, "exact-phase", false, "count a global phase as a difference")
 	fs.StringVar(&f.perm, "perm", "", "output permutation `P0,P1,...`: logical qubit i of A ends on qubit Pi of B")
-	fs.BoolVar(&f.measured, "measured", false, "compare only the measured distributions of A's final measurements (all qubits if A measures none)")
+	fs.BoolVar(&f.measured, "measured", false, "compare only the distributions of the classical bits the final measurements write, for every input (of all qubits if neither file measures); certified, or refused as undecided")
 	fs.StringVar(&f.ancillas, "ancillas", "", "qubits `Q,...` of B borrowed as ancillas (clean: start and end in |0⟩); A may omit them")
 	fs.BoolVar(&f.dirty, "dirty", false, "the -ancillas start in any state and must be restored")
 	fs.StringVar(&f.measure, "measure", "operator", "`MEASURE` that decides: operator (norm), diamond, or fidelity (average infidelity)")
@@ -167,8 +167,8 @@ With -json, one JSON object:
   measurement        omitted when the circuits are equivalent or differ only by a global phase
                      (no measurement tells them apart); else an experiment that does:
     input_basis      basis index of the input state when it is a basis state, else null
-    basis            true: measure every qubit (or the -measured ones) in the computational
-                     basis; false: test whether the output is want's output state
+    basis            true: measure every qubit (with -measured: read the classical bits) in the
+                     computational basis; false: test whether the output is want's output state
     outcome          with basis, the outcome index whose probability differs most; else null
     want             the probability of that outcome (or of passing the test) after want
     got              the same after got`

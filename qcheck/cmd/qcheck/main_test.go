@@ -232,6 +232,12 @@ func TestEquivFlags(t *testing.T) {
 		"bad.qasm":         "qreg q[2];\nh q[0];\ncx q[0] q[1];\n",
 		"ancilla.qasm":     "qreg q[5];\nccx q[0],q[1],q[4];\nccx q[2],q[4],q[3];\nccx q[0],q[1],q[4];\nccx q[2],q[4],q[3];\n",
 		"c3x.qasm":         "qreg q[4];\nc3x q[0],q[1],q[2],q[3];\n",
+		// Issue 12: from |000⟩, want gives c ∈ {001, 111}; the routed program swaps logical 0
+		// and 1 and measures them back into their own bits (the same distribution, for every
+		// input), the wrongly remapped one gives {010, 111}.
+		"remap_want.qasm":  "qreg q[3];\ncreg c[3];\nx q[0];\nh q[1];\ncx q[1],q[2];\nmeasure q -> c;\n",
+		"remap_right.qasm": "qreg q[3];\ncreg c[3];\nswap q[0],q[1];\nx q[1];\nh q[0];\ncx q[0],q[2];\nmeasure q[1] -> c[0];\nmeasure q[0] -> c[1];\nmeasure q[2] -> c[2];\n",
+		"remap_wrong.qasm": "qreg q[3];\ncreg c[3];\nswap q[0],q[1];\nx q[1];\nh q[0];\ncx q[0],q[2];\nmeasure q -> c;\n",
 	})
 	f := func(name string) string { return filepath.Join(dir, name) }
 	cases := []struct {
@@ -249,6 +255,9 @@ func TestEquivFlags(t *testing.T) {
 		{[]string{"equiv", "-exact-phase", "-tol", "0.2", f("rz.qasm"), f("p.qasm")}, exitDiffer, ""},
 		{[]string{"equiv", "-measured", f("bell.qasm"), f("bell_z.qasm")}, exitOK, ""},
 		{[]string{"equiv", f("bell.qasm"), f("bell_z.qasm")}, exitBadUsed, "bell.qasm:7: measure has no unitary; use -measured"},
+		{[]string{"equiv", "-measured", f("remap_want.qasm"), f("remap_right.qasm")}, exitOK, ""},
+		{[]string{"equiv", "-measured", "-perm", "1,0,2", f("remap_want.qasm"), f("remap_right.qasm")}, exitOK, ""},
+		{[]string{"equiv", "-measured", "-perm", "1,0,2", f("remap_want.qasm"), f("remap_wrong.qasm")}, exitDiffer, ""},
 		// Barenco et al. 1995, Lemma 7.2: the ancilla may hold anything and is restored.
 		{[]string{"equiv", "-ancillas", "4", "-dirty", f("c3x.qasm"), f("ancilla.qasm")}, exitOK, ""},
 		{[]string{"equiv", "-dirty", f("rz.qasm"), f("p.qasm")}, exitBadUsed, "-dirty needs -ancillas"},
