@@ -3,7 +3,6 @@ package zx
 import (
 	"fmt"
 	"math"
-	"slices"
 
 	"gonum.org/v1/gonum/mat"
 	"qcheck.dev/metric"
@@ -149,8 +148,8 @@ func check(u, v *circuit.Circuit, cut int, opts Options) (Result, int, error) {
 	}
 	hi = g.latest(r.Support)
 	groups := g.components(r.Support)
-	var phases []float64
-	for i, wires := range groups {
+	var spectra [][]float64
+	for _, wires := range groups {
 		if len(wires) > opts.MaxSupport {
 			r.Reason = fmt.Sprintf("V†U reduced to %d spiders on %d wires, in a part joining %d wires, more than %d", r.Spiders, len(r.Support), len(wires), opts.MaxSupport)
 			if !done {
@@ -168,15 +167,14 @@ func check(u, v *circuit.Circuit, cut int, opts Options) (Result, int, error) {
 			r.Reason = "the remainder's matrix is not a multiple of a unitary to 1e-9; the contraction lost accuracy"
 			return r, hi, nil
 		}
-		ph := metric.Eigenphases(w)
-		if i == 0 {
-			phases = distinct(ph)
-		} else if phases = sumset(phases, ph); len(phases) > maxPhases {
-			r.Reason = fmt.Sprintf("the remainder is a product of %d parts whose spectra combine into more than %d eigenphases", len(groups), maxPhases)
-			return r, hi, nil
-		}
+		spectra = append(spectra, metric.Eigenphases(w))
 	}
-	r.Distance, r.Known = 2*math.Sin(arc(phases)/4), true
+	d, ok := metric.TensorPhaseDistance(spectra...)
+	if !ok {
+		r.Reason = fmt.Sprintf("the remainder is a product of %d parts whose spectra combine into too many eigenphases", len(groups))
+		return r, hi, nil
+	}
+	r.Distance, r.Known = d, true
 	r.decide()
 	return r, hi, nil
 }
@@ -200,13 +198,6 @@ func (r Result) Lower() float64 {
 	}
 	return max(0, r.Distance-r.Bound-roundingAllowance)
 }
-
-// maxPhases caps the distinct eigenphases kept while combining the parts of a remainder.
-const maxPhases = 1 << 14
-
-// phaseMerge is how close two eigenphases must be to count as one when combining parts: far
-// above their rounding (about 1e-13 for these sizes), far below any gap that matters.
-const phaseMerge = 1e-11
 
 // components splits the wires by the connected parts of the remainder that join them. If
 // V†U = c·(W_1 ⊗ … ⊗ W_m) on those parts, the eigenphases of V†U are, up to the global phase,
@@ -264,57 +255,6 @@ func (g *graph) components(wires []int) [][]int {
 		out[i] = append(out[i], q)
 	}
 	return out
-}
-
-// distinct returns the phases, reduced to [0, 2π), sorted, with near-equal ones merged.
-func distinct(ph []float64) []float64 {
-	out := make([]float64, 0, len(ph))
-	for _, p := range ph {
-		p = math.Mod(p, 2*math.Pi)
-		if p < 0 {
-			p += 2 * math.Pi
-		}
-		out = append(out, p)
-	}
-	slices.Sort(out)
-	k := 0
-	for _, p := range out {
-		if k > 0 && p-out[k-1] < phaseMerge {
-			continue
-		}
-		out[k] = p
-		k++
-	}
-	out = out[:k]
-	if k > 1 && out[0]+2*math.Pi-out[k-1] < phaseMerge {
-		out = out[:k-1]
-	}
-	return out
-}
-
-// sumset returns the distinct sums a + b mod 2π.
-func sumset(a, b []float64) []float64 {
-	s := make([]float64, 0, len(a)*len(b))
-	for _, x := range a {
-		for _, y := range b {
-			s = append(s, x+y)
-		}
-	}
-	return distinct(s)
-}
-
-// arc returns the length of the shortest arc of the circle that holds every phase: 2π minus the
-// widest gap between neighbours. min over φ of ‖W − e^{iφ}I‖ = 2·sin(arc/4) for a unitary W
-// with these eigenphases (metric.PhaseDistance).
-func arc(ph []float64) float64 {
-	if len(ph) <= 1 {
-		return 0
-	}
-	gap := ph[0] + 2*math.Pi - ph[len(ph)-1]
-	for i := 1; i < len(ph); i++ {
-		gap = max(gap, ph[i]-ph[i-1])
-	}
-	return 2*math.Pi - gap
 }
 
 // latest returns the largest from of the spiders joined to the given wires.
