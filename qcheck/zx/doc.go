@@ -69,8 +69,8 @@
 // and each W_j's matrix is computed from its part by summing out the spiders one at a time (a
 // ZX-diagram is a sum over the values of its spiders: a phase α contributes e^{iαx}, a Hadamard
 // edge (−1)^{xy}). Scaling to unit column norm removes the unknown scalar. The eigenphases of
-// V†U are, up to the global phase, the sums of one eigenphase of each W_j (metric.Eigenphases,
-// merged within 1e-11); with θ the shortest arc of the circle holding them all,
+// V†U are, up to the global phase, the sums of one eigenphase of each W_j; with θ the shortest
+// arc of the circle holding them all (metric.TensorPhaseDistance),
 //
 //	min_φ ‖U − e^{iφ}V‖ = 2·sin(θ/4),
 //
