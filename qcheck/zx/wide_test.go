@@ -162,3 +162,23 @@ func TestNearMissAtWidth(t *testing.T) {
 		t.Logf("%d qubits: %v, distance %g (want %g), bound %g %s", c.Qubits(), r.Verdict, r.Distance, want, r.Bound, r.Reason)
 	}
 }
+
+// The QFT (checked against Nielsen & Chuang's matrix up to 10 qubits in TestQFTMatrix), basis-
+// translated, reordered and routed, is proved equal to itself at 32 qubits (64 and 128 with
+// -zx.wide), within a bound below qcheck's default tolerance of 1e-9.
+func TestQFTAtWidth(t *testing.T) {
+	ns := []int{32}
+	if *wide {
+		ns = append(ns, 64, 128)
+	}
+	for _, n := range ns {
+		c := qft(n)
+		r, err := Check(c, rewritten(c, 7), Options{})
+		if err != nil {
+			t.Fatal(err)
+		}
+		if r.Verdict != Equivalent || r.Bound > 1e-9 {
+			t.Errorf("%d qubits: %v within %g (%s)", n, r.Verdict, r.Bound, r.Reason)
+		}
+	}
+}
