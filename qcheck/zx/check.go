@@ -203,56 +203,42 @@ func (r Result) Lower() float64 {
 // V†U = c·(W_1 ⊗ … ⊗ W_m) on those parts, the eigenphases of V†U are, up to the global phase,
 // the sums of one eigenphase of each W_j.
 func (g *graph) components(wires []int) [][]int {
-	comp := map[int]int{}
-	parts := 0
+	// The two ends of a wire count as joined, so that a part that takes the input of one wire to
+	// the output of another (a permutation) lands in one group with both wires; each group then
+	// maps its wires' inputs to the same wires' outputs.
+	end := map[int]int{}
 	for _, q := range wires {
-		for _, start := range []int{g.in[q], g.out[q]} {
-			if _, ok := comp[start]; ok {
-				continue
-			}
-			stack := []int{start}
-			for len(stack) > 0 {
-				x := stack[len(stack)-1]
-				stack = stack[:len(stack)-1]
-				if _, ok := comp[x]; ok {
-					continue
-				}
-				comp[x] = parts
-				for w := range g.v[x].nbr {
-					stack = append(stack, w)
-				}
-			}
-			parts++
-		}
+		end[g.in[q]], end[g.out[q]] = g.out[q], g.in[q]
 	}
-	// A part that joins the input of one wire to the output of another (a permutation) is merged
-	// with the part of that wire, so that each group maps its wires' inputs to the same wires'
-	// outputs.
-	parent := make([]int, parts)
-	for i := range parent {
-		parent[i] = i
-	}
-	var find func(int) int
-	find = func(x int) int {
-		for parent[x] != x {
-			x = parent[x]
-		}
-		return x
-	}
-	for _, q := range wires {
-		parent[find(comp[g.in[q]])] = find(comp[g.out[q]])
-	}
-	index := map[int]int{}
+	seen, assigned := map[int]bool{}, map[int]bool{}
 	var out [][]int
 	for _, q := range wires {
-		r := find(comp[g.in[q]])
-		i, ok := index[r]
-		if !ok {
-			i = len(out)
-			index[r] = i
-			out = append(out, nil)
+		if seen[g.in[q]] {
+			continue
 		}
-		out[i] = append(out[i], q)
+		var group []int
+		stack := []int{g.in[q]}
+		for len(stack) > 0 {
+			x := stack[len(stack)-1]
+			stack = stack[:len(stack)-1]
+			if seen[x] {
+				continue
+			}
+			seen[x] = true
+			if o, ok := end[x]; ok {
+				stack = append(stack, o)
+			}
+			for w := range g.v[x].nbr {
+				stack = append(stack, w)
+			}
+		}
+		for _, p := range wires {
+			if seen[g.in[p]] && !assigned[p] {
+				assigned[p] = true
+				group = append(group, p)
+			}
+		}
+		out = append(out, group)
 	}
 	return out
 }
