@@ -54,3 +54,32 @@ func BenchmarkFormat100k(b *testing.B) {
 		}
 	}
 }
+
+// BenchmarkParse3100k parses the same circuit written as OpenQASM 3 (Format3). cpu-ns/op is
+// the process's CPU time per read (see reportCPU).
+func BenchmarkParse3100k(b *testing.B) {
+	src, err := Format3(benchCircuit())
+	if err != nil {
+		b.Fatal(err)
+	}
+	b.SetBytes(int64(len(src)))
+	b.ReportAllocs()
+	reportCPU(b, func() {
+		if _, err := Parse(src); err != nil {
+			b.Fatal(err)
+		}
+	})
+}
+
+// BenchmarkParse3Loop reads a for loop of 100,000 iterations, each a gate whose angle and qubit
+// are computed from the loop variable.
+func BenchmarkParse3Loop(b *testing.B) {
+	src := []byte("include \"stdgates.inc\";\nqubit[20] q;\nfor int i in [0:99999] { rz(i * pi / 7) q[i % 20]; }\n")
+	b.ReportAllocs()
+	reportCPU(b, func() {
+		c, err := Parse(src)
+		if err != nil || c.Len() != 100000 {
+			b.Fatal(err)
+		}
+	})
+}

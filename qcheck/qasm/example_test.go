@@ -58,8 +58,58 @@ func ExampleFormat() {
 }
 
 func ExampleParse_error() {
-	_, err := qasm.Parse([]byte("OPENQASM 2.0;\ninclude \"qelib1.inc\";\nqreg q[2];\ncreg c[2];\nif (c == 1) x q[0];\n"))
+	_, err := qasm.Parse([]byte("OPENQASM 2.0;\ninclude \"qelib1.inc\";\nqreg q[2];\ncreg c[2];\nif (c[0] == 1) x q[0];\n"))
 	fmt.Println(err)
 	// Output:
-	// qasm: 5:1: if is not supported: a classically controlled operation has no unitary
+	// qasm: 5:6: OpenQASM 2.0 compares a whole register in if, not an element
+}
+
+// An OpenQASM 3 program: a loop, a modifier, and a correction conditioned on a measured bit.
+func ExampleParseProgram_openQASM3() {
+	src := []byte(`OPENQASM 3.0;
+include "stdgates.inc";
+qubit[3] q;
+bit[2] c;
+for int i in [0:1] { h q[i]; }
+ctrl @ s q[0], q[2];
+c[0] = measure q[0];
+if (c[0]) x q[1]; else inv @ sx q[1];
+`)
+	p, err := qasm.ParseProgram(src)
+	if err != nil {
+		fmt.Println(err)
+		return
+	}
+	fmt.Println("version", p.Version)
+	for i, op := range p.Circuit.Ops {
+		fmt.Printf("line %d: %v\n", p.Lines[i], op)
+	}
+	// Output:
+	// version 3
+	// line 5: h q0
+	// line 5: h q1
+	// line 6: cp(π/2) q0,q2
+	// line 7: measure q0 -> c0
+	// line 8: if c0==1: x q1
+	// line 8: if c0!=1: sxdg q1
+}
+
+func ExampleFormat3() {
+	c := circuit.New(3).H(0).CCZ(0, 1, 2).U(1, 2, 3, 2)
+	src, err := qasm.Format3(c)
+	if err != nil {
+		fmt.Println(err)
+		return
+	}
+	fmt.Print(string(src))
+	back, _ := qasm.Parse(src)
+	fmt.Println("round trip equal:", back.Equal(c))
+	// Output:
+	// OPENQASM 3.0;
+	// include "stdgates.inc";
+	// qubit[3] q;
+	// h q[0];
+	// ctrl(2) @ z q[0], q[1], q[2];
+	// U(1, 2, 3) q[2];
+	// round trip equal: true
 }

@@ -15,18 +15,34 @@ type expr struct {
 	a, b  *expr
 }
 
-// functions are the built-in functions of OpenQASM 2.0 expressions.
+// functions are the built-in real functions of OpenQASM expressions: the first six are those of
+// 2.0; OpenQASM 3 spells ln as log and adds the inverse functions and rounding.
 var functions = []struct {
 	name string
 	f    func(float64) float64
 }{
 	{"sin", math.Sin}, {"cos", math.Cos}, {"tan", math.Tan},
 	{"exp", math.Exp}, {"ln", math.Log}, {"sqrt", math.Sqrt},
+	{"log", math.Log}, {"arcsin", math.Asin}, {"arccos", math.Acos}, {"arctan", math.Atan},
+	{"ceiling", math.Ceil}, {"floor", math.Floor},
 }
 
+// functions2 is how many of functions OpenQASM 2.0 has.
+const functions2 = 6
+
 func functionIndex(name []byte) int {
-	for i, f := range functions {
+	for i, f := range functions[:functions2] {
 		if f.name == string(name) {
+			return i
+		}
+	}
+	return -1
+}
+
+// functionIndex3 is functionIndex for OpenQASM 3, which has no ln.
+func functionIndex3(name string) int {
+	for i, f := range functions {
+		if f.name == name && name != "ln" {
 			return i
 		}
 	}
@@ -38,19 +54,28 @@ const (
 	maxExprDepth = 10000 // height of an expression tree
 )
 
+// eval evaluates the tree; the parser uses it only to fold constants, and compiles every
+// expression it keeps into code (see compile), which evaluates without recursion.
 func (e *expr) eval(env []float64) float64 {
 	switch e.op {
 	case 'n':
 		return e.val
 	case 'p':
 		return env[e.idx]
-	case 'u':
-		return -e.a.eval(env)
-	case 'f':
-		return functions[e.idx].f(e.a.eval(env))
+	case 'u', 'f':
+		return apply(e.op, e.idx, e.a.eval(env), 0)
 	}
-	x, y := e.a.eval(env), e.b.eval(env)
-	switch e.op {
+	return apply(e.op, e.idx, e.a.eval(env), e.b.eval(env))
+}
+
+// apply computes one operator of an expression: x op y for the binary operators, -x for 'u', and
+// function idx of x for 'f'. It is the one home of the arithmetic of both the tree and the code.
+func apply(op byte, idx int, x, y float64) float64 {
+	switch op {
+	case 'u':
+		return -x
+	case 'f':
+		return functions[idx].f(x)
 	case '+':
 		return x + y
 	case '-':
@@ -62,6 +87,63 @@ func (e *expr) eval(env []float64) float64 {
 	default: // '^'
 		return math.Pow(x, y)
 	}
+}
+
+// code is an expression compiled once, when its gate definition is read, into postfix
+// instructions over the gate's parameters: expanding a call then costs one pass over the
+// instructions, with no recursion and no allocation.
+type code struct {
+	ins   []instr
+	stack int // the deepest the evaluation stack gets
+}
+
+type instr struct {
+	op  byte // as in expr
+	idx int
+	val float64
+}
+
+// compile turns the tree into code.
+func compile(e *expr) code {
+	var c code
+	var walk func(e *expr, depth int)
+	walk = func(e *expr, depth int) {
+		c.stack = max(c.stack, depth+1)
+		if e.a != nil {
+			walk(e.a, depth)
+		}
+		if e.b != nil {
+			walk(e.b, depth+1)
+		}
+		c.ins = append(c.ins, instr{op: e.op, idx: e.idx, val: e.val})
+	}
+	walk(e, 0)
+	return c
+}
+
+// cost is how much work one evaluation of c is, counted against the source's expansion budget.
+func (c code) cost() int { return len(c.ins) }
+
+// eval runs the code with the given parameter values; stack is scratch space of at least
+// c.stack entries.
+func (c code) eval(env, stack []float64) float64 {
+	sp := 0
+	for _, in := range c.ins {
+		switch in.op {
+		case 'n':
+			stack[sp] = in.val
+			sp++
+		case 'p':
+			stack[sp] = env[in.idx]
+			sp++
+		case 'u', 'f':
+			stack[sp-1] = apply(in.op, in.idx, stack[sp-1], 0)
+		default:
+			sp--
+			stack[sp-1] = apply(in.op, in.idx, stack[sp-1], stack[sp])
+		}
+	}
+	return stack[0]
 }
 
 // combine builds the node op(a, b) (b is nil for unary nodes), folding constants.

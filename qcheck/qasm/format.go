@@ -7,6 +7,7 @@ import (
 	"math/cmplx"
 	"sort"
 	"strconv"
+	"strings"
 
 	"qcheck.dev/qcheck/circuit"
 )
@@ -21,10 +22,19 @@ import (
 // here and are an error naming the op. Angles are printed in the shortest form that reads back
 // to the same float64.
 func Format(c *circuit.Circuit) ([]byte, error) {
+	if c == nil {
+		return nil, fmt.Errorf("qasm: Format of a nil circuit")
+	}
 	if err := c.Validate(); err != nil {
 		return nil, err
 	}
-	var q, cr []Register
+	q, cr := soleRegisters(c)
+	return write(c, q, cr, 2)
+}
+
+// soleRegisters returns the registers Format and Format3 write: q over every qubit and, when
+// the circuit has classical bits, c over every bit a measure writes or a condition reads.
+func soleRegisters(c *circuit.Circuit) (q, cr []Register) {
 	if c.Qubits() > 0 {
 		q = []Register{{Name: "q", Size: c.Qubits()}}
 	}
@@ -34,29 +44,42 @@ func Format(c *circuit.Circuit) ([]byte, error) {
 		for _, b := range op.Bits {
 			nc = max(nc, b+1)
 		}
+		if op.If != nil {
+			for _, b := range op.If.Bits {
+				nc = max(nc, b+1)
+			}
+		}
 	}
 	if nc > 0 {
 		cr = []Register{{Name: "c", Size: nc}}
 	}
-	return write(c, q, cr)
+	return q, cr
 }
 
 // FormatProgram writes the program's circuit with its own register names and sizes, so that
 // ParseProgram(FormatProgram(p)) has the same registers. The registers must cover the circuit.
 func FormatProgram(p *Program) ([]byte, error) {
+	if p == nil || p.Circuit == nil {
+		return nil, fmt.Errorf("qasm: FormatProgram of a nil program or circuit")
+	}
 	if err := p.Circuit.Validate(); err != nil {
 		return nil, err
 	}
-	for _, regs := range [][]Register{p.Qregs, p.Cregs} {
+	for k, regs := range [][]Register{p.Qregs, p.Cregs} {
 		seen := map[string]bool{}
 		for _, r := range regs {
-			if !validIdent(r.Name) || seen[r.Name] || r.Size <= 0 {
+			physical := r.Name == "$" && k == 0 && p.Version == 3 && len(regs) == 1
+			valid := validIdent(r.Name)
+			if p.Version == 3 {
+				valid = validIdent3(r.Name, needsStdgates(p.Circuit))
+			}
+			if !physical && !valid || seen[r.Name] || r.Size <= 0 {
 				return nil, fmt.Errorf("qasm: register %q: name must be a fresh identifier and size positive", r.Name)
 			}
 			seen[r.Name] = true
 		}
 	}
-	return write(p.Circuit, p.Qregs, p.Cregs)
+	return write(p.Circuit, p.Qregs, p.Cregs, p.Version)
 }
 
 // flat maps flat indices to reg[i] strings.
@@ -65,7 +88,11 @@ func flat(regs []Register, n int, what string) ([]string, error) {
 	for _, r := range regs {
 		for i := 0; i < r.Size; i++ {
 			if k := r.Start + i; k >= 0 && k < n {
-				out[k] = r.Name + "[" + strconv.Itoa(i) + "]"
+				if r.Name == "$" {
+					out[k] = "$" + strconv.Itoa(i) // physical qubits of OpenQASM 3
+				} else {
+					out[k] = r.Name + "[" + strconv.Itoa(i) + "]"
+				}
 			}
 		}
 	}
@@ -77,7 +104,14 @@ func flat(regs []Register, n int, what string) ([]string, error) {
 	return out, nil
 }
 
-func write(c *circuit.Circuit, qregs, cregs []Register) ([]byte, error) {
+// write writes the circuit with the given registers as OpenQASM of the given version (3, or 2
+// for anything else).
+func write(c *circuit.Circuit, qregs, cregs []Register, version int) ([]byte, error) {
+	v3 := version == 3
+	defsOf := formatDefs
+	if v3 {
+		defsOf = formatDefs3
+	}
 	qn, err := flat(qregs, c.Qubits(), "qubit")
 	if err != nil {
 		return nil, err
@@ -94,6 +128,13 @@ func write(c *circuit.Circuit, qregs, cregs []Register) ([]byte, error) {
 		for _, b := range op.Bits {
 			if b >= len(cn) {
 				return nil, fmt.Errorf("qasm: op %d (%s) writes classical bit %d, outside the classical registers", i, op.Gate.Name, b)
+			}
+		}
+		if op.If != nil {
+			for _, b := range op.If.Bits {
+				if b >= len(cn) {
+					return nil, fmt.Errorf("qasm: op %d (%s) is conditioned on classical bit %d, outside the classical registers", i, op.Gate.Name, b)
+				}
 			}
 		}
 	}
@@ -113,15 +154,15 @@ func write(c *circuit.Circuit, qregs, cregs []Register) ([]byte, error) {
 				}
 				continue
 			}
-			def, err := customDef(g)
+			def, err := customDef(g, v3)
 			if err != nil {
 				return nil, fmt.Errorf("qasm: op %d (%s): %v", i, g.Name, err)
 			}
 			defined[g.Name] = g
 			names = append(names, def)
-		case formatDefs[g.Name] != "":
+		case defsOf[g.Name] != "":
 			defined[g.Name] = g
-			names = append(names, formatDefs[g.Name])
+			names = append(names, defsOf[g.Name])
 		}
 	}
 	sort.Strings(names) // deterministic; no definition uses another
@@ -132,16 +173,45 @@ func write(c *circuit.Circuit, qregs, cregs []Register) ([]byte, error) {
 
 	var b bytes.Buffer
 	b.Grow(32 * len(c.Ops))
-	b.WriteString("OPENQASM 2.0;\ninclude \"qelib1.inc\";\n")
+	switch {
+	case v3 && needsStdgates(c):
+		b.WriteString("OPENQASM 3.0;\ninclude \"stdgates.inc\";\n")
+	case v3:
+		b.WriteString("OPENQASM 3.0;\n")
+	default:
+		b.WriteString("OPENQASM 2.0;\ninclude \"qelib1.inc\";\n")
+	}
 	b.Write(defs.Bytes())
 	for _, r := range qregs {
-		fmt.Fprintf(&b, "qreg %s[%d];\n", r.Name, r.Size)
+		switch {
+		case v3 && r.Name == "$":
+		case v3:
+			fmt.Fprintf(&b, "qubit[%d] %s;\n", r.Size, r.Name)
+		default:
+			fmt.Fprintf(&b, "qreg %s[%d];\n", r.Name, r.Size)
+		}
 	}
 	for _, r := range cregs {
-		fmt.Fprintf(&b, "creg %s[%d];\n", r.Name, r.Size)
+		if v3 {
+			fmt.Fprintf(&b, "bit[%d] %s;\n", r.Size, r.Name)
+		} else {
+			fmt.Fprintf(&b, "creg %s[%d];\n", r.Name, r.Size)
+		}
 	}
 	var num []byte
-	for _, op := range c.Ops {
+	for i, op := range c.Ops {
+		if v3 {
+			writeOp3(&b, op, qn, cn, cregs)
+			continue
+		}
+		if op.If != nil {
+			r, ok := wholeRegister(op.If, cregs)
+			if !ok {
+				return nil, fmt.Errorf("qasm: op %d (%s): its condition %s is not a whole classical register compared with ==, which is all OpenQASM 2.0 can write",
+					i, op.Gate.Name, conditionText(op.If, cn))
+			}
+			fmt.Fprintf(&b, "if(%s==%d) ", r.Name, op.If.Value)
+		}
 		b.WriteString(op.Gate.Name)
 		if len(op.Gate.Params) > 0 && !op.Gate.IsCustom() {
 			b.WriteByte('(')
@@ -171,6 +241,48 @@ func write(c *circuit.Circuit, qregs, cregs []Register) ([]byte, error) {
 	return b.Bytes(), nil
 }
 
+// wholeRegister returns the register whose bits, element 0 first, are exactly the condition's,
+// when the condition tests equality.
+func wholeRegister(c *circuit.Condition, regs []Register) (Register, bool) {
+	if c.Not || len(c.Bits) == 0 {
+		return Register{}, false
+	}
+	for _, r := range regs {
+		if r.Size != len(c.Bits) {
+			continue
+		}
+		ok := true
+		for i, bit := range c.Bits {
+			ok = ok && bit == r.Start+i
+		}
+		if ok {
+			return r, true
+		}
+	}
+	return Register{}, false
+}
+
+// conditionText writes a condition for an error message with the bits' register names.
+func conditionText(c *circuit.Condition, names []string) string {
+	var b strings.Builder
+	for i, bit := range c.Bits {
+		if i > 0 {
+			b.WriteByte(',')
+		}
+		if bit >= 0 && bit < len(names) {
+			b.WriteString(names[bit])
+		} else {
+			fmt.Fprintf(&b, "bit %d", bit)
+		}
+	}
+	op := "=="
+	if c.Not {
+		op = "!="
+	}
+	fmt.Fprintf(&b, "%s%d", op, c.Value)
+	return b.String()
+}
+
 // appendAngle writes v in the shortest decimal form that parses back to v exactly. OpenQASM 2.0
 // wants a decimal point before an exponent, so 1e-05 is written 1.0e-05.
 func appendAngle(dst []byte, v float64) []byte {
@@ -185,12 +297,13 @@ func appendAngle(dst []byte, v float64) []byte {
 	return dst
 }
 
-// customDef writes a single-qubit custom gate as a definition: M = e^{iα} u(θ,φ,λ).
-func customDef(g circuit.Gate) (string, error) {
+// customDef writes a single-qubit custom gate as a definition: M = e^{iα} u(θ,φ,λ). In
+// OpenQASM 3 the phase is gphase(α); in 2.0 it is p(α) x p(α) x.
+func customDef(g circuit.Gate, v3 bool) (string, error) {
 	if g.Qubits() != 1 {
-		return "", fmt.Errorf("custom gates on %d qubits cannot be written as OpenQASM 2.0 (only single-qubit custom gates have an exact decomposition here)", g.Qubits())
+		return "", fmt.Errorf("custom gates on %d qubits cannot be written as OpenQASM (only single-qubit custom gates have an exact decomposition here)", g.Qubits())
 	}
-	if !validGateName(g.Name) {
+	if !validGateName(g.Name) || v3 && (reserved3[g.Name] || stdgates()[g.Name] != nil) {
 		return "", fmt.Errorf("custom gate name %q is not an OpenQASM identifier or is taken", g.Name)
 	}
 	m := g.Elements()
@@ -198,7 +311,11 @@ func customDef(g circuit.Gate) (string, error) {
 	var b []byte
 	b = append(b, "gate "...)
 	b = append(b, g.Name...)
-	b = append(b, " a { u("...)
+	if v3 {
+		b = append(b, " a { U("...)
+	} else {
+		b = append(b, " a { u("...)
+	}
 	for k, v := range []float64{theta, phi, lambda} {
 		if k > 0 {
 			b = append(b, ',')
@@ -206,7 +323,11 @@ func customDef(g circuit.Gate) (string, error) {
 		b = appendAngle(b, v)
 	}
 	b = append(b, ") a;"...)
-	if alpha != 0 {
+	if alpha != 0 && v3 {
+		b = append(b, " gphase("...)
+		b = appendAngle(b, alpha)
+		b = append(b, ");"...)
+	} else if alpha != 0 {
 		ph := appendAngle(nil, alpha)
 		b = append(b, " p("...)
 		b = append(b, ph...)

@@ -20,35 +20,53 @@ func Parse(src []byte, opts ...Option) (*circuit.Circuit, error) {
 	return p.Circuit, nil
 }
 
-// ParseProgram reads an OpenQASM 2.0 source and returns the circuit with its registers and the
-// source line of every op. What it accepts and how each qelib1 gate maps onto the gates of
-// package circuit is described in the package documentation.
+// ParseProgram reads an OpenQASM 2.0 or 3 source (the version is read from the header; a source
+// without one is read as 3, as the 3 specification allows) and returns the circuit with its
+// registers and the source line of every op. What it accepts and how each gate maps onto the
+// gates of package circuit is described in the package documentation.
 func ParseProgram(src []byte, opts ...Option) (*Program, error) {
 	cfg := config{maxOps: DefaultMaxOps}
 	for _, o := range opts {
 		o(&cfg)
 	}
-	p := &parser{src: src, lx: lexer{src: src}, cfg: cfg, gates: map[string]*gateDef{},
+	version, err := sourceVersion(src)
+	if err != nil {
+		return nil, err
+	}
+	p := &parser{src: src, lx: lexer{src: src, v3: version == 3}, cfg: cfg, gates: map[string]*gateDef{},
 		regs: map[string]*register{}}
 	// Most statements make one op: size the op list once instead of growing it.
 	if n := bytes.Count(src, []byte{';'}); n <= cfg.maxOps {
 		p.ops, p.offs = make([]circuit.Op, 0, n), make([]int, 0, n)
 	}
-	for name, d := range builtins() {
-		if d.keyword {
-			p.gates[name] = d
-		}
-	}
 	if err := p.advance(); err != nil {
 		return nil, err
 	}
-	if err := p.program(); err != nil {
-		return nil, err
+	prog := &Program{Version: version}
+	if version == 2 {
+		for name, d := range builtins() {
+			if d.keyword {
+				p.gates[name] = d
+			}
+		}
+		if err := p.program(); err != nil {
+			return nil, err
+		}
+	} else {
+		p.gates = keywords3()
+		p3 := &parser3{parser: p}
+		if err := p3.program(); err != nil {
+			return nil, err
+		}
+		prog.Inputs = p3.inputs
+		if p3.physical {
+			prog.Qregs = []Register{{Name: "$", Size: p.nq}}
+		}
 	}
 	c := circuit.New(p.nq)
 	c.Ops = p.ops
 	c.SetBits(p.nc)
-	prog := &Program{Circuit: c, Lines: make([]int, len(p.offs))}
+	prog.Circuit, prog.Lines = c, make([]int, len(p.offs))
 	for _, r := range p.order {
 		reg := Register{Name: r.name, Size: r.size, Start: r.start}
 		if r.quantum {
@@ -70,6 +88,34 @@ func ParseProgram(src []byte, opts ...Option) (*Program, error) {
 	return prog, nil
 }
 
+// sourceVersion reads the version from the header: 2 for OPENQASM 2.0 (or 2), 3 for OPENQASM 3
+// (3.0, 3.1 …) or no header at all. An empty source is an error: it is more likely a mistake
+// than a circuit of no qubits.
+func sourceVersion(src []byte) (int, error) {
+	lx := lexer{src: src, v3: true}
+	t, err := lx.next()
+	if err != nil {
+		return 3, nil // the 3 reader reports it
+	}
+	if t.kind == tEOF {
+		return 0, lx.errorf(t.off, "empty source: no OpenQASM statements")
+	}
+	if !t.is("OPENQASM") {
+		return 3, nil
+	}
+	v, err := lx.next()
+	if err != nil || v.kind != tNumber {
+		return 3, nil
+	}
+	switch s := string(v.text); {
+	case s == "2" || s == "2.0":
+		return 2, nil
+	case s == "3" || len(s) > 2 && s[:2] == "3.":
+		return 3, nil
+	}
+	return 0, lx.errorf(v.off, "unsupported OpenQASM version %s; this reader takes 2.0 and 3", v.text)
+}
+
 type register struct {
 	name        string
 	quantum     bool
@@ -86,17 +132,20 @@ type gateDef struct {
 	params  []string // the names of the angles, for errors (θ for rz, theta for a source's own)
 	body    []bodyCall
 	ops     int  // how many ops one call expands to, saturating at maxCount; see size
+	work    int  // the expansion work of one call, saturating at maxCount; see cost
 	keyword bool // U and CX, which exist without any include
 	hidden  bool // a helper of the built-in library that sources cannot call
 	user    bool // defined by the source itself
+	phase   bool // OpenQASM 3's gphase: a global phase, one angle, no qubits of its own
 }
 
 // bodyCall is one statement in a gate body: a call (def set) or a barrier (def nil).
 type bodyCall struct {
 	def    *gateDef
-	args   []*expr
+	args   []code
 	at     []int // the source offset of each argument's expression
 	qubits []int // positions in the enclosing gate's qubit list
+	mods   []modifier
 }
 
 // maxCount is where op counts stop growing, far above any MaxOps, so that sums and products of
@@ -127,6 +176,18 @@ func (d *gateDef) size() int {
 	return d.ops
 }
 
+// cost returns the work of expanding one call of d: one step for the call, and for a definition
+// one step for each barrier and each call in its body plus, for each call, the instructions of
+// its angle expressions and the callee's own work. Unlike size, it is never 0, so that
+// definitions with empty bodies still count (a doubling chain of them would otherwise be free
+// to expand for ever).
+func (d *gateDef) cost() int {
+	if d.native != "" {
+		return 1
+	}
+	return d.work
+}
+
 // angleLabel names angle k of d for an error, counting from 1 as package circuit does:
 // "angle 1 (θ)".
 func (d *gateDef) angleLabel(k int) string {
@@ -147,10 +208,16 @@ type parser struct {
 	nq    int
 	nc    int
 	ops   []circuit.Op
-	offs  []int // source offset of the statement that made each op
-	stmt  int   // offset of the statement being read
+	offs  []int              // source offset of the statement that made each op
+	work  int                // expansion work done so far, against maxWork
+	steps int                // steps of reading and expanding done so far, against maxWork (see step)
+	nargs int                // operands (qubits, bits and condition bits) of the ops so far, against maxOperands
+	cond  *circuit.Condition // the condition of the if statement being read, or nil
+	stmt  int                // offset of the statement being read
 	// scratch buffers reused across statements
 	argBuf []operand
+	stack  []float64 // evaluation stack of compiled expressions
+	seen   []bool    // qubits already in the barrier being read
 }
 
 // operand is a statement argument: a whole register or one element.
@@ -230,7 +297,7 @@ func (p *parser) statement() error {
 	case "opaque":
 		return p.errorf(t.off, "opaque gates are not supported: they have no body to give them a matrix")
 	case "if":
-		return p.errorf(t.off, "if is not supported: a classically controlled operation has no unitary")
+		return p.ifStatement()
 	case "OPENQASM":
 		return p.errorf(t.off, "the OPENQASM header may appear only once, at the start")
 	case "measure":
@@ -241,6 +308,67 @@ func (p *parser) statement() error {
 		return p.barrier()
 	}
 	return p.call()
+}
+
+// ifStatement reads if(creg==n) op; where op is a gate call, measure or reset, as OpenQASM 2.0
+// defines it. Every op the statement makes carries the condition: the register's bits, its
+// element 0 least significant, equal n.
+func (p *parser) ifStatement() error {
+	if err := p.advance(); err != nil {
+		return err
+	}
+	if err := p.expect("(", "after if"); err != nil {
+		return err
+	}
+	name, err := p.ident("a classical register")
+	if err != nil {
+		return err
+	}
+	r, ok := p.regs[string(name.text)]
+	switch {
+	case !ok:
+		return p.errorf(name.off, "unknown register %s", name.text)
+	case r.quantum:
+		return p.errorf(name.off, "%s is not a classical register; if compares a creg with an integer", name.text)
+	case r.size > 64:
+		return p.errorf(name.off, "if on register %s of %d bits: at most 64 bits can be compared", name.text, r.size)
+	}
+	if p.tok.is("[") {
+		return p.errorf(p.tok.off, "OpenQASM 2.0 compares a whole register in if, not an element")
+	}
+	if err := p.expect("==", "in the condition"); err != nil {
+		return err
+	}
+	t := p.tok
+	v, err := strconv.ParseUint(string(t.text), 10, 64)
+	if t.kind != tNumber || err != nil {
+		return p.errorf(t.off, "expected a non-negative integer of at most 64 bits to compare %s with, found %s", r.name, t.describe())
+	}
+	if err := p.advance(); err != nil {
+		return err
+	}
+	if err := p.expect(")", "to close the condition"); err != nil {
+		return err
+	}
+	bits := make([]int, r.size)
+	for i := range bits {
+		bits[i] = r.start + i
+	}
+	p.cond = &circuit.Condition{Bits: bits, Value: v}
+	defer func() { p.cond = nil }()
+	t = p.tok
+	if t.kind == tIdent {
+		switch string(t.text) {
+		case "measure":
+			return p.measure()
+		case "reset":
+			return p.reset()
+		case "if", "barrier", "gate", "opaque", "qreg", "creg", "include", "OPENQASM":
+		default:
+			return p.call()
+		}
+	}
+	return p.errorf(t.off, "if must be followed by a gate call, measure or reset, found %s", t.describe())
 }
 
 func (p *parser) include() error {
@@ -295,8 +423,8 @@ func (p *parser) declare(quantum bool) error {
 	if quantum {
 		total = &p.nq
 	}
-	if size.val > maxQubits-*total {
-		return p.errorf(size.off, "register %s makes the total size exceed %d", name.text, maxQubits)
+	if size.val > MaxQubits-*total {
+		return p.errorf(size.off, "register %s makes the total size exceed %d", name.text, MaxQubits)
 	}
 	r := &register{name: string(name.text), quantum: quantum, start: *total, size: size.val}
 	*total += size.val
@@ -309,7 +437,7 @@ type intTok struct {
 	val, off int
 }
 
-// integer reads a non-negative integer literal of at most maxQubits.
+// integer reads a non-negative integer literal of at most MaxQubits.
 func (p *parser) integer(what string) (intTok, error) {
 	t := p.tok
 	if t.kind != tNumber {
@@ -321,8 +449,8 @@ func (p *parser) integer(what string) (intTok, error) {
 		}
 	}
 	v, err := strconv.Atoi(string(t.text))
-	if err != nil || v > maxQubits {
-		return intTok{}, p.errorf(t.off, "the %s %s is too large (at most %d)", what, t.text, maxQubits)
+	if err != nil || v > MaxQubits {
+		return intTok{}, p.errorf(t.off, "the %s %s is too large (at most %d)", what, t.text, MaxQubits)
 	}
 	return intTok{val: v, off: t.off}, p.advance()
 }
@@ -409,9 +537,42 @@ func (p *parser) add(op circuit.Op) error {
 	if len(p.ops) >= p.cfg.maxOps {
 		return p.errorf(p.stmt, "the source expands to more than %d ops (see MaxOps)", p.cfg.maxOps)
 	}
+	n := len(op.Qubits) + len(op.Bits)
+	// A barrier does nothing, so a condition on it means nothing: it is left off.
+	if p.cond != nil && op.Gate.Name != "barrier" {
+		n += len(p.cond.Bits)
+		c := *p.cond
+		c.Bits = append([]int(nil), c.Bits...)
+		op.If = &c
+	}
+	if err := p.operandRoom(n); err != nil {
+		return err
+	}
+	p.nargs += n
 	p.ops = append(p.ops, op)
 	p.offs = append(p.offs, p.stmt)
 	return nil
+}
+
+// operandRoom fails when n more operands would pass the source's limit, maxOperands: a wide
+// register makes each barrier or broadcast condition over it as large as the register, so the
+// op limit alone does not bound memory.
+func (p *parser) operandRoom(n int) error {
+	if limit := p.cfg.maxOperands(); n > limit-p.nargs {
+		return p.errorf(p.stmt, "the source's ops have more than %d operands in all (qubits, bits and condition bits; %d × MaxOps)",
+			limit, operandsPerOp)
+	}
+	return nil
+}
+
+// condRoom fails when ops more ops under the current if condition would pass the operand limit
+// with the condition's bits alone, so that a broadcast under a wide condition is refused before
+// it starts.
+func (p *parser) condRoom(ops int) error {
+	if p.cond == nil {
+		return nil
+	}
+	return p.operandRoom(mulCount(ops, len(p.cond.Bits)))
 }
 
 func (p *parser) measure() error {
@@ -444,6 +605,9 @@ func (p *parser) measure() error {
 	if q.index < 0 {
 		n = q.reg.size
 	}
+	if err := p.condRoom(n); err != nil {
+		return err
+	}
 	for i := 0; i < n; i++ {
 		if err := p.add(circuit.Op{Gate: circuit.Gate{Name: "measure"}, Qubits: []int{q.at(i)}, Bits: []int{b.at(i)}}); err != nil {
 			return err
@@ -464,6 +628,9 @@ func (p *parser) reset() error {
 		return p.errorf(qs[1].off, "reset takes one qubit or register")
 	}
 	n, _ := p.broadcast(qs)
+	if err := p.condRoom(n); err != nil {
+		return err
+	}
 	for i := 0; i < n; i++ {
 		if err := p.add(circuit.Op{Gate: circuit.Gate{Name: "reset"}, Qubits: []int{qs[0].at(i)}}); err != nil {
 			return err
@@ -483,8 +650,23 @@ func (p *parser) barrier() error {
 	if p.cfg.dropBarriers {
 		return nil
 	}
-	seen := make([]bool, p.nq)
-	var qubits []int
+	width := 0
+	for _, a := range qs {
+		if a.index < 0 {
+			width = addCount(width, a.reg.size)
+		} else {
+			width++
+		}
+	}
+	// Check the limit before building the list, however wide the registers.
+	if err := p.operandRoom(min(width, p.nq)); err != nil {
+		return err
+	}
+	if len(p.seen) < p.nq {
+		p.seen = make([]bool, p.nq)
+	}
+	seen := p.seen
+	qubits := make([]int, 0, min(width, p.nq))
 	for _, a := range qs {
 		lo, hi := a.index, a.index+1
 		if a.index < 0 {
@@ -496,6 +678,9 @@ func (p *parser) barrier() error {
 				qubits = append(qubits, q)
 			}
 		}
+	}
+	for _, q := range qubits {
+		seen[q] = false
 	}
 	return p.add(circuit.Op{Gate: circuit.Gate{Name: "barrier"}, Qubits: qubits})
 }
@@ -519,8 +704,9 @@ func (p *parser) call() error {
 	}
 	vals := make([]float64, len(angles))
 	for i, a := range angles {
-		// Every angle of a call must be finite, even one the gate's body ignores.
-		if vals[i] = a.eval(nil); math.IsNaN(vals[i]) || math.IsInf(vals[i], 0) {
+		// Every angle of a call must be finite, even one the gate's body ignores. Outside gate
+		// definitions every expression folds to a number.
+		if vals[i] = a.val; math.IsNaN(vals[i]) || math.IsInf(vals[i], 0) {
 			return p.errorf(at[i], "%s of %s evaluates to %v; angles must be finite", def.angleLabel(i), name.text, vals[i])
 		}
 	}
@@ -545,6 +731,22 @@ func (p *parser) call() error {
 		return p.errorf(name.off, "gate %s expands to %s ops here; with the %d before it the source expands to more than %d ops (see MaxOps)",
 			name.text, count, len(p.ops), p.cfg.maxOps)
 	}
+	if err := p.condRoom(mulCount(n, def.size())); err != nil {
+		return err
+	}
+	// Count the work of expanding, not only the ops it makes: definitions with empty bodies
+	// make no ops however deep they nest, and long angle expressions in bodies cost time at
+	// every expansion.
+	if need := mulCount(n, def.cost()); addCount(p.work, need) > p.cfg.maxWork() {
+		count := strconv.Itoa(need)
+		if need == maxCount {
+			count = "at least " + strconv.Itoa(maxCount)
+		}
+		return p.errorf(name.off, "gate %s takes %s steps to expand here (calls, barriers and angle arithmetic in its body); with the %d before it the source takes more than %d (%d × MaxOps)",
+			name.text, count, p.work, p.cfg.maxWork(), workPerOp)
+	} else {
+		p.work += need
+	}
 	for i := 0; i < n; i++ {
 		qubits := make([]int, len(args))
 		for k, a := range args {
@@ -555,7 +757,7 @@ func (p *parser) call() error {
 				}
 			}
 		}
-		if err := p.expand(def, vals, qubits, name.off); err != nil {
+		if err := p.apply(def, vals, nil, qubits, emitCtx{anchor: qubits[0]}, name.off); err != nil {
 			return err
 		}
 	}
@@ -603,49 +805,4 @@ func (p *parser) angles(params []string) ([]*expr, []int, error) {
 			return nil, nil, err
 		}
 	}
-}
-
-// expand appends the ops of one call of def with the given angles on the given flat qubits. The
-// call's own angles are finite (call checks them); a body's arithmetic may still make a
-// non-finite angle, reported at its expression when the body is the source's own, else at the
-// call, whose gate name is at off.
-func (p *parser) expand(def *gateDef, vals []float64, qubits []int, off int) error {
-	if def.native != "" {
-		var params []float64
-		if len(vals) > 0 {
-			params = append(params, vals...)
-		}
-		return p.add(circuit.Op{Gate: circuit.Gate{Name: def.native, Params: params}, Qubits: qubits})
-	}
-	for _, b := range def.body {
-		sub := make([]int, len(b.qubits))
-		for k, i := range b.qubits {
-			sub[k] = qubits[i]
-		}
-		if b.def == nil {
-			if !p.cfg.dropBarriers {
-				if err := p.add(circuit.Op{Gate: circuit.Gate{Name: "barrier"}, Qubits: sub}); err != nil {
-					return err
-				}
-			}
-			continue
-		}
-		args := make([]float64, len(b.args))
-		for k, a := range b.args {
-			if args[k] = a.eval(vals); !math.IsNaN(args[k]) && !math.IsInf(args[k], 0) {
-				continue
-			}
-			line, col := position(p.src, off)
-			if def.user {
-				return p.errorf(b.at[k], "%s of %s evaluates to %v in the body of gate %s, for the call at %d:%d; angles must be finite",
-					b.def.angleLabel(k), b.def.name, args[k], def.name, line, col)
-			}
-			return p.errorf(off, "%s of %s evaluates to %v inside gate %s; angles must be finite",
-				b.def.angleLabel(k), b.def.name, args[k], def.name)
-		}
-		if err := p.expand(b.def, args, sub, off); err != nil {
-			return err
-		}
-	}
-	return nil
 }

@@ -157,12 +157,16 @@ func TestParseErrors(t *testing.T) {
 		line, col int
 		words     string
 	}{
-		{"", 1, 1, "expected the header"},
-		{"qreg q[1];", 1, 1, "expected the header"},
-		{"OPENQASM 3.0;", 1, 10, "unsupported OpenQASM version"},
+		{"", 1, 1, "empty source"},
+		{"// nothing\n", 2, 1, "empty source"},
+		{"OPENQASM 4.0;", 1, 10, "unsupported OpenQASM version 4.0; this reader takes 2.0 and 3"},
 		{"OPENQASM 2.0", 1, 13, `expected ";"`},
 		{head + "qreg q[1];\nopaque g a;", 4, 1, "opaque"},
-		{head + "qreg q[1];\ncreg c[1];\nif (c==1) x q[0];", 5, 1, "if is not supported"},
+		{head + "qreg q[1];\ncreg c[1];\nif (c[0]==1) x q[0];", 5, 6, "whole register"},
+		{head + "qreg q[1];\ncreg c[1];\nif (q==1) x q[0];", 5, 5, "not a classical register"},
+		{head + "qreg q[1];\ncreg c[1];\nif (c==1) barrier q;", 5, 11, "if must be followed by a gate call, measure or reset"},
+		{head + "qreg q[1];\ncreg c[1];\nif (c==-1) x q[0];", 5, 8, "non-negative integer"},
+		{head + "qreg q[1];\ncreg c[65];\nif (c==1) x q[0];", 5, 5, "at most 64 bits"},
 		{"OPENQASM 2.0;\ninclude \"other.inc\";", 2, 9, "only \"qelib1.inc\""},
 		{head + "qreg q[1];\nfoo q[0];", 4, 1, "unknown gate or statement foo"},
 		{"OPENQASM 2.0;\nqreg q[1];\nh q[0];", 3, 1, "add include"},

@@ -10,6 +10,12 @@ type Program struct {
 	Circuit *circuit.Circuit
 	// Qregs and Cregs are the quantum and classical registers in the order of declaration.
 	Qregs, Cregs []Register
+	// Version is the OpenQASM version of the source, 2 or 3; FormatProgram writes the same
+	// version (0 is read as 2).
+	Version int
+	// Inputs are the names of the input parameters of a version 3 source, in the order of
+	// declaration, each given its value by the Inputs option.
+	Inputs []string
 	// Lines gives, for each op of Circuit, the 1-based source line of the statement it came
 	// from, so that a report about op k can point into the file.
 	Lines []int
@@ -47,25 +53,54 @@ type Option func(*config)
 type config struct {
 	dropBarriers bool
 	maxOps       int
+	inputs       map[string]float64
 }
 
 // DefaultMaxOps bounds the ops one source may expand to (gate definitions can double the count
 // at each level of nesting), so that a small hostile file cannot exhaust memory.
 const DefaultMaxOps = 1 << 22
 
-// maxQubits bounds the total size of the quantum and of the classical registers.
-const maxQubits = 1 << 20
+// operandsPerOp and workPerOp set the source's other limits from MaxOps: its ops may have
+// operandsPerOp × MaxOps operands in all (qubits, classical bits and condition bits), and
+// expanding its gate calls may take workPerOp × MaxOps steps (each call, barrier and arithmetic
+// operation of a gate body counts one).
+const (
+	operandsPerOp = 4
+	workPerOp     = 8
+)
+
+func (c config) maxOperands() int { return mulCount(operandsPerOp, c.maxOps) }
+func (c config) maxWork() int     { return mulCount(workPerOp, c.maxOps) }
+
+// MaxQubits bounds the total size of the quantum registers of a source, and that of its classical
+// registers: a wider declaration is an error at its line and column.
+const MaxQubits = 1 << 20
 
 // DropBarriers makes Parse leave barriers out of the circuit. By default they are kept: engines
 // skip them, and passes that must not move gates across them can see them.
 func DropBarriers() Option { return func(c *config) { c.dropBarriers = true } }
 
 // MaxOps sets how many ops the source may expand to before Parse gives up with an error; n ≤ 0
-// means DefaultMaxOps.
+// means DefaultMaxOps. It also sets the source's other limits: its ops may have 4 × n operands
+// in all (qubits, classical bits and the bits conditions read), and expanding its gate calls may
+// take 8 × n steps (each call, barrier and arithmetic operation in a gate body is one step, so
+// gates with empty bodies and long angle expressions count too).
 func MaxOps(n int) Option {
 	return func(c *config) {
 		if n > 0 {
 			c.maxOps = n
+		}
+	}
+}
+
+// Inputs gives values to the input parameters of an OpenQASM 3 source (input angle θ;), by
+// name. Until circuits can carry free parameters, every input a source declares needs a value;
+// ParseProgram records the names in Program.Inputs.
+func Inputs(values map[string]float64) Option {
+	return func(c *config) {
+		c.inputs = make(map[string]float64, len(values))
+		for k, v := range values {
+			c.inputs[k] = v
 		}
 	}
 }

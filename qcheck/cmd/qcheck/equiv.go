@@ -22,6 +22,7 @@ type compareFlags struct {
 	dirty      bool
 	measure    string
 	engine     string
+	limits     readLimits
 }
 
 func (f *compareFlags) register(fs *flag.FlagSet) {
@@ -33,6 +34,7 @@ func (f *compareFlags) register(fs *flag.FlagSet) {
 	fs.BoolVar(&f.dirty, "dirty", false, "the -ancillas start in any state and must be restored")
 	fs.StringVar(&f.measure, "measure", "operator", "`MEASURE` that decides: operator (norm), diamond, or fidelity (average infidelity)")
 	fs.StringVar(&f.engine, "engine", "auto", "`ENGINE` that answers: auto, dense, tableau (Clifford circuits) or matrix-free (see above)")
+	f.limits.register(fs)
 }
 
 // engines maps the -engine names to qcheck's engines.
@@ -108,11 +110,11 @@ func (f *compareFlags) compareFiles(a, b string) (qcheck.Result, error) {
 	if err != nil {
 		return qcheck.Result{}, err
 	}
-	pa, err := load(a)
+	pa, err := f.limits.load(a)
 	if err != nil {
 		return qcheck.Result{}, err
 	}
-	pb, err := load(b)
+	pb, err := f.limits.load(b)
 	if err != nil {
 		return qcheck.Result{}, err
 	}

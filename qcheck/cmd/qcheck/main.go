@@ -1,6 +1,6 @@
-// Command qcheck checks, from a shell or a CI job, that circuits written in OpenQASM 2.0 by any
-// toolchain mean the same thing: the same unitary within a tolerance, by default up to a global
-// phase.
+// Command qcheck checks, from a shell or a CI job, that circuits written in OpenQASM 2.0 or 3
+// (the version is read from each file) by any toolchain mean the same thing: the same unitary
+// within a tolerance, by default up to a global phase.
 //
 //	qcheck equiv [flags] A.qasm B.qasm     exit 0 when equivalent, 1 when not, 2 on bad input
 //	qcheck measures [-json] A.qasm B.qasm  every distance and fidelity (up to 10 qubits)
@@ -28,12 +28,12 @@ const (
 	exitBadUsed = 2 // bad input or usage
 )
 
-const usage = `qcheck checks that quantum circuits written in OpenQASM 2.0 mean the same thing.
+const usage = `qcheck checks that quantum circuits written in OpenQASM 2.0 or 3 mean the same thing.
 
 Usage:
   qcheck equiv [flags] A.qasm B.qasm     exit 0 if equivalent, 1 if not, 2 on bad input
   qcheck measures [-json] A.qasm B.qasm  print every distance and fidelity (up to 10 qubits)
-  qcheck random [flags]                  write random circuits as OpenQASM 2.0
+  qcheck random [flags]                  write random circuits as OpenQASM 2.0 or 3
   qcheck pairs [flags] DIR               check every NAME.before.qasm against NAME.after.qasm
   qcheck demo [-seed N]                  run the built-in scenario
 

@@ -43,16 +43,18 @@ type allMeasures struct {
 func measures(args []string, stdout, stderr io.Writer) int {
 	c := newCommand("measures", "measures [-json] A.qasm B.qasm", measuresAbout, stdout, stderr)
 	asJSON := c.fs.Bool("json", false, "write the measures as one JSON object")
+	var limits readLimits
+	limits.register(c.fs)
 	files, code, ok := c.parse(args, 2)
 	if !ok {
 		return code
 	}
 	var m allMeasures
-	a, err := load(files[0])
+	a, err := limits.load(files[0])
 	if err != nil {
 		return c.fail("%v", err)
 	}
-	b, err := load(files[1])
+	b, err := limits.load(files[1])
 	if err != nil {
 		return c.fail("%v", err)
 	}

@@ -3,8 +3,10 @@ package main
 import (
 	"fmt"
 	"io"
+	"math"
 	"os"
 	"path/filepath"
+	"strconv"
 	"strings"
 
 	"qcheck.dev/gen"
@@ -13,21 +15,24 @@ import (
 )
 
 const randomAbout = `
-Writes random circuits as OpenQASM 2.0, drawn by qcheck's generator (package gen), so that a
-compiler written in any language can be fuzzed: generate, compile with your tool, compare the
-output with qcheck equiv. The same flags and seed always give the same circuits. One circuit goes
+Writes random circuits as OpenQASM 2.0 (or 3 with -version 3), drawn by qcheck's generator
+(package gen), so that a compiler written in any language can be fuzzed: generate, compile with
+your tool, compare the output with qcheck equiv. The same flags and seed always give the same circuits. One circuit goes
 to stdout; with -count N > 1 (or -out), N files DIR/random-SEED.qasm are written for seeds
 SEED, SEED+1, ... Each file starts with a comment holding the command that makes it again.
 Exit 0, or 2 on bad input or usage.`
 
 func random(args []string, stdout, stderr io.Writer) int {
 	c := newCommand("random", "random [flags]", randomAbout, stdout, stderr)
-	qubits := c.fs.Int("qubits", 3, "`N` qubits per circuit")
-	gates := c.fs.Int("gates", 20, "`N` ops per circuit")
+	qubits, gates := new(int), new(int)
+	*qubits, *gates = 3, 20
+	c.fs.Var((*countFlag)(qubits), "qubits", fmt.Sprintf("`N` qubits per circuit, at most %d (the widest register the reader takes)", qasm.MaxQubits))
+	c.fs.Var((*countFlag)(gates), "gates", fmt.Sprintf("`N` ops per circuit, at most %d", maxRandomOps))
 	set := c.fs.String("set", "", "gates to draw from, `G1,G2,...` by OpenQASM name (default: "+strings.Join(gen.DefaultGateSet(), ",")+")")
 	seed := c.fs.Int("seed", 1, "seed `S` of the first circuit; circuit i has seed S+i")
 	count := c.fs.Int("count", 1, "write `N` circuits")
 	out := c.fs.String("out", "", "folder `DIR` to write random-SEED.qasm files into (made if missing)")
+	version := c.fs.Int("version", 2, "OpenQASM `VERSION` to write: 2 (2.0) or 3")
 	motifs := c.fs.Int("motifs", 0, "percentage `P` of draws that place a motif (runs, inverse pairs, repeated blocks) instead of one op")
 	if _, code, ok := c.parse(args, 0); !ok {
 		return code
@@ -35,12 +40,18 @@ func random(args []string, stdout, stderr io.Writer) int {
 	switch {
 	case *qubits <= 0:
 		return c.fail("-qubits %d: want at least 1", *qubits)
+	case *qubits > qasm.MaxQubits:
+		return c.fail("-qubits %d: at most %d, the widest register qcheck reads back", *qubits, qasm.MaxQubits)
 	case *gates < 0:
 		return c.fail("-gates %d: want at least 0", *gates)
+	case *gates > maxRandomOps:
+		return c.fail("-gates %d: at most %d ops per circuit (a million take the generator about 13 s and 570 MB)", *gates, maxRandomOps)
 	case *count <= 0:
 		return c.fail("-count %d: want at least 1", *count)
 	case *count > 1 && *out == "":
 		return c.fail("-count %d needs -out DIR", *count)
+	case *version != 2 && *version != 3:
+		return c.fail("-version %d: want 2 or 3", *version)
 	case *motifs < 0 || *motifs > 100:
 		return c.fail("-motifs %d: want a percentage in [0, 100]", *motifs)
 	}
@@ -79,7 +90,11 @@ func random(args []string, stdout, stderr io.Writer) int {
 		if *gates == 0 {
 			circ.Ops = nil
 		}
-		src, err := qasm.Format(circ)
+		format := qasm.Format
+		if *version == 3 {
+			format = qasm.Format3
+		}
+		src, err := format(circ)
 		if err != nil {
 			return c.fail("seed %d: %v", s, err)
 		}
@@ -87,6 +102,9 @@ func random(args []string, stdout, stderr io.Writer) int {
 			*qubits, *gates, strings.Join(opts.GateSet, ","), *motifs, s)
 		if len(opts.GateSet) == 0 {
 			head = fmt.Sprintf("// qcheck random -qubits %d -gates %d -motifs %d -seed %d\n", *qubits, *gates, *motifs, s)
+		}
+		if *version == 3 {
+			head = strings.Replace(head, " -seed ", " -version 3 -seed ", 1)
 		}
 		if *out == "" {
 			fmt.Fprint(stdout, head)
@@ -100,6 +118,30 @@ func random(args []string, stdout, stderr io.Writer) int {
 		fmt.Fprintln(stdout, name)
 	}
 	return exitOK
+}
+
+// maxRandomOps bounds -gates: a million ops take the generator about 13 s and 570 MB on a loaded
+// 2-core machine, and stay well inside the reader's op limit (qasm.DefaultMaxOps), so that every
+// file random writes can be read back.
+const maxRandomOps = 1 << 20
+
+// countFlag is a non-negative count written as an integer or in exponent form (1e6), as people
+// write large counts; a value that is not a whole number, or is out of range, is refused.
+type countFlag int
+
+func (f *countFlag) String() string { return strconv.Itoa(int(*f)) }
+
+func (f *countFlag) Set(s string) error {
+	if n, err := strconv.Atoi(s); err == nil {
+		*f = countFlag(n)
+		return nil
+	}
+	v, err := strconv.ParseFloat(s, 64)
+	if err != nil || v != math.Trunc(v) || math.Abs(v) > 1<<53 {
+		return fmt.Errorf("want a whole number")
+	}
+	*f = countFlag(v)
+	return nil
 }
 
 // draw takes the circuit of the given seed. The generator reports impossible options (an unknown

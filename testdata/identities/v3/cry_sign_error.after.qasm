@@ -1,0 +1,9 @@
+// cry_sign_error (after side, OpenQASM 3 form).
+// Source: NEAR MISS. Barenco et al. Lemma 5.1 for R_y with the second half-angle's sign flipped (a deliberate error).
+OPENQASM 3.0;
+include "stdgates.inc";
+qubit[2] q;
+ry(0.65) q[1];
+ctrl @ x q[0], q[1];
+ry(0.65) q[1];
+ctrl @ x q[0], q[1];

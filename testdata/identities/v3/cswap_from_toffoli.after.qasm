@@ -1,0 +1,8 @@
+// cswap_from_toffoli (after side, OpenQASM 3 form).
+// Source: Nielsen & Chuang, §1.4.1 and Exercise 4.25 (from memory): the Fredkin gate as a Toffoli between two CNOTs.
+OPENQASM 3.0;
+include "stdgates.inc";
+qubit[3] q;
+ctrl @ x q[2], q[1];
+ctrl(2) @ x q[0], q[1], q[2];
+ctrl @ x q[2], q[1];

@@ -1,0 +1,8 @@
+// cy_from_cnot (after side, OpenQASM 3 form).
+// Source: Nielsen & Chuang, §4.3 with Y = S X S†: controlled-Y is a CNOT conjugated by S on the target.
+OPENQASM 3.0;
+include "stdgates.inc";
+qubit[2] q;
+inv @ s q[1];
+ctrl @ x q[0], q[1];
+s q[1];

@@ -1,0 +1,8 @@
+// h_from_rz_sx (after side, OpenQASM 3 form).
+// Source: H = e^{iπ/4} R_z(π/2) √X R_z(π/2), the usual Euler form over rz and sx (common practice, no source).
+OPENQASM 3.0;
+include "stdgates.inc";
+qubit[1] q;
+rz(pi/2) q[0];
+sx q[0];
+rz(pi/2) q[0];

@@ -1,0 +1,8 @@
+// hth_rx (before side, OpenQASM 3 form).
+// Source: Nielsen & Chuang, Exercise 4.14: HTH = R_x(π/4) up to a global phase.
+OPENQASM 3.0;
+include "stdgates.inc";
+qubit[1] q;
+h q[0];
+t q[0];
+h q[0];

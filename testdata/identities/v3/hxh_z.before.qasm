@@ -1,0 +1,8 @@
+// hxh_z (before side, OpenQASM 3 form).
+// Source: Nielsen & Chuang, Exercise 4.14: HXH = Z.
+OPENQASM 3.0;
+include "stdgates.inc";
+qubit[1] q;
+h q[0];
+x q[0];
+h q[0];

@@ -1,0 +1,8 @@
+// hzh_x (before side, OpenQASM 3 form).
+// Source: Nielsen & Chuang, Exercise 4.14: HZH = X.
+OPENQASM 3.0;
+include "stdgates.inc";
+qubit[1] q;
+h q[0];
+z q[0];
+h q[0];

@@ -1,0 +1,6 @@
+// sh_cubed_identity (after side, OpenQASM 3 form).
+// Source: Clifford group relation (SH)³ = e^{iπ/4} I (from memory; checkable by hand, common practice).
+OPENQASM 3.0;
+include "stdgates.inc";
+qubit[1] q;
+id q[0];

@@ -1,0 +1,6 @@
+// swap_three_cnots (before side, OpenQASM 3 form).
+// Source: Nielsen & Chuang, §1.3.4 and Fig. 1.7: SWAP from three alternating CNOTs.
+OPENQASM 3.0;
+include "stdgates.inc";
+qubit[2] q;
+swap q[0], q[1];

@@ -1,0 +1,7 @@
+// sx_squared_x (before side, OpenQASM 3 form).
+// Source: √X squared is X (definition of sx, DESIGN.md; common practice).
+OPENQASM 3.0;
+include "stdgates.inc";
+qubit[1] q;
+sx q[0];
+sx q[0];

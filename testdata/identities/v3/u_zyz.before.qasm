@@ -1,0 +1,6 @@
+// u_zyz (before side, OpenQASM 3 form).
+// Source: Nielsen & Chuang, Theorem 4.1 (Z-Y decomposition): u(θ,φ,λ) = e^{i(φ+λ)/2} R_z(φ) R_y(θ) R_z(λ).
+OPENQASM 3.0;
+include "stdgates.inc";
+qubit[1] q;
+U(1.1,0.3,-0.8) q[0];
