@@ -67,3 +67,16 @@ func BenchmarkVolume(b *testing.B) {
 		}
 	}
 }
+
+// BenchmarkMidWidth: random two-qubit-block circuits of about 1,000 gates at 12 to 22 qubits, the
+// range where the dense and matrix-free engines are slow, rewritten, and with one changed angle.
+func BenchmarkMidWidth(b *testing.B) {
+	for _, n := range []int{12, 16, 22} {
+		depth := 1000 / (5 * n)
+		c := volume(n, depth, rand.New(rand.NewPCG(uint64(n), 10)))
+		v := rewritten(c, 8)
+		b.Run(fmt.Sprint(n, "/equivalent"), func(b *testing.B) { benchPair(b, c, v, Equivalent) })
+		w := rewritten(bug(c, 0, 0.3, rand.New(rand.NewPCG(uint64(n), 12))), 8)
+		b.Run(fmt.Sprint(n, "/angle"), func(b *testing.B) { benchPair(b, c, w, Different) })
+	}
+}

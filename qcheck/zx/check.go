@@ -199,6 +199,18 @@ func (r Result) Lower() float64 {
 	return max(0, r.Distance-r.Bound-roundingAllowance)
 }
 
+// Upper returns the proved upper bound on D: Bound for Equivalent, Distance plus its uncertainty
+// when the distance is known, and +Inf otherwise.
+func (r Result) Upper() float64 {
+	switch {
+	case r.Verdict == Equivalent:
+		return r.Bound
+	case r.Known:
+		return r.Distance + r.Bound + roundingAllowance
+	}
+	return math.Inf(1)
+}
+
 // components splits the wires by the connected parts of the remainder that join them. If
 // V†U = c·(W_1 ⊗ … ⊗ W_m) on those parts, the eigenphases of V†U are, up to the global phase,
 // the sums of one eigenphase of each W_j.
