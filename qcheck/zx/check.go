@@ -3,6 +3,7 @@ package zx
 import (
 	"fmt"
 	"math"
+	"slices"
 
 	"gonum.org/v1/gonum/mat"
 	"qcheck.dev/metric"
@@ -98,18 +99,22 @@ func Check(u, v *circuit.Circuit, opts Options) (Result, error) {
 	if opts.Budget == 0 {
 		opts.Budget = 200
 	}
-	r, hi, err := check(u, v, 0, opts)
-	if err != nil || r.Verdict != Undecided || hi < 0 {
+	r, from, err := check(u, v, 0, opts)
+	if err != nil || r.Verdict != Undecided || len(from) == 0 {
 		return r, err
 	}
 	// V†U did not reduce. If the circuits differ by a local change at op i of U, the diagram of V†U
 	// keeps U's ops before i (and V's), conjugating the change; the latest op of U still present,
 	// hi, is about i. Cutting U there puts both halves of each circuit next to their partner, and
-	// U[:cut]·V†·U[cut:] has the spectrum, hence the distance, of V†U.
-	for _, cut := range []int{hi, hi + 1} {
-		if cut <= 0 || cut > len(u.Ops) {
+	// U[:cut]·V†·U[cut:] has the spectrum, hence the distance, of V†U. Fusion can carry later ops'
+	// marks into the remainder, so a few cuts at quantiles of the ops still present follow.
+	hi := from[len(from)-1]
+	tried := map[int]bool{}
+	for _, cut := range []int{hi, hi + 1, from[len(from)/2], from[len(from)/4], from[3*len(from)/4], from[len(from)/10]} {
+		if cut <= 0 || cut > len(u.Ops) || tried[cut] {
 			continue
 		}
+		tried[cut] = true
 		rc, _, err := check(u, v, cut, opts)
 		if err != nil {
 			return r, err
@@ -122,16 +127,16 @@ func Check(u, v *circuit.Circuit, opts Options) (Result, error) {
 	return r, nil
 }
 
-// check simplifies the diagram of U[:cut]·V†·U[cut:] and returns the verdict and the latest op of
-// U that a spider still joined to the wires came from (−1 if none).
-func check(u, v *circuit.Circuit, cut int, opts Options) (Result, int, error) {
+// check simplifies the diagram of U[:cut]·V†·U[cut:] and returns the verdict and, sorted, the
+// latest op of U that each spider still joined to the wires came from.
+func check(u, v *circuit.Circuit, cut int, opts Options) (Result, []int, error) {
 	g, err := miter(u, v, cut, opts.Tol)
 	if err != nil {
-		return Result{}, -1, err
+		return Result{}, nil, err
 	}
 	done := g.simplify(opts.Budget * (len(g.v) + 1))
 	r := Result{Bound: g.bound()}
-	hi := -1
+	var hi []int
 	for _, x := range g.alive() {
 		if g.isSpider(x) {
 			r.Spiders++
@@ -146,7 +151,7 @@ func check(u, v *circuit.Circuit, cut int, opts Options) (Result, int, error) {
 		r.Verdict = Equivalent
 		return r, hi, nil
 	}
-	hi = g.latest(r.Support)
+	hi = g.origins(r.Support)
 	groups := g.components(r.Support)
 	var spectra [][]float64
 	for _, wires := range groups {
@@ -255,9 +260,9 @@ func (g *graph) components(wires []int) [][]int {
 	return out
 }
 
-// latest returns the largest from of the spiders joined to the given wires.
-func (g *graph) latest(wires []int) int {
-	hi := -1
+// origins returns, sorted, the from marks (≥ 0) of the spiders joined to the given wires.
+func (g *graph) origins(wires []int) []int {
+	var out []int
 	seen := map[int]bool{}
 	var stack []int
 	for _, q := range wires {
@@ -270,14 +275,15 @@ func (g *graph) latest(wires []int) int {
 			continue
 		}
 		seen[x] = true
-		if g.isSpider(x) {
-			hi = max(hi, g.v[x].from)
+		if g.isSpider(x) && g.v[x].from >= 0 {
+			out = append(out, g.v[x].from)
 		}
 		for w := range g.v[x].nbr {
 			stack = append(stack, w)
 		}
 	}
-	return hi
+	slices.Sort(out)
+	return out
 }
 
 // bound is the proved bound on the distance the rewriting may have hidden: half the residuals

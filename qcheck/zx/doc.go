@@ -81,6 +81,9 @@
 // not shrink. Check then cuts U after the latest of its ops still present in the remainder, at k,
 // and simplifies U[:k]·V†·U[k:] (the ops of U from k, the inverse of V, then the first k ops of U),
 // which equals U1·(V†U)·U1† for U1 the first k ops: the same spectrum, hence the same distance,
-// and both halves of each circuit now meet their partner. Otherwise the answer is Undecided with
+// and both halves of each circuit now meet their partner. Because fusion can carry a later op's
+// mark into the remainder, a few further cuts, at quantiles of the ops of U still present, are
+// tried; the same cuts let an equivalent pair whose middle did not cancel first be proved.
+// Otherwise the answer is Undecided with
 // the size of what is left; the package never says "different" without the computed distance.
 package zx
