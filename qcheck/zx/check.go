@@ -64,9 +64,9 @@ type Result struct {
 	Support []int
 	// Spiders is the number of spiders left in the simplified diagram (scalar parts included).
 	Spiders int
-	// Cut is the number of ops of U (of U's window, from Compare) moved to the end of the product when V†U itself did not reduce
-	// (see Check); Support is then in the frame of U[:Cut]·V†·U[Cut:], which has the spectrum of
-	// V†U.
+	// Cut is the number of ops of U (of U's window, from Compare) moved to the end of the product
+	// when V†U itself did not reduce (see Check); Support is then in the frame of
+	// U[:Cut]·V†·U[Cut:], which has the spectrum of V†U.
 	Cut int
 	// Reason says why the verdict is Undecided.
 	Reason string
