@@ -12,7 +12,7 @@ import (
 
 // Dense check of Clifford circuits, independent of the generator: gate
 // matrices from Nielsen & Chuang (§4.2 and Fig. 4.3), the convention of
-// DESIGN.md (qubit 0 is the least significant bit of a basis index; cx's
+// package circuit's documentation (qubit 0 is the least significant bit of a basis index; cx's
 // first operand is the control).
 
 var oneQubit = map[string][4]complex128{ // row-major 2×2

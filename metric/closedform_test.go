@@ -17,7 +17,7 @@ func near(t *testing.T, what string, got, want, tol float64) {
 }
 
 // Rz(θ) = diag(e^{−iθ/2}, e^{iθ/2}) against I: eigenphases ±θ/2, so
-// PhaseDistance = 2 sin(|θ|/4) for |θ| ≤ π (DESIGN.md; issue 3). For
+// PhaseDistance = 2 sin(|θ|/4) for |θ| ≤ π (the package documentation; issue 3). For
 // π < |θ| ≤ 2π the other arc between the two eigenphases, 2π − |θ|, is the
 // shorter one, so the value is 2 sin((2π − |θ|)/4): Rz(2π) = −I is I up to
 // phase. (Issue 3 states the first form up to 2π; worked by hand, it holds

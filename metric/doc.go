@@ -10,6 +10,31 @@
 // StateFidelity and TraceDistance compare states. EquateUnitaries and
 // EquateStates turn these into go-cmp options for cmp.Diff in tests.
 //
+// # Mathematics
+//
+// For unitaries U and V, let θ be the length of the shortest arc of the unit circle that holds
+// every eigenphase of V†U. Then
+//
+//	min over φ of ‖U − e^{iφ}·V‖ = 2·sin(θ/4)         (PhaseDistance)
+//	diamond distance = 2·sin(θ/2) for θ < π, else 2     (Diamond)
+//
+// The first minimum is attained at φ the midpoint of the arc (PhaseAlign): ‖U − e^{iφ}·V‖ is
+// ‖e^{−iφ}·V†U − I‖, a normal matrix whose eigenvalues e^{iα} − 1 have modulus 2·sin(|α|/2), and
+// every α lies within θ/2 of 0 at that φ. The second is Watrous's theorem on unitary channels
+// (The Theory of Quantum Information, 2018, chapter 3). rz(θ) against the identity
+// has eigenphases ∓θ/2, so its phase-free distance is 2·sin(|θ|/4) for |θ| ≤ π. Errors of
+// unitary factors add at most linearly, and for any state and measurement
+//
+//	|P_U(outcome) − P_V(outcome)| ≤ 2·‖U − V‖
+//
+// (Nielsen & Chuang §4.5.3); the phase of each factor may be chosen on its own, so the same holds
+// with the phase-free distance. Average gate fidelity and process fidelity of d-dimensional
+// unitaries are
+//
+//	F_avg = (d + |tr U†V|²) / (d·(d + 1)),   F_pro = |tr U†V|² / d²
+//
+// (Nielsen, Phys. Lett. A 303 (2002), for the first).
+//
 // # Inputs and programmer errors
 //
 // Matrices are gonum mat.CMatrix values; pure states are []complex128 holding

@@ -155,7 +155,7 @@ func gate(a, b, c, d complex128) *mat.CDense {
 	return mat.NewCDense(2, 2, []complex128{a, b, c, d})
 }
 
-// Textbook gates (Nielsen & Chuang §4.2; rz as exp(−iθZ/2) as in DESIGN.md).
+// Textbook gates (Nielsen & Chuang §4.2; rz as exp(−iθZ/2) as in package circuit's conventions).
 var (
 	gateX = gate(0, 1, 1, 0)
 	gateY = gate(0, -1i, 1i, 0)

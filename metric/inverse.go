@@ -87,8 +87,9 @@ func inverseIteration(d, e []float64, lambda float64, prev [][]float64) []float6
 	}
 	// The last solve makes y nearly parallel to prev when λ sits in a
 	// cluster, so one projection cancels most of y and leaves its rounding
-	// along prev; a second one removes that ("twice is enough": Parlett, The
-	// Symmetric Eigenvalue Problem, §6-9, from memory).
+	// along prev; a second one removes that (Parlett's "twice is enough"
+	// for Gram–Schmidt, from his book The Symmetric Eigenvalue Problem; the
+	// tests of Witness check the orthogonality it gives).
 	for range 2 {
 		project(y, prev)
 		normalize(y)

@@ -48,7 +48,8 @@ func PhaseAlign(u, v mat.CMatrix) (dist, phase float64) {
 // Diamond returns the diamond-norm distance between the unitary channels
 // ρ ↦ uρu† and ρ ↦ vρv†: 2·sqrt(1 − ν²), with ν the distance from 0 to the
 // convex hull of the eigenvalues of u†v (Watrous, The Theory of Quantum
-// Information, 2018, chapter 3; the theorem is 3.55 if memory serves). With θ the shortest arc holding the eigenphases,
+// Information, 2018, chapter 3, the theorem on the diamond distance of two
+// unitary channels). With θ the shortest arc holding the eigenphases,
 // ν = cos(θ/2) when θ < π, so the distance is 2·sin(θ/2); otherwise the hull
 // holds 0 and the channels can be told apart perfectly: the distance is 2.
 // It ignores global phase, as channels do.

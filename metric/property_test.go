@@ -65,7 +65,7 @@ func TestPropertyProbabilityBound(t *testing.T) {
 
 // Nielsen & Chuang §4.5.3: ‖U_N⋯U_1 − V_N⋯V_1‖ ≤ Σ‖U_k − V_k‖, and
 // the same for the phase-free distance, since each factor's phase may be
-// chosen separately (DESIGN.md).
+// chosen separately (the package documentation).
 func TestPropertyErrorsAddUp(t *testing.T) {
 	rapid.Check(t, func(t *rapid.T) {
 		n := 1 << rapid.IntRange(1, 3).Draw(t, "qubits")

@@ -7,7 +7,8 @@ import (
 )
 
 // StateDistance returns the trace distance ½‖|a⟩⟨a| − |b⟩⟨b|‖₁ of two pure
-// states, sqrt(1 − |⟨a|b⟩|²) (Nielsen & Chuang §9.2, from memory). It bounds how much
+// states, sqrt(1 − |⟨a|b⟩|²): the difference of the two projectors has rank
+// two and, in the plane of a and b, eigenvalues ±sqrt(1 − |⟨a|b⟩|²). It bounds how much
 // any measurement's outcome probabilities can differ between the two states.
 // The vectors are normalised first, so only their directions matter; global
 // phase does not count. It is computed as the length of the part of b̂
@@ -37,7 +38,8 @@ func StateFidelity(a, b []complex128) float64 {
 }
 
 // TraceDistance returns ½‖ρ − σ‖₁, half the sum of the absolute eigenvalues
-// of ρ − σ, for two n×n density matrices (Nielsen & Chuang §9.2.1, from memory). It is the
+// of ρ − σ, for two n×n density matrices (the trace distance of Nielsen &
+// Chuang's chapter on distance measures). It is the
 // largest difference in probability that any measurement can show between
 // them. Both are trusted to be Hermitian; their difference is symmetrised
 // before its eigenvalues are taken.

@@ -27,7 +27,7 @@ func TestOperatorNormOfWidelyScaledEntries(t *testing.T) {
 	}
 }
 
-// rx and ry are exp(−iθX/2) and exp(−iθY/2) (DESIGN.md; Nielsen & Chuang §4.2).
+// rx and ry are exp(−iθX/2) and exp(−iθY/2) (package circuit's conventions; Nielsen & Chuang §4.2).
 func rx(theta float64) *mat.CDense {
 	c, s := math.Cos(theta/2), math.Sin(theta/2)
 	return gate(complex(c, 0), complex(0, -s), complex(0, -s), complex(c, 0))
@@ -39,7 +39,7 @@ func ry(theta float64) *mat.CDense {
 }
 
 // onQubit returns the 2^n×2^n matrix of the 2×2 gate g on qubit q, qubit 0
-// being the least significant bit of the index (DESIGN.md): the Kronecker
+// being the least significant bit of the index (package circuit's conventions): the Kronecker
 // product with g at place q counted from the right.
 func onQubit(g *mat.CDense, q, n int) *mat.CDense {
 	m := identity(1)
@@ -54,7 +54,7 @@ func onQubit(g *mat.CDense, q, n int) *mat.CDense {
 }
 
 // cx returns the 2^n×2^n matrix of CX with control c and target t: it flips
-// bit t of the index where bit c is set (DESIGN.md).
+// bit t of the index where bit c is set (package circuit's conventions).
 func cx(c, t, n int) *mat.CDense {
 	m := mat.NewCDense(1<<n, 1<<n, nil)
 	for x := 0; x < 1<<n; x++ {
@@ -73,7 +73,7 @@ func cx(c, t, n int) *mat.CDense {
 // hand: up to the tiny rotations the pair is CX against CX·T on q[2], so
 // V†U = T† on q[2]: eigenphases 0 and −π/4 (Nielsen & Chuang §4.2). Hence
 // ‖U − V‖ = |1 − e^{iπ/4}| = 2 sin(π/8), PhaseDistance = 2 sin(π/16) (arc
-// π/4, DESIGN.md), Diamond = 2 sin(π/8), the witness reaches PhaseDistance
+// π/4, the package documentation), Diamond = 2 sin(π/8), the witness reaches PhaseDistance
 // (arc below π), and U's eigenphases are CX's {0, 0, 0, π} twice. The tiny
 // rotations move each value by at most |θ| (each is within |θ|/2 of I in
 // norm, Nielsen & Chuang §4.5.3).

@@ -19,31 +19,19 @@ const (
 func blame(cfg *config, f *frame, want, got *circuit.Circuit) Blame {
 	b := Blame{FirstDiff: -1}
 	wo, gops := want.Ops, got.Ops
-	pre, suf := commonEnds(wo, gops)
+	pre, suf := circuit.CommonEnds(want, got)
 	if pre == len(wo) && pre == len(gops) {
 		return b
 	}
 	b.Found = true
 	b.FirstDiff = pre
-	b.WantOps = [2]int{pre, len(wo) - suf}
-	b.GotOps = [2]int{pre, len(gops) - suf}
+	b.WantOps = circuit.Span{Start: pre, End: len(wo) - suf}
+	b.GotOps = circuit.Span{Start: pre, End: len(gops) - suf}
 	if len(wo) == len(gops) && f.data == nil && f.perm == nil && f.anc == nil && f.measured == nil &&
 		f.m <= blameMaxQubits && len(wo) <= blameMaxOps {
 		b.Prefix = firstDifferingPrefix(cfg, f.m, wo, gops, pre)
 	}
 	return b
-}
-
-// commonEnds returns the lengths of the longest common start and, in what is left, the longest
-// common end of two op lists.
-func commonEnds(a, b []circuit.Op) (pre, suf int) {
-	for pre < len(a) && pre < len(b) && a[pre].Equal(b[pre]) {
-		pre++
-	}
-	for suf < len(a)-pre && suf < len(b)-pre && a[len(a)-1-suf].Equal(b[len(b)-1-suf]) {
-		suf++
-	}
-	return pre, suf
 }
 
 // firstDifferingPrefix returns the smallest k such that the first k ops of got differ beyond the

@@ -22,7 +22,7 @@ type isometryFit struct {
 //
 // For isometries, (X − e^{iθ}Y)†(X − e^{iθ}Y) = 2I − (e^{−iθ}M + e^{iθ}M†) with M = Y†X, so
 // ‖X − e^{iθ}Y‖² = 2 − 2·λ_min(H(θ)), H(θ) = (e^{−iθ}M + e^{iθ}M†)/2. When M is unitary this is
-// the eigenphase formula of DESIGN.md; when got leaks into the ancillas M is not even normal, so
+// the eigenphase formula of package metric (PhaseAlign); when got leaks into the ancillas M is not even normal, so
 // θ is found by maximising λ_min(H(θ)): a grid, a golden-section search in the best cell, and
 // then the fixed point θ = arg(x†Mx) of the minimising eigenvector x, which holds at the optimum
 // (there x†Mx is the point of M's numerical range nearest to 0). Every θ tried gives an upper
@@ -197,53 +197,31 @@ func quadForm(m, x []complex128) complex128 {
 	return s
 }
 
-// hermitianMin finds the smallest eigenvalue and an eigenvector of H(θ) = (e^{−iθ}M + e^{iθ}M†)/2
-// with gonum's symmetric eigensolver on the real embedding [[A, −B], [B, A]] of H = A + iB,
-// which has each eigenvalue of H twice (DESIGN.md, "Numerics").
+// hermitianMin finds the smallest eigenvalue and a unit eigenvector of
+//
+//	H(θ) = (e^{−iθ}·M + e^{iθ}·M†)/2
+//
+// for a row-major d × d matrix M, with package metric's Hermitian solver.
 type hermitianMin struct {
-	d   int
-	sym *mat.SymDense
-	eig mat.EigenSym
-	vec mat.Dense
+	d int
+	h *mat.CDense
 }
 
 func newHermitianMin(d int) *hermitianMin {
-	return &hermitianMin{d: d, sym: mat.NewSymDense(2*d, nil)}
+	return &hermitianMin{d: d, h: mat.NewCDense(d, d, nil)}
 }
 
 func (h *hermitianMin) min(m []complex128, theta float64) (float64, []complex128) {
 	d := h.d
 	ph := cmplx.Exp(complex(0, -theta))
 	for a := 0; a < d; a++ {
-		for b := a; b < d; b++ {
-			z := (ph*m[a*d+b] + cmplx.Conj(ph*m[b*d+a])) / 2
-			re, im := real(z), imag(z)
-			h.sym.SetSym(a, b, re)
-			h.sym.SetSym(d+a, d+b, re)
-			// Off-diagonal block B at (d+a, b) and −B at (a, d+b); B is antisymmetric.
-			h.sym.SetSym(d+a, b, im)
-			h.sym.SetSym(a, d+b, -im)
-			if a != b {
-				h.sym.SetSym(d+b, a, -im)
-				h.sym.SetSym(b, d+a, im)
-			}
+		for b := 0; b <= a; b++ {
+			h.h.Set(a, b, (ph*m[a*d+b]+cmplx.Conj(ph*m[b*d+a]))/2)
 		}
 	}
-	if !h.eig.Factorize(h.sym, true) {
-		return math.Inf(-1), make([]complex128, d)
+	lam, x := metric.LowestEigen(h.h)
+	if math.IsNaN(lam) {
+		return math.Inf(-1), x
 	}
-	vals := h.eig.Values(nil)
-	h.eig.VectorsTo(&h.vec)
-	// The real embedding's eigenvector (r; s) is the complex eigenvector r + i·s.
-	x := make([]complex128, d)
-	norm := 0.0
-	for a := 0; a < d; a++ {
-		x[a] = complex(h.vec.At(a, 0), h.vec.At(d+a, 0))
-		norm += abs2(x[a])
-	}
-	norm = math.Sqrt(norm)
-	for a := range x {
-		x[a] /= complex(norm, 0)
-	}
-	return vals[0], x
+	return lam, x
 }

@@ -1,10 +1,6 @@
 package qcheck
 
-import (
-	"fmt"
-
-	"qcheck.dev/qcheck/circuit"
-)
+import "qcheck.dev/qcheck/circuit"
 
 // Compare computes how far got is from want and whether that is within the tolerance. By default
 // it compares the unitaries of two circuits of the same width in operator norm up to a global
@@ -40,8 +36,8 @@ func compare(cfg *config, want, got *circuit.Circuit, full bool) (Result, error)
 		Measure:    cfg.measure,
 		Tolerance:  cfg.tol,
 		ExactPhase: cfg.exactPhase,
-		Engine:     eng,
-		Certifies:  certifies(eng, f),
+		Engine:     eng.name(),
+		Certifies:  eng.certifies(cfg, f),
 		Want:       want,
 		Got:        got,
 		Options:    cfg.describe(),
@@ -49,17 +45,7 @@ func compare(cfg *config, want, got *circuit.Circuit, full bool) (Result, error)
 		Measured:   f.measured,
 		Bits:       f.bits,
 	}
-	switch eng {
-	case Dense:
-		err = compareDense(cfg, f, &r, full)
-	case Tableau:
-		err = compareTableau(cfg, f, &r)
-	case MatrixFree:
-		err = compareMatrixFree(cfg, f, &r, full)
-	default:
-		err = fmt.Errorf("qcheck: engine %v is not wired into Compare", eng)
-	}
-	if err != nil {
+	if err := eng.compare(cfg, f, &r, full); err != nil {
 		return Result{}, err
 	}
 	return r, nil

@@ -22,7 +22,7 @@ func mustCompare(t *testing.T, want, got *circuit.Circuit, opts ...Option) Resul
 	return r
 }
 
-// p(θ) = e^{iθ/2}·rz(θ) (DESIGN.md, gate definitions): equal up to global phase, and
+// p(θ) = e^{iθ/2}·rz(θ) (package circuit's gate definitions): equal up to global phase, and
 // ‖p(θ) − rz(θ)‖ = |1 − e^{−iθ/2}| = 2|sin(θ/4)| with the phase fixed (derived by hand from the
 // two diagonal matrices).
 func TestGlobalPhaseOnly(t *testing.T) {
@@ -45,7 +45,7 @@ func TestGlobalPhaseOnly(t *testing.T) {
 	}
 }
 
-// Closed forms for rz(θ) against the identity (eigenvalues e^{∓iθ/2}, DESIGN.md "Mathematics"):
+// Closed forms for rz(θ) against the identity (eigenvalues e^{∓iθ/2}, package metric's documentation):
 // phase-free distance 2 sin(θ/4), diamond distance 2 sin(θ/2), average fidelity
 // (2 + 4cos²(θ/2))/6 by Nielsen's formula (d + |tr U†V|²)/(d(d+1)).
 func TestMeasuresClosedForm(t *testing.T) {
@@ -99,7 +99,8 @@ func TestBadInput(t *testing.T) {
 		{"exact phase with diamond", c2, c2, []Option{ExactPhase(), UseMeasure(Diamond)}, "ExactPhase with the diamond norm"},
 		{"measure ops without Measured", circuit.New(1).H(0).Measure(0, 0), circuit.New(1).H(0).Measure(0, 0), nil, "op 1 (measure): not a unitary"},
 		{"unknown measure", c2, c2, []Option{UseMeasure(Measure(42))}, "UseMeasure(Measure(42))"},
-		{"too wide for auto", circuit.New(25).T(0), circuit.New(25).T(0), nil, "25 qubits is too wide for the dense engine (up to 12) and the matrix-free engine (up to 22), and the tableau engine cannot answer: want is not"},
+		{"too wide for auto", circuit.New(25).T(0), circuit.New(25).T(0), nil, "25 qubits is wider than the dense engine takes automatically (12); tableau: want is not a circuit the tableau engine can answer for"},
+		{"too wide for auto, matrix-free", circuit.New(25).T(0), circuit.New(25).T(0), nil, "matrix-free: 25 qubits is wider than the matrix-free engine takes automatically (22)"},
 		{"measured at width", circuit.New(13).T(0), circuit.New(13).T(0), []Option{Measured(0)}, "13 qubits is wider than the dense engine"},
 	}
 	for _, tc := range cases {
@@ -294,8 +295,23 @@ func TestEngine(t *testing.T) {
 	if r.Engine != Dense || r.Certifies == "" {
 		t.Errorf("engine %v, certifies %q", r.Engine, r.Certifies)
 	}
-	if _, err := Compare(circuit.New(1), circuit.New(1), UseEngine(Engine(9))); err == nil {
+	if _, err := Compare(circuit.New(1), circuit.New(1), UseEngine(Engine("nine"))); err == nil {
 		t.Error("unknown engine accepted")
+	}
+	// Every engine of the table is reachable by its name, and answers a comparison it takes.
+	for _, eng := range engines {
+		var e Engine
+		if err := e.UnmarshalText([]byte(eng.name())); err != nil || e != eng.name() {
+			t.Errorf("%s: read back as %q, %v", eng.name(), e, err)
+		}
+		r := mustCompare(t, circuit.New(2).H(0).CX(0, 1), circuit.New(2).H(0).CX(0, 1), UseEngine(e))
+		if r.Engine != e || !r.Equivalent {
+			t.Errorf("%s: engine %v, equivalent %v", e, r.Engine, r.Equivalent)
+		}
+	}
+	var e Engine
+	if err := e.UnmarshalText([]byte("fast")); err == nil || !strings.Contains(err.Error(), "choose auto, dense") {
+		t.Errorf("unknown name read as %q, %v", e, err)
 	}
 }
 
@@ -303,14 +319,14 @@ func TestBlamePrefix(t *testing.T) {
 	want := circuit.New(2).H(0).CX(0, 1).T(1).H(1)
 	got := circuit.New(2).H(0).CX(0, 1).Tdg(1).H(1)
 	b := mustCompare(t, want, got).Blame
-	if b.FirstDiff != 2 || b.WantOps != [2]int{2, 3} || b.GotOps != [2]int{2, 3} || b.Prefix != 3 {
+	if b.FirstDiff != 2 || b.WantOps != (circuit.Span{Start: 2, End: 3}) || b.GotOps != (circuit.Span{Start: 2, End: 3}) || b.Prefix != 3 {
 		t.Errorf("blame %+v", b)
 	}
 	// After a reordering the first prefixes already differ, though the whole would not without
 	// the final change: the prefix blame points at the first differing op, as it is defined to.
 	want = circuit.New(2).Z(0).X(1).T(1)
 	got = circuit.New(2).X(1).Z(0).Tdg(1)
-	if b := mustCompare(t, want, got).Blame; b.Prefix != 1 || b.FirstDiff != 0 || b.WantOps != [2]int{0, 3} {
+	if b := mustCompare(t, want, got).Blame; b.Prefix != 1 || b.FirstDiff != 0 || b.WantOps != (circuit.Span{Start: 0, End: 3}) {
 		t.Errorf("blame %+v", b)
 	}
 	if b := mustCompare(t, want, want).Blame; b.Found || b.FirstDiff != -1 {

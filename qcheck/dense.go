@@ -3,13 +3,44 @@ package qcheck
 import (
 	"fmt"
 	"math"
-	"math/cmplx"
 
 	"gonum.org/v1/gonum/mat"
 	"qcheck.dev/metric"
 	"qcheck.dev/qcheck/circuit"
 	"qcheck.dev/qcheck/sim"
 )
+
+// denseAuto is the widest register Auto gives to the dense engine: two 2^12 × 2^12 unitaries take
+// 512 MiB and a few seconds.
+const denseAuto = 12
+
+// denseEngine builds both unitaries as full matrices (package sim's Unitary) and compares them
+// with package metric: every measure, exact phase, clean and dirty ancillas and measured
+// distributions, exact to floating-point rounding. Its width is limited by memory (16·4^n bytes
+// a matrix); Auto gives it registers up to denseAuto qubits.
+type denseEngine struct{}
+
+var _ engine = denseEngine{}
+
+func (denseEngine) name() Engine { return Dense }
+
+func (denseEngine) refuses(cfg *config, f *frame, auto bool) error {
+	if auto && f.m > denseAuto {
+		return fmt.Errorf("%d qubits is wider than the dense engine takes automatically (%d)", f.m, denseAuto)
+	}
+	return nil
+}
+
+func (denseEngine) certifies(cfg *config, f *frame) string {
+	if f.measured != nil {
+		return "certified from exact unitaries: the total-variation distance is an upper bound on the largest over all inputs when equivalent (from the part of U·V† that moves probability between outcomes) and a distance found on an input when not"
+	}
+	return "exact: both full unitaries, to floating-point rounding"
+}
+
+func (denseEngine) compare(cfg *config, f *frame, r *Result, full bool) error {
+	return compareDense(cfg, f, r, full)
+}
 
 // densePair holds the two unitaries of a dense comparison on got's register: u of want (moved
 // onto got's register) and v of got (with its output permutation undone), both row-major
@@ -111,13 +142,12 @@ func compareDense(cfg *config, f *frame, r *Result, full bool) error {
 // on the windows is a verdict on the circuits, at the cost of the ops a pass actually changed.
 // It applies on one register without output permutation, ancillas or measurement.
 func differingWindows(want, got *circuit.Circuit) (*circuit.Circuit, *circuit.Circuit, bool) {
-	wo, gops := want.Ops, got.Ops
-	pre, suf := commonEnds(wo, gops)
+	pre, suf := circuit.CommonEnds(want, got)
 	if pre == 0 && suf == 0 {
 		return want, got, false
 	}
 	a, b := circuit.New(want.Qubits()), circuit.New(got.Qubits())
-	a.Ops, b.Ops = wo[pre:len(wo)-suf], gops[pre:len(gops)-suf]
+	a.Ops, b.Ops = want.Ops[pre:want.Len()-suf], got.Ops[pre:got.Len()-suf]
 	return a, b, true
 }
 
@@ -178,26 +208,12 @@ func (p *densePair) deviation(psi []complex128) float64 {
 }
 
 func (p *densePair) deviationOf(a, b []complex128) float64 {
-	if p.exact {
-		s := 0.0
-		for i := range a {
-			s += abs2(a[i] - b[i])
-		}
-		return math.Sqrt(s)
-	}
-	// The best phase is that of ⟨b|a⟩; the difference is formed directly rather than through
-	// 2 − 2|⟨a|b⟩|, which loses all digits of distances near 1e-8.
-	var overlap complex128
-	for i := range a {
-		overlap += cmplx.Conj(b[i]) * a[i]
-	}
-	ph := complex(1, 0)
-	if overlap != 0 {
-		ph = overlap / complex(cmplx.Abs(overlap), 0)
+	if !p.exact {
+		return metric.AlignedDistance(a, b)
 	}
 	s := 0.0
 	for i := range a {
-		s += abs2(a[i] - ph*b[i])
+		s += abs2(a[i] - b[i])
 	}
 	return math.Sqrt(s)
 }
@@ -260,61 +276,21 @@ func (p *densePair) allowed(x int) bool { return !p.f.clean || x&p.f.ancMask == 
 // probabilities differ most, or, when relative phases hide the difference from the
 // computational basis, the projection of the witness's output onto want's output.
 func (p *densePair) measurement(psi []complex128) Measurement {
-	best := Measurement{InputBasis: -1}
-	bestGap := -1.0
+	gap := newLargestGap()
 	for x := 0; x < p.dim; x++ {
 		if !p.allowed(x) {
 			continue
 		}
 		for y := 0; y < p.dim; y++ {
-			pu, pv := abs2(p.ud[y*p.dim+x]), abs2(p.vd[y*p.dim+x])
-			if g := math.Abs(pu - pv); g > bestGap+1e-12 {
-				bestGap = g
-				best = Measurement{InputBasis: x, Basis: true, Outcome: y, Want: pu, Got: pv}
-			}
+			gap.offer(nil, x, y, abs2(p.ud[y*p.dim+x]), abs2(p.vd[y*p.dim+x]))
 		}
 	}
-	if best.InputBasis >= 0 {
-		best.Input = basisState(p.dim, best.InputBasis)
-	}
+	gap.fillBasisInput(p.dim)
 	if psi == nil {
-		return best
+		return gap.best
 	}
-	return outputMeasurement(psi, apply(p.ud, p.dim, psi), apply(p.vd, p.dim, psi), best, bestGap)
+	return outputMeasurement(psi, apply(p.ud, p.dim, psi), apply(p.vd, p.dim, psi), &gap)
 }
-
-// outputMeasurement improves on best, whose outcome probabilities differ by bestGap, with the
-// measurements of a and b, the outputs of want and got on the input psi: the computational-basis
-// outcome whose probabilities differ most, or the test whether the output is want's output state
-// when that tells them apart better. When nothing tells them apart (only a global phase
-// separates the circuits), it returns a Measurement with no Input.
-func outputMeasurement(psi, a, b []complex128, best Measurement, bestGap float64) Measurement {
-	for y := range a {
-		pu, pv := abs2(a[y]), abs2(b[y])
-		if g := math.Abs(pu - pv); g > bestGap+1e-12 {
-			bestGap = g
-			best = Measurement{Input: psi, InputBasis: -1, Basis: true, Outcome: y, Want: pu, Got: pv}
-		}
-	}
-	var overlap complex128
-	for y := range a {
-		overlap += cmplx.Conj(a[y]) * b[y]
-	}
-	norm := 0.0
-	for _, z := range a {
-		norm += abs2(z)
-	}
-	if proj := abs2(overlap) / norm; 1-proj > 2*bestGap {
-		best, bestGap = Measurement{Input: psi, InputBasis: -1, Want: 1, Got: proj}, 1-proj
-	}
-	if bestGap < indistinguishable {
-		return Measurement{InputBasis: -1}
-	}
-	return best
-}
-
-// indistinguishable is the probability difference below which no measurement is reported.
-const indistinguishable = 1e-12
 
 func abs2(z complex128) float64 { return real(z)*real(z) + imag(z)*imag(z) }
 

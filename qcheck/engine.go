@@ -2,102 +2,134 @@ package qcheck
 
 import (
 	"fmt"
-
-	"qcheck.dev/qcheck/circuit"
-	"qcheck.dev/qcheck/sim"
+	"strings"
 )
 
-// denseAuto is the widest register Auto gives to the dense engine: two 2^12 × 2^12 unitaries take
-// 512 MiB and a few seconds.
-const denseAuto = 12
+// Engine names a method that gives circuits their meaning for a comparison: "dense",
+// "tableau", "matrix-free", or "auto" to let Compare choose. UseEngine picks one; a Result
+// names the one that answered.
+type Engine string
 
-// matrixFreeAuto is the widest register Auto gives to the matrix-free engine: the widest at which
-// its default 4 GiB of Krylov vectors (64 MiB each at 22 qubits) holds the few dozen steps its
-// probabilistic upper bound needs to settle an equivalence.
-const matrixFreeAuto = 22
+// The engines Compare knows, and Auto for its own choice. The doc comment of each engine's
+// file says which circuits it takes and what its answer certifies.
+const (
+	// Auto lets Compare choose: the first engine, in order of preference, that takes the
+	// comparison. The default.
+	Auto Engine = "auto"
+	// Dense builds both unitaries as 2^n × 2^n matrices: exact to floating-point rounding,
+	// chosen up to 12 qubits.
+	Dense Engine = "dense"
+	// Tableau compares how two Clifford circuits conjugate the Pauli generators (stabilizer
+	// tableaux): exact, for thousands of qubits, Clifford circuits only.
+	Tableau Engine = "tableau"
+	// MatrixFree estimates the phase-free distance from statevector runs of both circuits,
+	// without forming either matrix: chosen for 13 to 22 qubits. Its witness certifies a
+	// lower bound; its upper bound holds with a stated probability.
+	MatrixFree Engine = "matrix-free"
+)
 
-// chooseEngine decides which engine answers a comparison: the one asked for with UseEngine, or
-// for Auto the cheapest one that answers exactly: dense up to denseAuto qubits, the tableau for
-// wider Clifford circuits, the matrix-free estimate for other circuits up to matrixFreeAuto.
-// This is the one place that knows which engines exist; a new engine is added here and in
-// compare's switch.
-func chooseEngine(cfg *config, f *frame) (Engine, error) {
-	switch cfg.engine {
-	case Dense:
-		return Dense, nil
-	case Tableau, MatrixFree:
-		return cfg.engine, wideEngineFits(cfg, f, cfg.engine)
-	case Auto:
-		if f.m <= denseAuto {
-			return Dense, nil
-		}
-		tabErr := wideEngineFits(cfg, f, Tableau)
-		if tabErr == nil {
-			return Tableau, nil
-		}
-		if err := wideEngineFits(cfg, f, MatrixFree); err != nil {
-			return 0, fmt.Errorf("qcheck: %d qubits is wider than the dense engine handles automatically (%d), and %v", f.m, denseAuto, err)
-		}
-		if f.m > matrixFreeAuto {
-			return 0, fmt.Errorf("qcheck: %d qubits is too wide for the dense engine (up to %d) and the matrix-free engine (up to %d), and the tableau engine cannot answer: %v", f.m, denseAuto, matrixFreeAuto, tabErr)
-		}
-		return MatrixFree, nil
-	}
-	return 0, fmt.Errorf("qcheck: unknown engine %v", cfg.engine)
-}
+// MarshalText writes the engine's name.
+func (e Engine) MarshalText() ([]byte, error) { return []byte(e), nil }
 
-// wideEngineFits reports why the tableau or matrix-free engine cannot answer this comparison, or
-// nil when it can. Both compare unitaries up to a global phase in operator norm; clean ancillas
-// and measured distributions need the dense engine.
-func wideEngineFits(cfg *config, f *frame, e Engine) error {
-	switch {
-	case f.measured != nil:
-		return fmt.Errorf("the %v engine does not compare measured distributions; they need the dense engine", e)
-	case f.clean:
-		return fmt.Errorf("the %v engine does not compare with clean ancillas; they need the dense engine (dirty ancillas work)", e)
-	case cfg.exactPhase:
-		return fmt.Errorf("the %v engine compares up to global phase only; ExactPhase needs the dense engine", e)
-	case cfg.measure != OperatorNorm:
-		return fmt.Errorf("the %v engine reports the operator-norm distance only, not %v", e, cfg.measure)
+// UnmarshalText reads an engine's name, refusing names of engines that do not exist; with it an
+// Engine serves as a command-line flag (flag.TextVar).
+func (e *Engine) UnmarshalText(text []byte) error {
+	name := Engine(text)
+	if _, err := lookupEngine(name); err != nil {
+		return err
 	}
-	if e == Tableau {
-		b, err := cliffordRounding(f.want, f.got)
-		if err != nil {
-			return err
-		}
-		if b >= cfg.tol {
-			return fmt.Errorf("the angles are off exact Clifford angles by up to %.3g in operator norm in total, not below the tolerance %g, so the tableau's exact answer would not settle it", b, cfg.tol)
-		}
-	}
+	*e = name
 	return nil
 }
 
-// cliffordRounding bounds, in operator norm, how far want and got are from the exact Clifford
-// circuits the tableau computes with (sim.CliffordDeviation), or says why the tableau cannot
-// answer for them.
-func cliffordRounding(want, got *circuit.Circuit) (float64, error) {
-	a, err := sim.CliffordDeviation(want)
-	if err != nil {
-		return 0, fmt.Errorf("want is not a circuit the tableau engine can answer for: %v", err)
-	}
-	b, err := sim.CliffordDeviation(got)
-	if err != nil {
-		return 0, fmt.Errorf("got is not a circuit the tableau engine can answer for: %v", err)
-	}
-	return a + b, nil
+// UseEngine overrides the automatic choice of engine. An engine that cannot answer the
+// comparison (the tableau for a T gate, say) makes Compare return its reason as an error.
+func UseEngine(e Engine) Option {
+	return optionFunc(func(c *config) error {
+		if _, err := lookupEngine(e); err != nil {
+			return fmt.Errorf("qcheck: UseEngine(%q): %v", string(e), err)
+		}
+		c.engine = e
+		return nil
+	})
 }
 
-// certifies says in words what an engine's verdict guarantees.
-func certifies(e Engine, f *frame) string {
-	switch {
-	case e == Dense && f.measured != nil:
-		return "certified from exact unitaries: the total-variation distance is an upper bound on the largest over all inputs when equivalent (from the part of U·V† that moves probability between outcomes) and a distance found on an input when not"
-	case e == Dense:
-		return "exact: both full unitaries, to floating-point rounding"
-	case e == Tableau:
-		return "exact: how both circuits conjugate every Pauli generator; a difference means a distance of at least 1/√2"
-	case e == MatrixFree:
-		return "estimate from a Krylov iteration on V†U; the witness certifies a lower bound, the upper bound holds with the stated probability"
+// An engine answers a comparison. Each lives in its own file, with its own certificate text, and
+// has one entry in engines; nothing else in the package names it. To add one, write the file
+// (a type with these four methods and `var _ engine = myEngine{}`), give it a name constant
+// above, and put it into engines where it should come in Auto's order of preference.
+type engine interface {
+	// name is the engine's name, as UseEngine takes it and a Result reports it.
+	name() Engine
+	// refuses says why the engine cannot answer this comparison, or returns nil when it can.
+	// With auto set, Compare is choosing, and the engine also refuses work it could do but
+	// should not be given by default (a dense register that takes hours, say).
+	refuses(cfg *config, f *frame, auto bool) error
+	// certifies says in words what the engine's verdict guarantees for this comparison;
+	// compare may make it more precise in r.Certifies.
+	certifies(cfg *config, f *frame) string
+	// compare fills r with the verdict, the distances and the evidence. Without full, the
+	// evidence (witness, measurement, blame) is needed only when the circuits are not
+	// equivalent. An engine whose answer does not settle the verdict leaves r.Equivalent false
+	// and says why in r.Undecided; an error is for comparisons it cannot run at all.
+	compare(cfg *config, f *frame, r *Result, full bool) error
+}
+
+// engines is every engine, in Auto's order of preference: the cheapest that answers exactly
+// first.
+var engines = []engine{denseEngine{}, tableauEngine{}, matrixFreeEngine{}}
+
+// lookupEngine returns the engine of that name; Auto has none and returns nil.
+func lookupEngine(name Engine) (engine, error) {
+	if name == Auto {
+		return nil, nil
 	}
-	return ""
+	names := []string{string(Auto)}
+	for _, e := range engines {
+		if e.name() == name {
+			return e, nil
+		}
+		names = append(names, string(e.name()))
+	}
+	return nil, fmt.Errorf("unknown engine; choose %s or %s", strings.Join(names[:len(names)-1], ", "), names[len(names)-1])
+}
+
+// chooseEngine decides which engine answers a comparison: the one asked for with UseEngine, or
+// for Auto the first in engines that takes it.
+func chooseEngine(cfg *config, f *frame) (engine, error) {
+	if cfg.engine != Auto {
+		e, err := lookupEngine(cfg.engine)
+		if err != nil {
+			return nil, fmt.Errorf("qcheck: %v", err)
+		}
+		if err := e.refuses(cfg, f, false); err != nil {
+			return nil, fmt.Errorf("qcheck: %v", err)
+		}
+		return e, nil
+	}
+	var reasons []string
+	for _, e := range engines {
+		err := e.refuses(cfg, f, true)
+		if err == nil {
+			return e, nil
+		}
+		reasons = append(reasons, fmt.Sprintf("%s: %v", e.name(), err))
+	}
+	return nil, fmt.Errorf("qcheck: no engine takes this comparison of %d qubits automatically (%s)", f.m, strings.Join(reasons, "; "))
+}
+
+// unitaryUpToPhase is the refusal shared by engines that compare unitaries up to a global
+// phase in operator norm only: it names the option that asks for more, or returns nil.
+func unitaryUpToPhase(cfg *config, f *frame, e Engine) error {
+	switch {
+	case f.measured != nil:
+		return fmt.Errorf("the %s engine does not compare measured distributions; they need the dense engine", e)
+	case f.clean:
+		return fmt.Errorf("the %s engine does not compare with clean ancillas; they need the dense engine (dirty ancillas work)", e)
+	case cfg.exactPhase:
+		return fmt.Errorf("the %s engine compares up to global phase only; ExactPhase needs the dense engine", e)
+	case cfg.measure != OperatorNorm:
+		return fmt.Errorf("the %s engine reports the operator-norm distance only, not %v", e, cfg.measure)
+	}
+	return nil
 }

@@ -124,7 +124,7 @@ func ExamplePreserves() {
 		panic(err)
 	}
 	fmt.Println(f.Kind)
-	fmt.Println(qcheck.GoCode(f.Input))
+	fmt.Println(f.Input.GoString())
 	// Output:
 	// changed the circuit's meaning
 	// circuit.New(2).CX(0, 1)

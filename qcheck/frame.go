@@ -300,3 +300,27 @@ func relabel(c *circuit.Circuit, to []int, m int) *circuit.Circuit {
 	}
 	return d
 }
+
+// undoLayout returns got followed by the SWAPs that bring logical qubit i, which got leaves on
+// physical qubit perm[i], back to qubit i; got itself when perm is nil. The wide engines compare
+// that circuit with want, as the dense engine compares want with the relabelled matrix of got.
+func undoLayout(got *circuit.Circuit, perm []int) *circuit.Circuit {
+	if perm == nil {
+		return got
+	}
+	c := got.Clone()
+	pos := append([]int(nil), perm...) // pos[i]: where logical i is now
+	at := make([]int, len(perm))       // at[p]: which logical qubit is on physical p
+	for i, p := range perm {
+		at[p] = i
+	}
+	for i := range pos {
+		if p := pos[i]; p != i {
+			j := at[i] // the logical qubit now on physical i moves to p
+			c.SWAP(i, p)
+			pos[i], pos[j] = i, p
+			at[i], at[p] = i, j
+		}
+	}
+	return c
+}

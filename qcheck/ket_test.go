@@ -3,8 +3,6 @@ package qcheck
 import (
 	"math"
 	"testing"
-
-	"qcheck.dev/qcheck/circuit"
 )
 
 func TestKet(t *testing.T) {
@@ -28,13 +26,5 @@ func TestKet(t *testing.T) {
 		if got := Ket(tc.psi, tc.n); got != tc.want {
 			t.Errorf("Ket(%v) = %q, want %q", tc.psi, got, tc.want)
 		}
-	}
-}
-
-func TestGoCode(t *testing.T) {
-	c := circuit.New(3).H(0).CX(0, 1).RZ(0.25, 2).Sdg(1).CP(math.Pi/4, 1, 2).Measure(2, 0)
-	want := "circuit.New(3).H(0).CX(0, 1).RZ(0.25, 2).Sdg(1).CP(0.7853981633974483, 1, 2).Measure(2, 0)"
-	if got := GoCode(c); got != want {
-		t.Errorf("GoCode = %q, want %q", got, want)
 	}
 }

@@ -22,19 +22,14 @@ func (p *densePair) distributions(witness []complex128) (lower, upper float64, b
 	mw, mg := p.f.measuredWant, p.f.measured
 	outcomes := 1 << len(mg)
 	pu, pv := make([]float64, outcomes), make([]float64, outcomes)
-	best = Measurement{InputBasis: -1}
-	bestGap := -1.0
+	largest := newLargestGap()
 	consider := func(a, b []complex128, input []complex128, basis int) {
 		marginal(a, mw, pu)
 		marginal(b, mg, pv)
 		tv := 0.0
 		for o := range pu {
-			g := math.Abs(pu[o] - pv[o])
-			tv += g
-			if g > bestGap+1e-12 {
-				bestGap = g
-				best = Measurement{Input: input, InputBasis: basis, Basis: true, Outcome: o, Want: pu[o], Got: pv[o]}
-			}
+			tv += math.Abs(pu[o] - pv[o])
+			largest.offer(input, basis, o, pu[o], pv[o])
 		}
 		lower = math.Max(lower, tv/2)
 	}
@@ -48,9 +43,7 @@ func (p *densePair) distributions(witness []complex128) (lower, upper float64, b
 		}
 		consider(a, b, nil, x)
 	}
-	if best.InputBasis >= 0 {
-		best.Input = basisState(p.dim, best.InputBasis)
-	}
+	largest.fillBasisInput(p.dim)
 	outU, outV := make([]int, p.dim), make([]int, p.dim)
 	for z := range outU {
 		outU[z], outV[z] = outcomeOf(z, mw), outcomeOf(z, mg)
@@ -69,7 +62,7 @@ func (p *densePair) distributions(witness []complex128) (lower, upper float64, b
 			consider(apply(p.ud, p.dim, psi), apply(p.vd, p.dim, psi), psi, -1)
 		}
 	}
-	return lower, math.Max(gap.Upper, lower), best
+	return lower, math.Max(gap.Upper, lower), largest.best
 }
 
 // outcomeOf returns the outcome that basis state z reads as when outcome bit i is the value of

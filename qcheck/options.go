@@ -37,7 +37,8 @@ func (f optionFunc) apply(c *config) error { return f(c) }
 
 // DefaultTolerance is the tolerance ε used when no Tolerance option is given: far above the
 // floating-point noise of exact rewrites of circuits of a few thousand gates, far below any real
-// bug (see DESIGN.md, "Default tolerance").
+// bug: the rounding of one gate is about 1e-16, and such errors add at most linearly over a
+// circuit (Nielsen & Chuang §4.5.3).
 const DefaultTolerance = 1e-9
 
 // Tolerance sets ε, the largest distance at which two circuits still count as equivalent, in the
@@ -197,54 +198,6 @@ func UseMeasure(m Measure) Option {
 	})
 }
 
-// Engine names the method that gives circuits their meaning for a comparison.
-type Engine int
-
-const (
-	// Auto lets Compare choose the engine from the circuits' width and gates. The default.
-	Auto Engine = iota
-	// Dense builds both unitaries as 2^n × 2^n matrices: exact to floating-point rounding,
-	// practical up to about 12 qubits.
-	Dense
-	// Tableau compares how two Clifford circuits conjugate the Pauli generators X_q and Z_q
-	// (stabilizer tableaux, Aaronson & Gottesman 2004): exact, for thousands of qubits, and for
-	// Clifford circuits only.
-	Tableau
-	// MatrixFree estimates the phase-free distance from runs of both circuits on statevectors
-	// (a Krylov iteration on V†U), without forming either matrix: Auto uses it for 13 to 22 qubits. Its
-	// witness certifies a lower bound; its upper bound holds with a stated probability.
-	MatrixFree
-)
-
-// String returns the engine's name.
-func (e Engine) String() string {
-	switch e {
-	case Auto:
-		return "auto"
-	case Dense:
-		return "dense"
-	case Tableau:
-		return "tableau"
-	case MatrixFree:
-		return "matrix-free"
-	}
-	return fmt.Sprintf("Engine(%d)", int(e))
-}
-
-// MarshalText writes the engine's name, so that results encode readably as JSON.
-func (e Engine) MarshalText() ([]byte, error) { return []byte(e.String()), nil }
-
-// UseEngine overrides the automatic choice of engine.
-func UseEngine(e Engine) Option {
-	return optionFunc(func(c *config) error {
-		if e < Auto || e > MatrixFree {
-			return fmt.Errorf("qcheck: UseEngine(%v): unknown engine", e)
-		}
-		c.engine = e
-		return nil
-	})
-}
-
 // config is the resolved set of options.
 type config struct {
 	tol          float64
@@ -259,22 +212,40 @@ type config struct {
 }
 
 // newConfig applies opts over the defaults and checks that they fit together; checks that need
-// the circuits (ranges, widths) are done by layoutOf.
+// the circuits (ranges, widths) are done by frameOf, and what an engine cannot do is said by
+// its refuses method.
 func newConfig(opts []Option) (*config, error) {
-	c := &config{tol: DefaultTolerance}
+	c := &config{tol: DefaultTolerance, engine: Auto}
 	if err := Options(opts).apply(c); err != nil {
 		return nil, err
 	}
-	if c.exactPhase && c.measure != OperatorNorm {
-		return nil, fmt.Errorf("qcheck: ExactPhase with the %v measure: that measure ignores global phase by definition; use OperatorNorm", c.measure)
-	}
-	if c.measuredSet && c.measure != OperatorNorm {
-		return nil, fmt.Errorf("qcheck: Measured with UseMeasure(%v): measured comparisons use the total-variation distance", c.measure)
-	}
-	if len(c.ancillas) > 0 && c.ancillaState == Clean && c.measure != OperatorNorm {
-		return nil, fmt.Errorf("qcheck: clean ancillas with the %v measure: the restricted map need not be unitary; use OperatorNorm", c.measure)
+	if err := c.clash(); err != nil {
+		return nil, err
 	}
 	return c, nil
+}
+
+// clash reports options that contradict each other. It is the one place that knows which
+// combinations of options make no sense, whatever the engine.
+func (c *config) clash() error {
+	switch {
+	case c.exactPhase && c.measure != OperatorNorm:
+		return fmt.Errorf("qcheck: ExactPhase with the %v measure: that measure ignores global phase by definition; use OperatorNorm", c.measure)
+	case c.measuredSet && c.measure != OperatorNorm:
+		return fmt.Errorf("qcheck: Measured with UseMeasure(%v): measured comparisons use the total-variation distance", c.measure)
+	case len(c.ancillas) > 0 && c.ancillaState == Clean && c.measure != OperatorNorm:
+		return fmt.Errorf("qcheck: clean ancillas with the %v measure: the restricted map need not be unitary; use OperatorNorm", c.measure)
+	}
+	return nil
+}
+
+// registerFree reports options that name qubits of a whole register, which a rule check cannot
+// take: its circuits are drawn on random registers.
+func (c *config) registerFree() error {
+	if c.perm != nil || len(c.ancillas) > 0 || c.measuredSet {
+		return fmt.Errorf("rule checks take no OutputPermutation, Ancillas or Measured option: a rule's qubits are mapped onto random registers")
+	}
+	return nil
 }
 
 // describe lists the non-default settings, for reports.

@@ -86,7 +86,7 @@ func TestReportBlamesTheMovedGates(t *testing.T) {
 		t.Fatalf("shrunk input %v, want rz then cx", in.Ops)
 	}
 	b := f.Result.Blame
-	if !b.Found || b.FirstDiff != 0 || b.WantOps != [2]int{0, 2} || b.GotOps != [2]int{0, 2} || b.Prefix != 1 {
+	if !b.Found || b.FirstDiff != 0 || b.WantOps != (circuit.Span{Start: 0, End: 2}) || b.GotOps != (circuit.Span{Start: 0, End: 2}) || b.Prefix != 1 {
 		t.Errorf("blame %+v, want the first two ops with the meaning changing at op 0", b)
 	}
 	rep := f.Report()

@@ -19,31 +19,161 @@ const reportMaxOps = 60
 // report's next line says it.
 func (r Result) Headline() string {
 	if r.Equivalent {
-		return fmt.Sprintf("qcheck: got is equivalent to want: %s %.4g ≤ tolerance %g (%s)",
-			r.Measure, r.Distance, r.Tolerance, r.phaseWords())
+		return fmt.Sprintf("qcheck: got is equivalent to want: %s (%s)", r.verdict(), r.phaseWords())
 	}
-	return fmt.Sprintf("qcheck: got differs from want: %s %.4g > tolerance %g", r.Measure, r.Distance, r.Tolerance)
+	return "qcheck: got differs from want: " + r.verdict()
+}
+
+// verdict writes the distance against the tolerance: "operator norm 0.1 > tolerance 1e-09".
+func (r *Result) verdict() string {
+	rel := ">"
+	if r.Equivalent {
+		rel = "≤"
+	}
+	return fmt.Sprintf("%s %.4g %s tolerance %g", r.Measure, r.Distance, rel, r.Tolerance)
 }
 
 // Report writes the result for a person, in lines of at most 100 columns (drawings are wrapped by
 // the circuit package at the same width): the verdict, both circuits drawn and listed, their
 // difference as op lists and, when they are not equivalent, the ops to blame, the witness input
-// state, and a measurement whose probabilities tell the circuits apart.
+// state, and a measurement whose probabilities tell the circuits apart. The text is for people
+// and may change between versions; programs read the JSON encoding (MarshalJSON), whose keys do
+// not change.
 func (r Result) Report() string {
+	return write(&page{r: &r, want: "want", got: "got"})
+}
+
+// A section writes one part of a report, or nothing when it has nothing to say. Result.Report
+// and Failure.Report write the same list, sections, each from what its page holds; a new part of
+// the reports is one function and one entry there.
+type section func(b *strings.Builder, p *page)
+
+// page is what the sections of one report read: the comparison (nil for a failure that has
+// none), the failure of a pass (nil for Result.Report), and what the two circuits are called.
+type page struct {
+	r         *Result
+	f         *Failure
+	want, got string
+}
+
+// sections is every part of a report, in order.
+var sections = []section{
+	headlineSection,
+	settingsSection,
+	circuitsSection,
+	diffSection,
+	blameSection,
+	evidenceSection,
+	replaySection,
+}
+
+// write runs every section over the page.
+func write(p *page) string {
 	var b strings.Builder
-	b.WriteString(r.Headline())
-	b.WriteString("\n")
-	r.writeSettings(&b)
-	if r.Want != nil && r.Got != nil {
-		writeCircuit(&b, "want", r.Want)
-		writeCircuit(&b, "got", r.Got)
-		writeDiff(&b, "want", r.Want, "got", r.Got)
-	}
-	if !r.Equivalent {
-		r.writeBlame(&b, "want", "got")
-		r.writeEvidence(&b)
+	for _, s := range sections {
+		s(&b, p)
 	}
 	return b.String()
+}
+
+// headlineSection writes the first line.
+func headlineSection(b *strings.Builder, p *page) {
+	if p.f != nil {
+		b.WriteString(p.f.Headline())
+	} else {
+		b.WriteString(p.r.Headline())
+	}
+	b.WriteString("\n")
+}
+
+// settingsSection writes the measure, phase convention, engine and options of the comparison.
+func settingsSection(b *strings.Builder, p *page) {
+	if p.r == nil {
+		return
+	}
+	r := p.r
+	fmt.Fprintf(b, "  measure: %s, %s\n", r.Measure, r.phaseWords())
+	b.WriteString(wrapList("  engine: ", strings.Fields(fmt.Sprintf("%s (%s)", r.Engine, r.Certifies)), " "))
+	if r.Options != "" {
+		fmt.Fprintf(b, "  options: %s\n", r.Options)
+	}
+}
+
+// circuitsSection draws and lists the circuits: want and got, or the pass's input and what the
+// pass made of it (its output, the input it changed, or its panic).
+func circuitsSection(b *strings.Builder, p *page) {
+	f := p.f
+	if f == nil {
+		if p.r.Want != nil && p.r.Got != nil {
+			writeCircuit(b, p.want, p.r.Want)
+			writeCircuit(b, p.got, p.r.Got)
+		}
+		return
+	}
+	if f.Input != nil {
+		writeCircuit(b, "input (as small as rapid could make it)", f.Input)
+		b.WriteString(wrapList("  as Go: ", []string{f.Input.GoString()}, ""))
+	}
+	switch f.Kind {
+	case NotEquivalent:
+		writeCircuit(b, "output of the pass", f.Output)
+		if f.Layout != nil {
+			fmt.Fprintf(b, "  final layout reported by the pass: %v (logical i on physical layout[i])\n", f.Layout)
+		}
+	case ModifiedInput:
+		writeCircuit(b, "the input after the pass ran", f.Modified)
+	case PassPanic:
+		fmt.Fprintf(b, "\n%s\n", trimLines(f.Err.Error(), 24))
+	case BadOutput:
+		if f.Output != nil {
+			writeCircuit(b, "output of the pass", f.Output)
+		}
+	}
+}
+
+// diffSection writes the structural difference of the two circuits' op lists.
+func diffSection(b *strings.Builder, p *page) {
+	switch {
+	case p.f == nil && p.r.Want != nil && p.r.Got != nil:
+		writeDiff(b, p.want, p.r.Want, p.got, p.r.Got)
+	case p.f != nil && p.f.Kind == NotEquivalent:
+		writeDiff(b, p.want, p.f.Input, p.got, p.f.Output)
+	case p.f != nil && p.f.Kind == ModifiedInput:
+		writeDiff(b, "before", p.f.Input, "after", p.f.Modified)
+	}
+}
+
+// blameSection names the ops that explain a difference.
+func blameSection(b *strings.Builder, p *page) {
+	if p.r != nil && !p.r.Equivalent {
+		p.r.writeBlame(b, p.want, p.got)
+	}
+}
+
+// evidenceSection writes the witness, the measurement and the probability bound of a difference.
+func evidenceSection(b *strings.Builder, p *page) {
+	if p.r != nil && !p.r.Equivalent {
+		p.r.writeEvidence(b)
+	}
+}
+
+// replaySection says how to replay a failure found by rapid.
+func replaySection(b *strings.Builder, p *page) {
+	f := p.f
+	if f == nil {
+		return
+	}
+	b.WriteString("\nreplay: ")
+	switch {
+	case f.FailFile != "" && f.Seed != 0:
+		fmt.Fprintf(b, "-rapid.failfile=%q (or -rapid.seed=%d)\n", f.FailFile, f.Seed)
+	case f.FailFile != "":
+		fmt.Fprintf(b, "-rapid.failfile=%q\n", f.FailFile)
+	case f.Seed != 0:
+		fmt.Fprintf(b, "-rapid.seed=%d\n", f.Seed)
+	default:
+		b.WriteString("rerun the test with the -rapid.seed (or -rapid.failfile) that rapid printed above\n")
+	}
 }
 
 // phaseWords says how the two circuits were compared: up to global phase, with the phase
@@ -59,15 +189,6 @@ func (r Result) phaseWords() string {
 		return "global phase counts"
 	}
 	return "up to global phase"
-}
-
-// writeSettings writes the measure, phase convention, engine and options.
-func (r Result) writeSettings(b *strings.Builder) {
-	fmt.Fprintf(b, "  measure: %s, %s\n", r.Measure, r.phaseWords())
-	b.WriteString(wrapList("  engine: ", strings.Fields(fmt.Sprintf("%s (%s)", r.Engine, r.Certifies)), " "))
-	if r.Options != "" {
-		fmt.Fprintf(b, "  options: %s\n", r.Options)
-	}
 }
 
 // writeCircuit draws a circuit and lists its ops.
@@ -144,7 +265,7 @@ func (r Result) writeBlame(b *strings.Builder, wantName, gotName string) {
 	if !bl.Found || r.Want == nil || r.Got == nil {
 		return
 	}
-	w, g := r.Want.Ops[bl.WantOps[0]:bl.WantOps[1]], r.Got.Ops[bl.GotOps[0]:bl.GotOps[1]]
+	w, g := r.Want.Ops[bl.WantOps.Start:bl.WantOps.End], r.Got.Ops[bl.GotOps.Start:bl.GotOps.End]
 	b.WriteString("\nblame:\n")
 	pad := max(len(wantName), len(gotName))
 	wl := fmt.Sprintf("    %-*s ", pad+1, wantName+":")
@@ -153,8 +274,8 @@ func (r Result) writeBlame(b *strings.Builder, wantName, gotName string) {
 	fmt.Fprintf(b, "  %s has %s where %s has %s\n",
 		wantName, rangeWords(bl.WantOps, "inserted"), gotName, rangeWords(bl.GotOps, "removed"))
 	if len(w)+len(g) <= 12 {
-		b.WriteString(wrapList(wl, opList(w, bl.WantOps[0]), " · "))
-		b.WriteString(wrapList(gl, opList(g, bl.GotOps[0]), " · "))
+		b.WriteString(wrapList(wl, opList(w, bl.WantOps.Start), " · "))
+		b.WriteString(wrapList(gl, opList(g, bl.GotOps.Start), " · "))
 	}
 	if bl.Prefix > 0 {
 		k := bl.Prefix
@@ -168,14 +289,14 @@ func (r Result) writeBlame(b *strings.Builder, wantName, gotName string) {
 // "2 ops (ops 3–4)", or for an empty range "nothing (removed; at op 3)", where empty says what
 // got did there ("removed" on got's side, "inserted" on want's), so that the gap reads as a
 // deletion or an insertion at that place rather than as a position.
-func rangeWords(r [2]int, empty string) string {
-	switch r[1] - r[0] {
+func rangeWords(s circuit.Span, empty string) string {
+	switch s.Len() {
 	case 0:
-		return fmt.Sprintf("nothing (%s; at op %d)", empty, r[0])
+		return fmt.Sprintf("nothing (%s; at op %d)", empty, s.Start)
 	case 1:
-		return fmt.Sprintf("1 op (op %d)", r[0])
+		return fmt.Sprintf("1 op (%s)", s)
 	}
-	return fmt.Sprintf("%d ops (ops %d–%d)", r[1]-r[0], r[0], r[1]-1)
+	return fmt.Sprintf("%d ops (%s)", s.Len(), s)
 }
 
 // ketOrder names the qubits of a ket of n qubits, highest first: "|q2 q1 q0⟩".
@@ -302,8 +423,7 @@ func (f *Failure) Headline() string {
 	}
 	switch f.Kind {
 	case NotEquivalent:
-		r := f.Result
-		return fmt.Sprintf("qcheck: the pass changes a %s: %s %.4g > tolerance %g", in, r.Measure, r.Distance, r.Tolerance)
+		return fmt.Sprintf("qcheck: the pass changes a %s: %s", in, f.Result.verdict())
 	case PassError:
 		return fmt.Sprintf("qcheck: the pass returned an error on a valid %s: %v", in, f.Err)
 	case PassPanic:
@@ -318,50 +438,10 @@ func (f *Failure) Headline() string {
 
 // Report writes the failure for a person: what went wrong, the minimal input drawn and listed
 // (and as Go code to paste into a regression test), the pass's output beside it with their
-// difference, the comparison's evidence, and how to replay the failure.
+// difference, the comparison's evidence, and how to replay the failure. Like Result.Report, the
+// text may change between versions.
 func (f *Failure) Report() string {
-	var b strings.Builder
-	b.WriteString(f.Headline())
-	b.WriteString("\n")
-	if f.Kind == NotEquivalent {
-		f.Result.writeSettings(&b)
-	}
-	if f.Input != nil {
-		writeCircuit(&b, "input (as small as rapid could make it)", f.Input)
-		b.WriteString(wrapList("  as Go: ", []string{GoCode(f.Input)}, ""))
-	}
-	switch f.Kind {
-	case NotEquivalent:
-		r := f.Result
-		writeCircuit(&b, "output of the pass", f.Output)
-		if f.Layout != nil {
-			fmt.Fprintf(&b, "  final layout reported by the pass: %v (logical i on physical layout[i])\n", f.Layout)
-		}
-		writeDiff(&b, "input", f.Input, "output", f.Output)
-		r.writeBlame(&b, "input", "output")
-		r.writeEvidence(&b)
-	case ModifiedInput:
-		writeCircuit(&b, "the input after the pass ran", f.Modified)
-		writeDiff(&b, "before", f.Input, "after", f.Modified)
-	case PassPanic:
-		fmt.Fprintf(&b, "\n%s\n", trimLines(f.Err.Error(), 24))
-	case BadOutput:
-		if f.Output != nil {
-			writeCircuit(&b, "output of the pass", f.Output)
-		}
-	}
-	b.WriteString("\nreplay: ")
-	switch {
-	case f.FailFile != "" && f.Seed != 0:
-		fmt.Fprintf(&b, "-rapid.failfile=%q (or -rapid.seed=%d)\n", f.FailFile, f.Seed)
-	case f.FailFile != "":
-		fmt.Fprintf(&b, "-rapid.failfile=%q\n", f.FailFile)
-	case f.Seed != 0:
-		fmt.Fprintf(&b, "-rapid.seed=%d\n", f.Seed)
-	default:
-		b.WriteString("rerun the test with the -rapid.seed (or -rapid.failfile) that rapid printed above\n")
-	}
-	return b.String()
+	return write(&page{r: f.Result, f: f, want: "input", got: "output"})
 }
 
 // trimLines keeps the first n lines of s.

@@ -36,7 +36,7 @@ func TestBlameWordsForRemovedAndInsertedOps(t *testing.T) {
 }
 
 // The one-line verdict of equivalent circuits says what was compared. rz(θ) = diag(e^{−iθ/2},
-// e^{iθ/2}) (Nielsen & Chuang eq. 4.6) is e^{−iθ/2}·p(θ) with p(θ) = diag(1, e^{iθ}) (DESIGN.md),
+// e^{iθ/2}) (Nielsen & Chuang eq. 4.6) is e^{−iθ/2}·p(θ) with p(θ) = diag(1, e^{iθ}) (package circuit's documentation),
 // so the two agree up to global phase only; a circuit equals itself with the phase counting; a Z
 // just before measuring changes no probability (Nielsen & Chuang §2.2.3, |−a|² = |a|²).
 func TestHeadlineOfEquivalentCircuitsNamesTheComparison(t *testing.T) {

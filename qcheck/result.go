@@ -1,17 +1,27 @@
 package qcheck
 
-import "qcheck.dev/qcheck/circuit"
+import (
+	"encoding/json"
+
+	"qcheck.dev/qcheck/circuit"
+)
 
 // Result is the outcome of comparing two circuits: the verdict, the numbers behind it, and the
 // evidence a person needs to act on a difference. It holds values only; Report turns it into
 // text.
 //
+// MarshalJSON gives a Result its JSON encoding, which the qcheck command writes with -json; its
+// keys, unlike the text of Report, stay the same between versions.
+//
 // States and outcomes are on got's register, indexed Σ_q b_q·2^q (qubit 0 is the least
 // significant bit). With an output permutation, outcomes are read after undoing it, so bit i is
 // logical qubit i.
 type Result struct {
-	// Equivalent reports whether Distance ≤ Tolerance.
+	// Equivalent reports whether Distance ≤ Tolerance, as the engine certifies it.
 	Equivalent bool
+	// Undecided, when not empty, says why the engine's answer settles neither way (its bounds
+	// straddle the tolerance); Equivalent is then false, meaning "not shown equivalent".
+	Undecided string
 	// Distance is the distance of the two circuits in Measure. For measured distributions it
 	// is certified on the side of the verdict: an upper bound on the largest total-variation
 	// distance over all inputs when Equivalent, a distance found on an input when not (Certifies
@@ -91,18 +101,83 @@ type Measurement struct {
 // Blame points at the part of got that explains a difference.
 type Blame struct {
 	// Found reports whether the circuits differ as op lists at all.
-	Found bool
+	Found bool `json:"found"`
 	// FirstDiff is the first op index at which want and got differ structurally (different op,
 	// or one circuit ends), or −1 when they are structurally equal.
-	FirstDiff int
-	// WantOps and GotOps are the half-open ranges of op indices that differ once the longest
-	// common prefix and suffix are removed: want.Ops[WantOps[0]:WantOps[1]] became
-	// got.Ops[GotOps[0]:GotOps[1]].
-	WantOps, GotOps [2]int
+	FirstDiff int `json:"first_diff"`
+	// WantOps and GotOps are the spans of ops that differ once the longest common start and
+	// end are removed (circuit.CommonEnds): want's ops in WantOps became got's ops in GotOps.
+	WantOps circuit.Span `json:"want_ops"`
+	GotOps  circuit.Span `json:"got_ops"`
 	// Prefix, when positive, is the length of the shortest prefix of got that already differs
 	// (beyond the tolerance) from the prefix of want of the same length, so op Prefix−1 is where
 	// the meaning first changes. It is computed only when both circuits have the same length and
 	// are compared on the same register without permutation, ancillas or measurement, up to 6
 	// qubits.
-	Prefix int
+	Prefix int `json:"prefix"`
+}
+
+// resultJSON is the JSON form of a Result. Amplitudes are [re, im] pairs; the circuits and the
+// options in words are left out (the caller has them).
+type resultJSON struct {
+	Equivalent       bool           `json:"equivalent"`
+	Undecided        string         `json:"undecided,omitempty"`
+	Distance         float64        `json:"distance"`
+	Measure          Measure        `json:"measure"`
+	Tolerance        float64        `json:"tolerance"`
+	ExactPhase       bool           `json:"exact_phase"`
+	Phase            float64        `json:"phase"`
+	OperatorDistance float64        `json:"operator_distance"`
+	Witness          [][2]float64   `json:"witness"`
+	WitnessGap       float64        `json:"witness_gap"`
+	Engine           Engine         `json:"engine"`
+	Certifies        string         `json:"certifies"`
+	Measurement      *Measurement   `json:"measurement,omitempty"`
+	Pauli            *PauliEvidence `json:"pauli,omitempty"`
+	Blame            *Blame         `json:"blame,omitempty"`
+	Qubits           int            `json:"qubits"`
+	Measured         []int          `json:"measured,omitempty"`
+	Bits             []int          `json:"bits,omitempty"`
+}
+
+// MarshalJSON writes the result as one JSON object; see the Result type for its keys' meaning.
+// The measurement is left out when there is none (Measurement.Input nil), and the blame when
+// the circuits have the same ops.
+func (r Result) MarshalJSON() ([]byte, error) {
+	v := resultJSON{
+		Equivalent: r.Equivalent, Undecided: r.Undecided, Distance: r.Distance, Measure: r.Measure,
+		Tolerance: r.Tolerance, ExactPhase: r.ExactPhase, Phase: r.Phase,
+		OperatorDistance: r.OperatorDistance, Witness: make([][2]float64, len(r.Witness)),
+		WitnessGap: r.WitnessGap, Engine: r.Engine, Certifies: r.Certifies, Pauli: r.Pauli,
+		Qubits: r.Qubits, Measured: r.Measured, Bits: r.Bits,
+	}
+	for i, a := range r.Witness {
+		v.Witness[i] = [2]float64{real(a), imag(a)}
+	}
+	if r.Measurement.Input != nil {
+		v.Measurement = &r.Measurement
+	}
+	if r.Blame.Found {
+		v.Blame = &r.Blame
+	}
+	return json.Marshal(v)
+}
+
+// MarshalJSON writes the measurement without its input state: input_basis (null when the input
+// is not a basis state), basis, outcome (null without basis), want and got.
+func (m Measurement) MarshalJSON() ([]byte, error) {
+	v := struct {
+		InputBasis *int    `json:"input_basis"`
+		Basis      bool    `json:"basis"`
+		Outcome    *int    `json:"outcome"`
+		Want       float64 `json:"want"`
+		Got        float64 `json:"got"`
+	}{Basis: m.Basis, Want: m.Want, Got: m.Got}
+	if m.InputBasis >= 0 {
+		v.InputBasis = &m.InputBasis
+	}
+	if m.Basis {
+		v.Outcome = &m.Outcome
+	}
+	return json.Marshal(v)
 }

@@ -66,8 +66,8 @@ func ruleConfig(rule Rule, opts []Option) (*config, error) {
 	if err != nil {
 		return nil, err
 	}
-	if cfg.perm != nil || len(cfg.ancillas) > 0 || cfg.measuredSet {
-		return nil, fmt.Errorf("rule checks take no OutputPermutation, Ancillas or Measured option: a rule's qubits are mapped onto random registers")
+	if err := cfg.registerFree(); err != nil {
+		return nil, err
 	}
 	return cfg, nil
 }
@@ -88,7 +88,7 @@ func ruleProperty(cfg *config, rule Rule, pass Pass) func(*rapid.T) {
 		}
 		if !r.Equivalent {
 			t.Log(lazyResult{&r})
-			t.Fatalf("qcheck: the rule itself is wrong: %s %.4g > tolerance %g between its left and right sides (want = left, got = right)", r.Measure, r.Distance, r.Tolerance)
+			t.Fatalf("qcheck: the rule itself is wrong: %s between its left and right sides (want = left, got = right)", r.verdict())
 		}
 		if s == nil {
 			return

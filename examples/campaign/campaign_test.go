@@ -155,7 +155,7 @@ func keeps(t *testing.T, pass qcheck.LayoutPass, in *circuit.Circuit, opts []qch
 // does not slide through it, since CX·(I ⊗ Z_t) = (Z_c ⊗ Z_t)·CX (Nielsen & Chuang §10.5.2,
 // conjugation of Paulis by CNOT). So Z_t·CX·Z_t = Z_c·CX, while the wrong pass cancels the two
 // Zs and keeps CX alone: the two differ by Z on the control, whose eigenphases 0 and π span a
-// half circle, a phase-free distance of 2·sin(π/4) = √2 (DESIGN.md's closed form).
+// half circle, a phase-free distance of 2·sin(π/4) = √2 (package metric's documentation).
 func TestDemoCounterexampleIsReal(t *testing.T) {
 	f, err := campaign.Hunt(campaign.Peephole(), 1, campaign.DefaultChecks)
 	if err != nil {

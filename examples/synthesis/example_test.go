@@ -4,7 +4,7 @@ import (
 	"fmt"
 
 	"qcheck.dev/examples/synthesis"
-	"qcheck.dev/qcheck"
+	"qcheck.dev/qcheck/budget"
 	"qcheck.dev/qcheck/circuit"
 )
 
@@ -14,7 +14,7 @@ func ExamplePass() {
 		panic(err)
 	}
 	c := circuit.New(2).H(0).RZ(0.3, 0).CX(0, 1).RX(-1.1, 1)
-	var l qcheck.Ledger
+	var l budget.Ledger
 	out, err := synthesis.Pass{Net: net, Epsilon: 0.05}.Run(c, &l)
 	if err != nil {
 		panic(err)

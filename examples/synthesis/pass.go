@@ -5,7 +5,7 @@ import (
 	"runtime"
 	"sync"
 
-	"qcheck.dev/qcheck"
+	"qcheck.dev/qcheck/budget"
 	"qcheck.dev/qcheck/circuit"
 )
 
@@ -41,7 +41,7 @@ type synthesized struct {
 // with its window, the rotation, its word and its share of the budget. c is not modified. It
 // fails on an invalid circuit, a bad budget, or a rotation the net and levels cannot bring within
 // its share (naming the op).
-func (p Pass) Run(c *circuit.Circuit, rec qcheck.Recorder) (*circuit.Circuit, error) {
+func (p Pass) Run(c *circuit.Circuit, rec budget.Recorder) (*circuit.Circuit, error) {
 	if p.Net == nil {
 		return nil, fmt.Errorf("synthesis: no net")
 	}
@@ -57,7 +57,7 @@ func (p Pass) Run(c *circuit.Circuit, rec qcheck.Recorder) (*circuit.Circuit, er
 	if len(todo) == 0 {
 		return c.Clone(), nil
 	}
-	share, err := qcheck.EvenSplit(p.Epsilon, len(todo))
+	share, err := budget.EvenSplit(p.Epsilon, len(todo))
 	if err != nil {
 		return nil, err
 	}
@@ -101,7 +101,7 @@ func (p Pass) Run(c *circuit.Circuit, rec qcheck.Recorder) (*circuit.Circuit, er
 	out := circuit.New(c.Qubits())
 	out.SetBits(c.Bits())
 	out.Ops = make([]circuit.Op, 0, total)
-	rewrites := make([]qcheck.Rewrite, len(todo))
+	rewrites := make([]budget.Rewrite, len(todo))
 	k := 0
 	for i, op := range c.Ops {
 		if k == len(todo) || todo[k] != i {
@@ -111,8 +111,8 @@ func (p Pass) Run(c *circuit.Circuit, rec qcheck.Recorder) (*circuit.Circuit, er
 		start := out.Len()
 		q := op.Qubits[0]
 		results[k].w.appendTo(out, q)
-		rewrites[k] = qcheck.Rewrite{
-			Window: qcheck.Window{Before: qcheck.Span{Start: i, End: i + 1}, After: qcheck.Span{Start: start, End: out.Len()}, Qubits: []int{q}},
+		rewrites[k] = budget.Rewrite{
+			Window: budget.Window{Before: circuit.Span{Start: i, End: i + 1}, After: circuit.Span{Start: start, End: out.Len()}, Qubits: []int{q}},
 			Share:  share,
 		}
 		k++

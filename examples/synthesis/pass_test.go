@@ -10,6 +10,7 @@ import (
 
 	"qcheck.dev/metric"
 	"qcheck.dev/qcheck"
+	"qcheck.dev/qcheck/budget"
 	"qcheck.dev/qcheck/circuit"
 	"qcheck.dev/qcheck/sim"
 )
@@ -63,7 +64,7 @@ func TestWordsAreProductsOfTheGateSet(t *testing.T) {
 	r := rand.New(rand.NewSource(1))
 	before := randomCircuit(r, 3, 40)
 	orig := before.Clone()
-	var l qcheck.Ledger
+	var l budget.Ledger
 	after, err := Pass{Net: smallNet(), Epsilon: 0.2, MaxLevels: 3}.Run(before, &l)
 	if err != nil {
 		t.Fatal(err)
@@ -99,7 +100,7 @@ func TestWordsAreProductsOfTheGateSet(t *testing.T) {
 	if err := l.Covers(before, after); err != nil {
 		t.Fatal(err)
 	}
-	qcheck.WithinBudget(t, &l, 0.2)
+	budget.Within(t, &l, 0.2)
 }
 
 // On 8 qubits the dense distance of the whole circuits is at most the certified bound
@@ -112,7 +113,7 @@ func TestDenseDistanceWithinBound(t *testing.T) {
 	for seed := int64(1); seed <= seeds; seed++ {
 		r := rand.New(rand.NewSource(seed))
 		before := randomCircuit(r, 8, 60)
-		var l qcheck.Ledger
+		var l budget.Ledger
 		const eps = 0.3
 		after, err := Pass{Net: smallNet(), Epsilon: eps}.Run(before, &l)
 		if err != nil {
@@ -131,7 +132,7 @@ func TestDenseDistanceWithinBound(t *testing.T) {
 		if truth > l.Bound()+1e-9 {
 			t.Errorf("seed %d: dense distance %.6g exceeds the certified bound %.6g", seed, truth, l.Bound())
 		}
-		qcheck.WithinBudget(t, &l, eps)
+		budget.Within(t, &l, eps)
 		if seed == 1 {
 			// The same through the public check: equivalent within the certified bound.
 			qcheck.Equivalent(t, before, after, qcheck.Tolerance(l.Bound()+1e-9))

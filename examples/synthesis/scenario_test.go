@@ -7,7 +7,7 @@ import (
 	"testing"
 	"time"
 
-	"qcheck.dev/qcheck"
+	"qcheck.dev/qcheck/budget"
 	"qcheck.dev/qcheck/circuit"
 )
 
@@ -92,8 +92,8 @@ var scenarioNet = sync.OnceValue(func() *Net {
 
 // certify records the pass's rewrites into a fresh ledger from two goroutines and checks that
 // their windows account for every change: the work of certification, without the synthesis.
-func certify(before, after *circuit.Circuit, rewrites []qcheck.Rewrite) (*qcheck.Ledger, error) {
-	l := new(qcheck.Ledger)
+func certify(before, after *circuit.Circuit, rewrites []budget.Rewrite) (*budget.Ledger, error) {
+	l := new(budget.Ledger)
 	errs := make([]error, 2)
 	var wg sync.WaitGroup
 	for w := 0; w < 2; w++ {
@@ -128,15 +128,15 @@ func TestScenarioCertified(t *testing.T) {
 	start := time.Now()
 	net := scenarioNet()
 	netTime := time.Since(start)
-	var l qcheck.Ledger
+	var l budget.Ledger
 	start = time.Now()
 	after, err := Pass{Net: net, Epsilon: eps, MaxLevels: 5}.Run(before, &l)
 	if err != nil {
 		t.Fatal(err)
 	}
 	runTime := time.Since(start)
-	qcheck.WithinBudget(t, &l, eps)
-	rewrites := make([]qcheck.Rewrite, 0, l.Len())
+	budget.Within(t, &l, eps)
+	rewrites := make([]budget.Rewrite, 0, l.Len())
 	for _, e := range l.Entries() {
 		rewrites = append(rewrites, e.Rewrite)
 	}
@@ -150,12 +150,12 @@ func TestScenarioCertified(t *testing.T) {
 		t.Errorf("certified again: %.15g, first %.15g", again.Bound(), l.Bound())
 	}
 	// A pass that reports only its windows: the ledger is rebuilt from the two circuits.
-	windows := make([]qcheck.Window, len(rewrites))
+	windows := make([]budget.Window, len(rewrites))
 	for k, r := range rewrites {
 		windows[k] = r.Window
 	}
 	start = time.Now()
-	rebuilt, err := qcheck.LedgerFromWindows(before, after, windows)
+	rebuilt, err := budget.FromWindows(before, after, windows)
 	if err != nil {
 		t.Fatal(err)
 	}
@@ -170,7 +170,7 @@ func TestScenarioCertified(t *testing.T) {
 		}
 	}
 	t.Logf("40 qubits, %d ops (%d rotations) → %d ops, T-count %d; ε = %g, share %.3g each, certified Σδ = %.4g, probability bound %.4g",
-		before.Len(), l.Len(), after.Len(), tcount, eps, l.Entries()[0].Share, l.Bound(), l.ProbabilityBound())
+		before.Len(), l.Len(), after.Len(), tcount, eps, l.Entries()[0].Share, l.Bound(), 2*l.Bound())
 	t.Logf("net %v, synthesis with recording %v, certification alone (record %d entries + Covers) %v, rebuilt from windows %v",
 		netTime, runTime, l.Len(), certTime, rebuildTime)
 }
@@ -179,12 +179,12 @@ func TestScenarioCertified(t *testing.T) {
 // rewrite (δ from the dense 2×2 matrices) and checking that the windows cover every change.
 func BenchmarkCertify40Qubits(b *testing.B) {
 	before := trotterStep(200, 2026)
-	var l qcheck.Ledger
+	var l budget.Ledger
 	after, err := Pass{Net: scenarioNet(), Epsilon: 0.1, MaxLevels: 5}.Run(before, &l)
 	if err != nil {
 		b.Fatal(err)
 	}
-	rewrites := make([]qcheck.Rewrite, 0, l.Len())
+	rewrites := make([]budget.Rewrite, 0, l.Len())
 	for _, e := range l.Entries() {
 		rewrites = append(rewrites, e.Rewrite)
 	}

@@ -27,7 +27,7 @@ func (n *Net) approximate(u quat, eps float64, maxLevels int) (word, float64, in
 }
 
 // solovayKitaev returns a word approximating u with n levels of the recursion of Dawson &
-// Nielsen (2006), §3 (from memory), on top of the net's basic approximations:
+// Nielsen (2006), as their algorithm states it, on top of the net's basic approximations:
 //
 //	U₀ = nearest word in the net
 //	Uₙ = Vₙ₋₁·Wₙ₋₁·Vₙ₋₁†·Wₙ₋₁†·Uₙ₋₁, where V·W·V†·W† = U·Uₙ₋₁† (balanced group commutator)
@@ -54,7 +54,8 @@ func (n *Net) solovayKitaev(u quat, level int) approximation {
 }
 
 // groupCommutator returns V and W with V·W·V†·W† = Δ, balanced so that both are rotations by the
-// same small angle φ (Dawson & Nielsen 2006, §4, from memory). For Δ a rotation by θ about n̂, take
+// same small angle φ (the construction of Dawson & Nielsen 2006; TestGroupCommutator checks the
+// product reproduces Δ). For Δ a rotation by θ about n̂, take
 // V = Rx(φ) and W = Ry(φ) with
 //
 //	sin(θ/2) = 2·sin²(φ/2)·√(1 − sin⁴(φ/2)),

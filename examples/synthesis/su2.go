@@ -29,7 +29,7 @@ func (p quat) dot(q quat) float64 { return p[0]*q[0] + p[1]*q[1] + p[2]*q[2] + p
 // distance returns the phase-free operator-norm distance min_φ ‖P − e^{iφ}Q‖ of two elements of
 // SU(2): Q†P has eigenvalues e^{±iα} with cos α = p·q, so the eigenphases fit in an arc of
 // 2·min(α, π − α) and the distance is 2·sin(min(α, π − α)/2) = √(2 − 2|p·q|) (the shortest-arc
-// formula of DESIGN.md's "Mathematics"). That is the shorter of the chords ‖p − q‖ and ‖p + q‖,
+// formula of package metric's documentation). That is the shorter of the chords ‖p − q‖ and ‖p + q‖,
 // which is how it is computed: without the cancellation of 2 − 2|p·q| near 0.
 func (p quat) distance(q quat) float64 {
 	var minus, plus float64

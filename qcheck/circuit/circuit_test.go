@@ -11,7 +11,7 @@ import (
 )
 
 // Validate names the op index and what is wrong for each kind of bad input, and engines rely on
-// it (DESIGN.md, "Bad input").
+// it (package circuit's documentation, Errors).
 func TestValidateNamesTheOp(t *testing.T) {
 	rz, _ := NewGate("rz", 0.5)
 	cases := []struct {

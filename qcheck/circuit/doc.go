@@ -13,6 +13,20 @@
 // builder methods are their upper-case forms with angles first and qubits after, so
 // `rz(θ) q[2];` is c.RZ(θ, 2).
 //
+// # Gate definitions
+//
+// Every gate's matrix is the textbook one (Nielsen & Chuang §4.2–4.3), written out with its
+// source in library.go. The rotations, the phase gate and u, whose global phases ExactPhase
+// sees, are
+//
+//	rx(θ) = exp(−iθX/2),  ry(θ) = exp(−iθY/2),  rz(θ) = exp(−iθZ/2) = diag(e^{−iθ/2}, e^{iθ/2})
+//	p(λ)  = diag(1, e^{iλ}) = e^{iλ/2}·rz(λ)
+//	u(θ, φ, λ) = [[cos(θ/2), −e^{iλ}·sin(θ/2)], [e^{iφ}·sin(θ/2), e^{i(φ+λ)}·cos(θ/2)]]
+//
+// so p and rz of the same angle agree up to a global phase only, and u is the general
+// single-qubit gate of the OpenQASM 2.0 paper (Cross et al., arXiv:1707.03429, eq. 2). A custom
+// gate ([Custom]) is applied in the same textbook order of its operands as the library's gates.
+//
 // # Errors
 //
 // Builder methods never panic and never fail on the spot: they record what they are given, and

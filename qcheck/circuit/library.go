@@ -20,7 +20,7 @@ type gateDef struct {
 // N&C is Nielsen & Chuang, Quantum Computation and Quantum Information (10th anniversary ed.),
 // §4.2 (single-qubit gates, rotations eq. 4.4–4.6) and §4.3 (controlled operations, Fig. 4.4);
 // the u gate is the general single-qubit gate of the OpenQASM 2.0 specification (Cross et al.,
-// arXiv:1707.03429, eq. 2) written with its phase as in DESIGN.md:
+// arXiv:1707.03429, eq. 2) written with its phase as in the package documentation:
 // u(θ,φ,λ) = [[cos(θ/2), −e^{iλ}sin(θ/2)], [e^{iφ}sin(θ/2), e^{i(φ+λ)}cos(θ/2)]].
 var library = map[string]gateDef{}
 

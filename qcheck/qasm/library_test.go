@@ -11,7 +11,7 @@ import (
 	"qcheck.dev/qcheck/sim"
 )
 
-// textbookU is u(θ,φ,λ) as DESIGN.md and the OpenQASM 2.0 paper (arXiv:1707.03429, eq. 2,
+// textbookU is u(θ,φ,λ) as package circuit's documentation and the OpenQASM 2.0 paper (arXiv:1707.03429, eq. 2,
 // with the phase that makes u(0,0,λ) = diag(1, e^{iλ})) write it.
 func textbookU(theta, phi, lambda float64) []complex128 {
 	c, s := complex(math.Cos(theta/2), 0), complex(math.Sin(theta/2), 0)

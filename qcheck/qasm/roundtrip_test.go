@@ -106,7 +106,7 @@ func TestFormatProgramRoundTrip(t *testing.T) {
 }
 
 // haar2 draws a 2×2 unitary e^{iα}·u(θ,φ,λ) with arbitrary angles; the matrix is built here
-// from the definition of u (DESIGN.md), not by the code under test.
+// from the definition of u (package circuit's documentation), not by the code under test.
 func haar2(t *rapid.T) []complex128 {
 	a := rapid.Float64Range(-4, 4).Draw(t, "alpha")
 	th := rapid.SampledFrom([]float64{0, math.Pi, 1.1, 2 * math.Pi}).Draw(t, "theta")

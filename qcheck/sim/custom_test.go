@@ -21,7 +21,7 @@ func dft(d int) *mat.CDense {
 	return m
 }
 
-// A custom gate is applied in the textbook order of its operands (DESIGN.md): the DFT on operands
+// A custom gate is applied in the textbook order of its operands (package circuit's documentation): the DFT on operands
 // (n−1, …, 1, 0) has local index equal to the basis index, so the circuit's unitary is the DFT
 // itself; on operands (0, 1, …, n−1) it is the DFT with the bits of rows and columns reversed.
 // The 3- and 4-qubit DFTs are dense, so they run through the general sparse kernel, including

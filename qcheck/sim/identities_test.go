@@ -46,7 +46,7 @@ func maxDiff(a, b mat.CMatrix, upToPhase bool) float64 {
 }
 
 // Textbook identities, Nielsen & Chuang §4.2–4.3 (exercises 4.13–4.20, Fig. 4.9) and the
-// definitions of DESIGN.md; each must hold to 1e-12 as matrices.
+// definitions of package circuit's documentation; each must hold to 1e-12 as matrices.
 func TestTextbookIdentities(t *testing.T) {
 	const tol = 1e-12
 	theta := 0.7345
@@ -93,7 +93,7 @@ func toffoliFig49() *circuit.Circuit {
 		T(1).T(2).H(2).CX(0, 1).T(0).Tdg(1).CX(0, 1)
 }
 
-// The qubit-order convention of DESIGN.md: CX(0,1) on two qubits swaps basis indices 1 and 3.
+// The qubit-order convention of package circuit's documentation: CX(0,1) on two qubits swaps basis indices 1 and 3.
 func TestQubitOrder(t *testing.T) {
 	u := unitaryOf(t, circuit.New(2).CX(0, 1))
 	want := [4]int{0, 3, 2, 1} // column j maps to row want[j]

@@ -7,6 +7,7 @@ import (
 	"math/rand/v2"
 	"runtime"
 
+	"qcheck.dev/metric"
 	"qcheck.dev/qcheck/circuit"
 )
 
@@ -94,8 +95,9 @@ func (r MatrixFreeResult) Exact(tol float64) bool { return r.Upper-r.Lower <= to
 //     its extreme Ritz vectors the two ends of the arc, and their equal-weight sum is the witness.
 //
 // A second Krylov space from an independent random state bounds the distance from above at the
-// phase found: by Kuczyński & Woźniakowski, SIAM J. Matrix Anal. Appl. 13 (1992), Thm. 4.2 (from
-// memory), a Krylov estimate ξ of the largest eigenvalue λ of a positive semidefinite matrix of
+// phase found: by the bound of Kuczyński & Woźniakowski for the Lanczos method from a random start
+// (SIAM J. Matrix Anal. Appl., 1992; the theorem's number and constant are as this package's
+// authors read them, not re-derived here), a Krylov estimate ξ of the largest eigenvalue λ of a positive semidefinite matrix of
 // order n, from a uniformly random start, satisfies ξ ≤ (1 − ε)λ with probability at most
 // 1.648·√n·e^{−√ε(2k−1)} after k steps. It is applied to (e^{−iφ}W − I)†(e^{−iφ}W − I), of order
 // 2·2^n as a real matrix, with k = ⌊(steps − 1)/2⌋ + 1 (the span of m powers of a unitary W holds,
@@ -114,7 +116,7 @@ func MatrixFreeDistance(u, v *circuit.Circuit, opts MatrixFreeOptions) (MatrixFr
 	if err != nil {
 		return MatrixFreeResult{}, err
 	}
-	pre, suf := sharedEnds(u, v)
+	pre, suf := circuit.CommonEnds(u, v)
 	middle := span(u, pre, u.Len()-suf)
 	w, err := Compile(middle.Compose(span(v, pre, v.Len()-suf).Inverse()))
 	if err != nil {
@@ -186,17 +188,6 @@ func MatrixFreeDistance(u, v *circuit.Circuit, opts MatrixFreeOptions) (MatrixFr
 	return res, nil
 }
 
-// sharedEnds returns how many ops u and v share at the start, and then at the end.
-func sharedEnds(u, v *circuit.Circuit) (pre, suf int) {
-	for pre < u.Len() && pre < v.Len() && u.Ops[pre].Equal(v.Ops[pre]) {
-		pre++
-	}
-	for suf < u.Len()-pre && suf < v.Len()-pre && u.Ops[u.Len()-1-suf].Equal(v.Ops[v.Len()-1-suf]) {
-		suf++
-	}
-	return pre, suf
-}
-
 // span returns a new circuit of c's width holding copies of c.Ops[from:to].
 func span(c *circuit.Circuit, from, to int) *circuit.Circuit {
 	out := circuit.New(c.Qubits())
@@ -223,18 +214,7 @@ func (wc *witnessCheck) measure(psi []complex128) float64 {
 	if wc.u.Apply(a) != nil || wc.v.Apply(b) != nil {
 		return 0
 	}
-	return alignedGap(a, b)
-}
-
-// alignedGap returns min over φ of ‖a − e^{iφ}b‖, attained at the phase of ⟨b|a⟩; it
-// overwrites a.
-func alignedGap(a, b []complex128) float64 {
-	rot := complex(1, 0)
-	if z := dot(b, a); cmplx.Abs(z) > 0 {
-		rot = z / complex(cmplx.Abs(z), 0)
-	}
-	axpy(-rot, b, a)
-	return norm(a)
+	return metric.AlignedDistance(a, b)
 }
 
 // exploreInvariant is the residual below which the exploring Krylov space is taken as invariant:
@@ -450,7 +430,7 @@ func (a *arnoldi) predictedDeviation(y []complex128) float64 {
 	if ny == 0 {
 		return 0
 	}
-	return alignedGap(z, yy) / ny
+	return metric.AlignedDistance(z, yy) / ny
 }
 
 // lift returns Q y.

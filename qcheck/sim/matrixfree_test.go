@@ -100,7 +100,7 @@ func matrixFreeCases(rng *rand.Rand, n int) []matrixFreeCase {
 	flipped := func(lambda float64) *circuit.Circuit { return u.Clone().Compose(allOnesPhase(n, lambda)) }
 	none := math.NaN()
 	// A phase λ on one basis state: W has one eigenphase ±λ and the others 0, so D = 2·sin(|λ|/4)
-	// (DESIGN.md).
+	// (package metric's documentation).
 	cases := []matrixFreeCase{
 		{"identical", u, guard(u), 0},
 		{"one angle off by 1e-3", u, guard(perturb(rng, u, 1, 1e-3)), none},
@@ -125,7 +125,7 @@ func guard(c *circuit.Circuit) *circuit.Circuit {
 }
 
 // The matrix-free distance agrees to 1e-8 with the dense phase-free distance of package metric
-// (the 2·sin(θ/4) formula of DESIGN.md, from an eigendecomposition) up to 8 qubits, 10 with
+// (the 2·sin(θ/4) formula of package metric's documentation, from an eigendecomposition) up to 8 qubits, 10 with
 // -matrixfree.wide, and with the closed form of single-state defects at 12 qubits with
 // -matrixfree.wide; and its bounds bracket the reference.
 func TestMatrixFreeAgreesWithDense(t *testing.T) {
@@ -196,7 +196,7 @@ func customGate(t *testing.T, name string, k int, entry func(i, j int) complex12
 // A defect of phase λ confined to 256 of the 2^17 basis states of 17 qubits: with an extra qubit
 // a, the ops "a ^= AND(q0…q7)", "phase λ if AND(q8…q15) and a", "a ^= AND(q0…q7)" multiply a
 // basis state by e^{iλ} exactly when q8…q15 are all 1 and a ≠ AND(q0…q7). So W = V†U has the
-// eigenphase λ on that subspace and 0 elsewhere, and D = 2·sin(|λ|/4) (DESIGN.md), while a random
+// eigenphase λ on that subspace and 0 elsewhere, and D = 2·sin(|λ|/4) (package metric's documentation), while a random
 // input state puts only 2^−9 of its weight there.
 func TestMatrixFreeHiddenDefectAtWidth(t *testing.T) {
 	if testing.Short() {
@@ -237,7 +237,7 @@ func TestMatrixFreeHiddenDefectAtWidth(t *testing.T) {
 }
 
 // With a tolerance the run stops once the verdict is settled: a pair 5e-4 apart (one angle off by
-// 1e-3: D = 2·sin(1e-3/4), DESIGN.md) is told apart by the witness without certification, and a
+// 1e-3: D = 2·sin(1e-3/4), package metric's documentation) is told apart by the witness without certification, and a
 // pair equal up to rounding is certified as soon as the bound allows, in fewer steps than a full
 // run.
 func TestMatrixFreeStopsAtTolerance(t *testing.T) {

@@ -81,6 +81,19 @@ func (p Pauli) Equal(o Pauli) bool {
 	return true
 }
 
+// Anticommutes reports whether p and o anticommute: whether they differ, with neither the
+// identity, on an odd number of qubits (single-qubit X, Y, Z anticommute pairwise, so each such
+// qubit contributes a sign −1 to swapping the two). Signs do not matter. Both must act on the
+// same number of qubits.
+func (p Pauli) Anticommutes(o Pauli) bool {
+	odd := 0
+	for w := range p.x {
+		// Per qubit, x·z' + z·x' (mod 2) is 1 exactly where the two factors differ and neither is I.
+		odd ^= bits.OnesCount64(p.x[w]&o.z[w]^p.z[w]&o.x[w]) & 1
+	}
+	return odd == 1
+}
+
 // String writes the sign and the non-identity factors with their qubits, as in "+X0 Z3" or
 // "−Y1"; the identity is "+I". The minus sign is U+2212.
 func (p Pauli) String() string {

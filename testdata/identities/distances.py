@@ -1,7 +1,7 @@
 """Reference distances for the identity corpus, computed independently of the Go code.
 
 For every pair NAME.before.qasm / NAME.after.qasm in this folder, build both unitaries with
-NumPy from textbook gate matrices (DESIGN.md conventions: qubit 0 is the least-significant bit
+NumPy from textbook gate matrices (package circuit's documentation conventions: qubit 0 is the least-significant bit
 of a basis index; a gate's first operand is the most significant bit of its own matrix) and
 compute the phase-free operator-norm distance min_phi ||U - e^{i phi} V|| two ways:
   A. from the eigenphases of V^dagger U: 2 sin(theta/4), theta the shortest arc holding them all;

@@ -14,7 +14,7 @@ not from the closed forms the Go code uses:
                      bracket re-centred three times so the absolute tolerance
                      on phi reaches ~1e-15
   - eigenphases:     numpy.angle(numpy.linalg.eigvals(v^H u)), sorted
-  - diamond:         Watrous (2018), chapter 3 (Thm 3.55, number from memory): 2 sqrt(1 - nu^2), nu the distance
+  - diamond:         Watrous (2018), chapter 3 (the theorem on unitary channels): 2 sqrt(1 - nu^2), nu the distance
                      from 0 to the convex hull of the eigenvalues of u^H v;
                      found as nu = cos(min over beta of max_k |angle(l_k e^{-i beta})|)
                      (0 if that minimum exceeds pi/2) by the same grid and

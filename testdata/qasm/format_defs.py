@@ -1,6 +1,6 @@
 """Checks, independently of the Go code, that the gate definitions package qasm writes for gates
 outside qelib1.inc (iswap, iswapdg, ryy) and its cu3 expansion have exactly the textbook matrices
-of DESIGN.md, global phase included. Run: /usr/bin/python3 format_defs.py > format_defs.out
+of package circuit's documentation, global phase included. Run: /usr/bin/python3 format_defs.py > format_defs.out
 Matrices are in textbook operand order: the first operand is the most significant bit."""
 import numpy as np
 I=np.eye(2);H=np.array([[1,1],[1,-1]])/np.sqrt(2);S=np.diag([1,1j]);X=np.array([[0,1],[1,0]]);Y=np.array([[0,-1j],[1j,0]]);Z=np.diag([1,-1])

@@ -1,11 +1,11 @@
 #!/usr/bin/python3
 """Reference distances for qcheck.Compare, computed independently of the Go code.
 
-Gate matrices are written out from their textbook definitions (DESIGN.md, "Gate definitions"),
+Gate matrices are written out from their textbook definitions (package circuit's gate definitions),
 full-register matrices are built by explicit index mapping (qubit 0 is the least-significant bit
 of a basis index; a gate's first operand is the most significant bit of its local index), and the
 phase-free distance is found by brute force: a dense grid over the global phase followed by
-a golden-section search of numpy's spectral norm. The eigenphase formula of DESIGN.md
+a golden-section search of numpy's spectral norm. The eigenphase formula of package metric's documentation
 is evaluated too and must agree, as a check of this script.
 
 Run: /usr/bin/python3 testdata/qcheck/compare_reference.py > testdata/qcheck/compare_reference.json

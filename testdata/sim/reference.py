@@ -7,7 +7,7 @@ arXiv:1707.03429, for u; exp(-iθ P⊗P/2) for the two-qubit Pauli rotations), i
 Go code. A circuit's full unitary is built by contracting each gate into a tensor of the unitary
 with numpy.tensordot; a statevector likewise.
 
-Conventions (DESIGN.md): qubit 0 is the least-significant bit of a basis index; a gate's first
+Conventions (package circuit's documentation): qubit 0 is the least-significant bit of a basis index; a gate's first
 operand is the most significant bit of its own matrix.
 
 Writes, next to this script:

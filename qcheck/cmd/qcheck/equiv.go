@@ -21,7 +21,7 @@ type compareFlags struct {
 	ancillas   string
 	dirty      bool
 	measure    string
-	engine     string
+	engine     qcheck.Engine
 	limits     readLimits
 }
 
@@ -33,14 +33,8 @@ func (f *compareFlags) register(fs *flag.FlagSet) {
 	fs.StringVar(&f.ancillas, "ancillas", "", "qubits `Q,...` of B borrowed as ancillas (clean: start and end in |0⟩); A may omit them")
 	fs.BoolVar(&f.dirty, "dirty", false, "the -ancillas start in any state and must be restored")
 	fs.StringVar(&f.measure, "measure", "operator", "`MEASURE` that decides: operator (norm), diamond, or fidelity (average infidelity)")
-	fs.StringVar(&f.engine, "engine", "auto", "`ENGINE` that answers: auto, dense, tableau (Clifford circuits) or matrix-free (see above)")
+	fs.TextVar(&f.engine, "engine", qcheck.Auto, "`ENGINE` that answers: auto, dense, tableau (Clifford circuits) or matrix-free (see above)")
 	f.limits.register(fs)
-}
-
-// engines maps the -engine names to qcheck's engines.
-var engines = map[string]qcheck.Engine{
-	qcheck.Auto.String(): qcheck.Auto, qcheck.Dense.String(): qcheck.Dense,
-	qcheck.Tableau.String(): qcheck.Tableau, qcheck.MatrixFree.String(): qcheck.MatrixFree,
 }
 
 // options turns the flags into qcheck options.
@@ -81,15 +75,34 @@ func (f *compareFlags) options() ([]qcheck.Option, error) {
 	default:
 		return nil, fmt.Errorf("-measure %q: choose operator, diamond or fidelity", f.measure)
 	}
-	e, ok := engines[f.engine]
-	if !ok {
-		return nil, fmt.Errorf("-engine %q: choose auto, dense, tableau or matrix-free", f.engine)
-	}
-	if e != qcheck.Auto {
-		opts = append(opts, qcheck.UseEngine(e))
+	if f.engine != qcheck.Auto {
+		opts = append(opts, qcheck.UseEngine(f.engine))
 	}
 	return opts, nil
 }
+
+// flagWords rewrites package qcheck's messages, which name its Go options, in the words of this
+// command's flags, and A and B for want and got.
+var flagWords = strings.NewReplacer(
+	"Tolerance(", "-tol (",
+	"ExactPhase()", "-exact-phase",
+	"ExactPhase", "-exact-phase",
+	"OutputPermutation", "-perm",
+	"Ancillas(", "-ancillas (",
+	"with Ancillas", "with -ancillas",
+	"Measured with UseMeasure(", "-measured with -measure (",
+	"UseMeasure(", "-measure (",
+	"use OperatorNorm", "use -measure operator",
+	"Measured", "-measured",
+	"UseEngine(", "-engine (",
+	"got's", "B's",
+	"want's", "A's",
+	"want is ", "A is ",
+	"got is ", "B is ",
+	"want has ", "A has ",
+	"got has ", "B has ",
+	"want must ", "A must ",
+)
 
 // intList reads "2,0,1".
 func intList(s string) ([]int, error) {
@@ -130,7 +143,7 @@ func (f *compareFlags) compareFiles(a, b string) (qcheck.Result, error) {
 	}
 	r, err := qcheck.Compare(pa.Circuit, pb.Circuit, opts...)
 	if err != nil {
-		return qcheck.Result{}, fmt.Errorf("%s vs %s: %v", a, b, err)
+		return qcheck.Result{}, fmt.Errorf("%s vs %s: %s", a, b, flagWords.Replace(err.Error()))
 	}
 	return r, nil
 }
@@ -152,8 +165,10 @@ stated probability, and a pair neither bound settles is not counted as equivalen
 -exact-phase, -measured or clean -ancillas; -engine dense forces the dense engine at any width
 its memory allows (16·4^n bytes a matrix, at most 4 GiB: 14 qubits), which may take hours.
 
-With -json, one JSON object:
-  equivalent         true when distance ≤ tolerance
+With -json, one JSON object (the encoding of qcheck.Result; keys stay, text may change):
+  equivalent         true when distance ≤ tolerance, as the engine certifies it
+  undecided          present when the engine's bounds settle neither way: why (equivalent
+                     is then false, meaning not shown equivalent)
   distance           the distance in the chosen measure
   measure            "operator norm", "diamond norm" or "average infidelity" ("total variation"
                      with -measured)
@@ -166,6 +181,10 @@ With -json, one JSON object:
   witness_gap        the gap the witness shows: a certified lower bound on operator_distance
   engine             "dense", "tableau" or "matrix-free": the engine that answered
   certifies          in words, what the engine's answer guarantees
+  qubits             the width of the register that states and outcomes refer to (B's)
+  measured           with -measured, the qubit of B's register each outcome bit reads (the
+                     first the least significant; -1 for a bit B never writes)
+  bits               with -measured and measure ops, the classical bit each outcome bit is
   measurement        omitted when the circuits are equivalent or differ only by a global phase
                      (no measurement tells them apart); else an experiment that does:
     input_basis      basis index of the input state when it is a basis state, else null
@@ -173,7 +192,24 @@ With -json, one JSON object:
                      computational basis; false: test whether the output is want's output state
     outcome          with basis, the outcome index whose probability differs most; else null
     want             the probability of that outcome (or of passing the test) after want
-    got              the same after got`
+    got              the same after got
+  pauli              with the tableau engine, when the circuits differ: a Pauli generator
+                     they conjugate differently
+    generator        the generator, such as "+X0" (qubits with I are left out)
+    want             its image under want, a Pauli string
+    got              its image under got
+    anticommute      whether the two images anticommute
+  blame              omitted when the op lists are equal; else the ops that explain the
+                     difference:
+    found            true
+    first_diff       the first op index at which the op lists differ
+    want_ops         {start, end}: the half-open range of A's ops that differ once the common
+                     start and end are removed
+    got_ops          the same range of B's ops
+    start            the first op of a range
+    end              one past its last op
+    prefix           the length of the shortest prefix of B that already differs from A's, or
+                     0 when not computed`
 
 func equiv(args []string, stdout, stderr io.Writer) int {
 	c := newCommand("equiv", "equiv [flags] A.qasm B.qasm", equivAbout, stdout, stderr)
@@ -189,7 +225,7 @@ func equiv(args []string, stdout, stderr io.Writer) int {
 		return c.fail("%v", err)
 	}
 	if *asJSON {
-		out, err := json.MarshalIndent(resultJSON(r), "", "  ")
+		out, err := json.MarshalIndent(r, "", "  ")
 		if err != nil {
 			return c.fail("%v", err)
 		}
@@ -206,54 +242,4 @@ func equiv(args []string, stdout, stderr io.Writer) int {
 		return exitDiffer
 	}
 	return exitOK
-}
-
-// verdict is the JSON form of a comparison.
-type verdict struct {
-	Equivalent       bool         `json:"equivalent"`
-	Distance         float64      `json:"distance"`
-	Measure          string       `json:"measure"`
-	Tolerance        float64      `json:"tolerance"`
-	ExactPhase       bool         `json:"exact_phase"`
-	Phase            float64      `json:"phase"`
-	OperatorDistance float64      `json:"operator_distance"`
-	Witness          [][2]float64 `json:"witness"`
-	WitnessGap       float64      `json:"witness_gap"`
-	Engine           string       `json:"engine"`
-	Certifies        string       `json:"certifies"`
-	Measurement      *measurement `json:"measurement,omitempty"`
-}
-
-// measurement is the JSON form of qcheck.Measurement: prepare the input (input_basis when it is
-// a basis state, else null), run, measure; basis tells a computational-basis measurement with
-// outcome seen with probability want and got, otherwise a projection onto want's output (and
-// outcome is null).
-type measurement struct {
-	InputBasis *int    `json:"input_basis"`
-	Basis      bool    `json:"basis"`
-	Outcome    *int    `json:"outcome"`
-	Want       float64 `json:"want"`
-	Got        float64 `json:"got"`
-}
-
-func resultJSON(r qcheck.Result) verdict {
-	v := verdict{
-		Equivalent: r.Equivalent, Distance: r.Distance, Measure: r.Measure.String(),
-		Tolerance: r.Tolerance, ExactPhase: r.ExactPhase, Phase: r.Phase,
-		OperatorDistance: r.OperatorDistance, WitnessGap: r.WitnessGap,
-		Engine: r.Engine.String(), Certifies: r.Certifies, Witness: [][2]float64{},
-	}
-	for _, a := range r.Witness {
-		v.Witness = append(v.Witness, [2]float64{real(a), imag(a)})
-	}
-	if m := r.Measurement; m.Input != nil {
-		v.Measurement = &measurement{Basis: m.Basis, Want: m.Want, Got: m.Got}
-		if m.InputBasis >= 0 {
-			v.Measurement.InputBasis = &m.InputBasis
-		}
-		if m.Basis {
-			v.Measurement.Outcome = &m.Outcome
-		}
-	}
-	return v
 }

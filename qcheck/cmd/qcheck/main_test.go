@@ -16,6 +16,7 @@ import (
 	"strings"
 	"testing"
 
+	"qcheck.dev/qcheck"
 	"qcheck.dev/qcheck/qasm"
 )
 
@@ -197,7 +198,7 @@ func TestEquivEngineFlag(t *testing.T) {
 		stderr string
 	}{
 		{[]string{"-engine", "tableau", ta, tb}, "Clifford"},
-		{[]string{"-engine", "fast", ta, tb}, "-engine \"fast\": choose auto, dense, tableau or matrix-free"},
+		{[]string{"-engine", "fast", ta, tb}, "flag -engine: unknown engine; choose auto, dense, tableau or matrix-free"},
 	} {
 		if code, _, errOut := engineOf(c.args...); code != exitBadUsed || !strings.Contains(errOut, c.stderr) {
 			t.Errorf("equiv %v: exit %d, stderr %q; want exit 2 and …%s…", c.args, code, errOut, c.stderr)
@@ -218,7 +219,7 @@ func writeFiles(t *testing.T, files map[string]string) string {
 
 // The comparison flags. Expected verdicts by hand: a SWAP only relabels qubits (N&C §1.3.4), so
 // with the permutation that undoes it the circuits agree; rz and p differ by a global phase only
-// (DESIGN.md); Z before a computational-basis measurement changes no probability (N&C §2.2.5,
+// (package circuit's documentation); Z before a computational-basis measurement changes no probability (N&C §2.2.5,
 // the measurement postulate: |e^{iπ}a|² = |a|²).
 func TestEquivFlags(t *testing.T) {
 	dir := writeFiles(t, map[string]string{
@@ -265,7 +266,7 @@ func TestEquivFlags(t *testing.T) {
 		{[]string{"equiv", "-measure", "fidelity", f("routed_want.qasm"), f("routed_got.qasm")}, exitDiffer, ""},
 		{[]string{"equiv", "-measure", "loud", f("rz.qasm"), f("p.qasm")}, exitBadUsed, "choose operator, diamond or fidelity"},
 		{[]string{"equiv", "-perm", "1,x", f("rz.qasm"), f("p.qasm")}, exitBadUsed, "-perm"},
-		{[]string{"equiv", "-perm", "0,0", f("routed_want.qasm"), f("routed_got.qasm")}, exitBadUsed, "OutputPermutation"},
+		{[]string{"equiv", "-perm", "0,0", f("routed_want.qasm"), f("routed_got.qasm")}, exitBadUsed, "-perm[1] = 0 repeats -perm[0]"},
 		{[]string{"equiv", f("rz.qasm"), f("three.qasm")}, exitBadUsed, "rz.qasm vs"},
 		{[]string{"equiv", f("bad.qasm"), f("rz.qasm")}, exitBadUsed, "bad.qasm:5:9: expected \";\""},
 		{[]string{"equiv", f("missing.qasm"), f("rz.qasm")}, exitBadUsed, "missing.qasm"},
@@ -289,7 +290,7 @@ func TestEquivFlags(t *testing.T) {
 // measures for CX(0,1) against CX(1,0), worked by hand: V†U is a 3-cycle on the basis states
 // 1, 2, 3 fixing 0, with eigenvalues 1, 1, ω, ω² (ω = e^{2πi/3}). So ‖U − V‖ = |ω − 1| = √3;
 // the shortest arc holding 0, 2π/3, 4π/3 is 4π/3, so the phase-free distance is 2 sin(π/3) = √3;
-// 0 lies in the convex hull of the eigenvalues, so the diamond distance is 2 (DESIGN.md formula);
+// 0 lies in the convex hull of the eigenvalues, so the diamond distance is 2 (package metric's documentation formula);
 // tr U†V = 1, so the average fidelity is (4 + 1)/(4·5) = 1/4 and the process fidelity 1/16.
 func TestMeasures(t *testing.T) {
 	a, b := pairFiles("cnot_swapped_roles")
@@ -455,8 +456,34 @@ func TestHelp(t *testing.T) {
 
 // Every JSON field that equiv and measures write is described in their -h (equiv lists one field
 // a line), and so are their costs (the widths at which each engine takes over, from
-// qcheck/engine.go).
+// denseAuto in qcheck/dense.go and matrixFreeAuto in qcheck/matrixfree.go).
 func TestHelpDescribesJSONAndCost(t *testing.T) {
+	jsonKeys := func(t *testing.T, v any, linePattern string) []string {
+		t.Helper()
+		data, err := json.Marshal(v)
+		if err != nil {
+			t.Fatal(err)
+		}
+		var out []string
+		var walk func(any)
+		walk = func(x any) {
+			if m, ok := x.(map[string]any); ok {
+				for k, y := range m {
+					out = append(out, fmt.Sprintf(linePattern, regexp.QuoteMeta(k)))
+					walk(y)
+				}
+			}
+		}
+		var top any
+		if err := json.Unmarshal(data, &top); err != nil {
+			t.Fatal(err)
+		}
+		walk(top)
+		if len(out) < 20 {
+			t.Fatalf("only %d keys in %s", len(out), data)
+		}
+		return out
+	}
 	fieldsOf := func(v any, linePattern string) []string {
 		var out []string
 		ty := reflect.TypeOf(v)
@@ -467,11 +494,18 @@ func TestHelpDescribesJSONAndCost(t *testing.T) {
 		return out
 	}
 	const listed, inline = `(?m)^ +%s[ ,]`, `[\s(]%s[\s,.)]`
+	// A result with every optional part present, so that its encoding has every key.
+	full := qcheck.Result{
+		Undecided: "bounds straddle the tolerance", Measured: []int{0}, Bits: []int{0},
+		Measurement: qcheck.Measurement{Input: []complex128{1, 0}, InputBasis: 0, Basis: true},
+		Pauli:       &qcheck.PauliEvidence{Generator: "+X0", Want: "+X0", Got: "+Z0"},
+		Blame:       qcheck.Blame{Found: true},
+	}
 	for _, c := range []struct {
 		cmd  string
 		want []string
 	}{
-		{"equiv", append(append(fieldsOf(verdict{}, listed), fieldsOf(measurement{}, listed)...),
+		{"equiv", append(jsonKeys(t, full, listed),
 			"else null", "up to 12 qubits", "tableau engine when both circuits are Clifford",
 			"matrix-free estimate up to 22 qubits", "-engine dense")},
 		{"measures", append(fieldsOf(allMeasures{}, inline), "wider than 10 qubits")},

@@ -1,4 +1,4 @@
-package qcheck
+package budget
 
 import (
 	"math"
@@ -57,7 +57,7 @@ func drawApproximatePass(t *rapid.T, n, maxOps int) approximatePass {
 				repl = drawCircuit(t, 2, 3, "arbitrary")
 			}
 		}
-		w := Window{Before: Span{i, i + 1}, After: Span{after.Len(), after.Len()}, Qubits: append([]int(nil), op.Qubits...)}
+		w := Window{Before: circuit.Span{Start: i, End: i + 1}, After: circuit.Span{Start: after.Len(), End: after.Len()}, Qubits: append([]int(nil), op.Qubits...)}
 		// Let the next op through the window when it acts on other qubits, on either side of
 		// the replacement.
 		var passer *circuit.Op
@@ -134,9 +134,9 @@ func TestBoundCoversTrueDistance(t *testing.T) {
 		for k, r := range p.rewrites {
 			windows[k] = r.Window
 		}
-		rebuilt, err := LedgerFromWindows(p.before, p.after, windows)
+		rebuilt, err := FromWindows(p.before, p.after, windows)
 		if err != nil {
-			t.Fatalf("LedgerFromWindows: %v", err)
+			t.Fatalf("FromWindows: %v", err)
 		}
 		if math.Abs(rebuilt.Bound()-l.Bound()) > floatSlack {
 			t.Fatalf("rebuilt bound %.15g, recorded %.15g", rebuilt.Bound(), l.Bound())

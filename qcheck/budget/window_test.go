@@ -1,4 +1,4 @@
-package qcheck
+package budget
 
 import (
 	"strings"
@@ -8,14 +8,14 @@ import (
 )
 
 // A two-qubit block on q0,q1 interleaved with a gate on q2 that the window lets through.
-func TestLedgerFromWindowsLetsDisjointOpsThrough(t *testing.T) {
+func TestFromWindowsLetsDisjointOpsThrough(t *testing.T) {
 	before := circuit.New(3).H(0).CX(0, 1).X(2).RZ(0.3, 1).CX(0, 1).H(2)
 	// The block cx·rz·cx on (q0, q1) is rzz(0.3) exactly (the CNOT-conjugated Z rotation for
 	// exp(−iθZ⊗Z/2), Nielsen & Chuang §4.7.3, from memory); the pass wrote it as rzz(0.31), with
 	// x q2 moved ahead of it.
 	after := circuit.New(3).H(0).X(2).RZZ(0.31, 0, 1).H(2)
-	w := Window{Before: Span{1, 5}, After: Span{1, 3}, Qubits: []int{0, 1}}
-	l, err := LedgerFromWindows(before, after, []Window{w})
+	w := Window{Before: circuit.Span{Start: 1, End: 5}, After: circuit.Span{Start: 1, End: 3}, Qubits: []int{0, 1}}
+	l, err := FromWindows(before, after, []Window{w})
 	if err != nil {
 		t.Fatal(err)
 	}
@@ -38,7 +38,7 @@ func absDiff(a, b float64) float64 {
 
 func TestCoversFindsUnaccountedChanges(t *testing.T) {
 	before := circuit.New(3).H(0).RZ(0.2, 1).CX(1, 2).T(2)
-	one := Window{Before: Span{1, 2}, After: Span{1, 2}, Qubits: []int{1}}
+	one := Window{Before: circuit.Span{Start: 1, End: 2}, After: circuit.Span{Start: 1, End: 2}, Qubits: []int{1}}
 	for _, c := range []struct {
 		name    string
 		after   *circuit.Circuit
@@ -52,18 +52,18 @@ func TestCoversFindsUnaccountedChanges(t *testing.T) {
 		{"added outside", circuit.New(3).H(0).S(1).CX(1, 2).T(2).X(0), []Window{one},
 			"after op 4 (x q0) is in no window"},
 		{"straddling", circuit.New(3).H(0).S(1).CX(1, 2).T(2),
-			[]Window{{Before: Span{1, 3}, After: Span{1, 3}, Qubits: []int{1}}},
+			[]Window{{Before: circuit.Span{Start: 1, End: 3}, After: circuit.Span{Start: 1, End: 3}, Qubits: []int{1}}},
 			"before op 2 (cx q1,q2) acts on some of the window's qubits q1 and some others"},
 		{"overlapping", circuit.New(3).H(0).S(1).CX(1, 2).T(2),
-			[]Window{one, {Before: Span{1, 2}, After: Span{1, 2}, Qubits: []int{0}}},
+			[]Window{one, {Before: circuit.Span{Start: 1, End: 2}, After: circuit.Span{Start: 1, End: 2}, Qubits: []int{0}}},
 			"overlap"},
 		{"past the end", circuit.New(3).H(0).S(1),
-			[]Window{{Before: Span{1, 4}, After: Span{1, 9}, Qubits: []int{1, 2}}},
+			[]Window{{Before: circuit.Span{Start: 1, End: 4}, After: circuit.Span{Start: 1, End: 9}, Qubits: []int{1, 2}}},
 			"span [1, 9) runs past the 2 ops of the circuit after"},
 		{"width", circuit.New(4), nil, "different widths: 3 qubits before, 4 after"},
 	} {
-		if _, err := LedgerFromWindows(before, c.after, c.windows); err == nil || !strings.Contains(err.Error(), c.want) {
-			t.Errorf("%s: LedgerFromWindows = %v, want an error containing %q", c.name, err, c.want)
+		if _, err := FromWindows(before, c.after, c.windows); err == nil || !strings.Contains(err.Error(), c.want) {
+			t.Errorf("%s: FromWindows = %v, want an error containing %q", c.name, err, c.want)
 		}
 	}
 }
@@ -74,7 +74,7 @@ func TestCoversChecksRecordedPieces(t *testing.T) {
 	after := circuit.New(2).S(1).CX(0, 1)
 	var l Ledger
 	// The pass claims it replaced rz(0.25), not the rz(0.2) that is there.
-	if err := l.Record(Rewrite{Window: Window{Before: Span{0, 1}, After: Span{0, 1}, Qubits: []int{1}},
+	if err := l.Record(Rewrite{Window: Window{Before: circuit.Span{Start: 0, End: 1}, After: circuit.Span{Start: 0, End: 1}, Qubits: []int{1}},
 		Piece: circuit.New(1).RZ(0.25, 0), Replacement: circuit.New(1).S(0)}); err != nil {
 		t.Fatal(err)
 	}
@@ -90,7 +90,7 @@ func BenchmarkRecord1Qubit(b *testing.B) {
 	var l Ledger
 	b.ReportAllocs()
 	for i := 0; b.Loop(); i++ {
-		if err := l.Record(Rewrite{Window: Window{Before: Span{i, i + 1}, After: Span{0, 10}, Qubits: []int{7}}, Piece: piece, Replacement: repl}); err != nil {
+		if err := l.Record(Rewrite{Window: Window{Before: circuit.Span{Start: i, End: i + 1}, After: circuit.Span{Start: 0, End: 10}, Qubits: []int{7}}, Piece: piece, Replacement: repl}); err != nil {
 			b.Fatal(err)
 		}
 	}
@@ -102,7 +102,7 @@ func BenchmarkRecord2Qubit(b *testing.B) {
 	var l Ledger
 	b.ReportAllocs()
 	for i := 0; b.Loop(); i++ {
-		if err := l.Record(Rewrite{Window: Window{Before: Span{i, i + 3}, After: Span{0, 1}, Qubits: []int{3, 9}}, Piece: piece, Replacement: repl}); err != nil {
+		if err := l.Record(Rewrite{Window: Window{Before: circuit.Span{Start: i, End: i + 3}, After: circuit.Span{Start: 0, End: 1}, Qubits: []int{3, 9}}, Piece: piece, Replacement: repl}); err != nil {
 			b.Fatal(err)
 		}
 	}

@@ -1,31 +1,12 @@
-package qcheck
+package budget
 
 import (
 	"fmt"
 	"sort"
+	"strings"
 
 	"qcheck.dev/qcheck/circuit"
 )
-
-// Span is a half-open range [Start, End) of op indices in a circuit. An empty span marks a place
-// between ops: Span{5, 5} is the gap before op 5.
-type Span struct {
-	Start, End int
-}
-
-// Len returns the number of ops in the span.
-func (s Span) Len() int { return s.End - s.Start }
-
-// String writes the span for people: "op 7", "ops 7–9", or "nothing (at op 7)" when empty.
-func (s Span) String() string {
-	switch s.Len() {
-	case 0:
-		return fmt.Sprintf("nothing (at op %d)", s.Start)
-	case 1:
-		return fmt.Sprintf("op %d", s.Start)
-	}
-	return fmt.Sprintf("ops %d–%d", s.Start, s.End-1)
-}
 
 // Window says where a rewrite happened: the ops it took out of the circuit before the pass, the
 // ops it put into the circuit after the pass, and the qubits the piece acts on, in the order that
@@ -35,8 +16,8 @@ func (s Span) String() string {
 // qubits, say, interleaved with gates elsewhere): such ops must act only on qubits outside the
 // window, so they commute with the piece, and they must appear in the same order on both sides.
 type Window struct {
-	Before Span
-	After  Span
+	Before circuit.Span
+	After  circuit.Span
 	Qubits []int
 }
 
@@ -56,31 +37,31 @@ func (w Window) String() string {
 // check reports a malformed window.
 func (w Window) check() error {
 	if len(w.Qubits) == 0 {
-		return fmt.Errorf("qcheck: ledger: window %s names no qubits", w)
+		return fmt.Errorf("budget: window %s names no qubits", w)
 	}
 	for i, q := range w.Qubits {
 		if q < 0 {
-			return fmt.Errorf("qcheck: ledger: window %s: negative qubit %d", w, q)
+			return fmt.Errorf("budget: window %s: negative qubit %d", w, q)
 		}
 		for _, p := range w.Qubits[:i] {
 			if p == q {
-				return fmt.Errorf("qcheck: ledger: window %s: qubit %d repeated", w, q)
+				return fmt.Errorf("budget: window %s: qubit %d repeated", w, q)
 			}
 		}
 	}
-	for _, s := range []Span{w.Before, w.After} {
+	for _, s := range []circuit.Span{w.Before, w.After} {
 		if s.Start < 0 || s.End < s.Start {
-			return fmt.Errorf("qcheck: ledger: window has bad span [%d, %d)", s.Start, s.End)
+			return fmt.Errorf("budget: window has bad span [%d, %d)", s.Start, s.End)
 		}
 	}
 	return nil
 }
 
-// LedgerFromWindows rebuilds the ledger of a pass that reports only which windows it replaced:
+// FromWindows rebuilds the ledger of a pass that reports only which windows it replaced:
 // it cuts each window's piece out of before and its replacement out of after, records them, and
 // checks with Covers that the windows account for every difference between the two circuits.
 // Each window's share of the budget is left at zero.
-func LedgerFromWindows(before, after *circuit.Circuit, windows []Window) (*Ledger, error) {
+func FromWindows(before, after *circuit.Circuit, windows []Window) (*Ledger, error) {
 	if err := checkPair(before, after); err != nil {
 		return nil, err
 	}
@@ -125,36 +106,36 @@ func (l *Ledger) Covers(before, after *circuit.Circuit) error {
 			return fmt.Errorf("entry %d: %w", e.Seq, err)
 		}
 		if !piece.Equal(e.Piece) {
-			return fmt.Errorf("qcheck: ledger: entry %d at %s: the recorded piece is not what the circuit before holds there", e.Seq, e.Window)
+			return fmt.Errorf("budget: entry %d at %s: the recorded piece is not what the circuit before holds there", e.Seq, e.Window)
 		}
 		repl, err := cut(after, "after", e.Window.After, e.Window.Qubits)
 		if err != nil {
 			return fmt.Errorf("entry %d: %w", e.Seq, err)
 		}
 		if !repl.Equal(e.Replacement) {
-			return fmt.Errorf("qcheck: ledger: entry %d at %s: the recorded replacement is not what the circuit after holds there", e.Seq, e.Window)
+			return fmt.Errorf("budget: entry %d at %s: the recorded replacement is not what the circuit after holds there", e.Seq, e.Window)
 		}
 	}
-	tb, err := outline(before, windows, func(w Window) Span { return w.Before })
+	tb, err := outline(before, windows, func(w Window) circuit.Span { return w.Before })
 	if err != nil {
-		return fmt.Errorf("qcheck: ledger: circuit before: %w", err)
+		return fmt.Errorf("budget: circuit before: %w", err)
 	}
-	ta, err := outline(after, windows, func(w Window) Span { return w.After })
+	ta, err := outline(after, windows, func(w Window) circuit.Span { return w.After })
 	if err != nil {
-		return fmt.Errorf("qcheck: ledger: circuit after: %w", err)
+		return fmt.Errorf("budget: circuit after: %w", err)
 	}
 	for i := 0; i < len(tb) || i < len(ta); i++ {
 		switch {
 		case i >= len(tb):
-			return fmt.Errorf("qcheck: ledger: after op %d (%s) is in no window and has no counterpart before", ta[i].op, after.Ops[ta[i].op])
+			return fmt.Errorf("budget: after op %d (%s) is in no window and has no counterpart before", ta[i].op, after.Ops[ta[i].op])
 		case i >= len(ta):
-			return fmt.Errorf("qcheck: ledger: before op %d (%s) is in no window and has no counterpart after", tb[i].op, before.Ops[tb[i].op])
+			return fmt.Errorf("budget: before op %d (%s) is in no window and has no counterpart after", tb[i].op, before.Ops[tb[i].op])
 		case tb[i].window >= 0 || ta[i].window >= 0:
 			if tb[i].window != ta[i].window {
-				return fmt.Errorf("qcheck: ledger: the windows and the unchanged ops come in a different order before (%s) and after (%s)", tb[i].describe(before, windows), ta[i].describe(after, windows))
+				return fmt.Errorf("budget: the windows and the unchanged ops come in a different order before (%s) and after (%s)", tb[i].describe(before, windows), ta[i].describe(after, windows))
 			}
 		case !before.Ops[tb[i].op].Equal(after.Ops[ta[i].op]):
-			return fmt.Errorf("qcheck: ledger: before op %d (%s) and after op %d (%s) differ outside every window", tb[i].op, before.Ops[tb[i].op], ta[i].op, after.Ops[ta[i].op])
+			return fmt.Errorf("budget: before op %d (%s) and after op %d (%s) differ outside every window", tb[i].op, before.Ops[tb[i].op], ta[i].op, after.Ops[ta[i].op])
 		}
 	}
 	return nil
@@ -162,18 +143,27 @@ func (l *Ledger) Covers(before, after *circuit.Circuit) error {
 
 func checkPair(before, after *circuit.Circuit) error {
 	if before == nil || after == nil {
-		return fmt.Errorf("qcheck: ledger: nil circuit")
+		return fmt.Errorf("budget: nil circuit")
 	}
 	if before.Qubits() != after.Qubits() {
-		return fmt.Errorf("qcheck: ledger: circuits of different widths: %d qubits before, %d after", before.Qubits(), after.Qubits())
+		return fmt.Errorf("budget: circuits of different widths: %d qubits before, %d after", before.Qubits(), after.Qubits())
 	}
 	if err := before.Validate(); err != nil {
-		return fmt.Errorf("qcheck: ledger: circuit before: %w", err)
+		return fmt.Errorf("budget: circuit before: %w", err)
 	}
 	if err := after.Validate(); err != nil {
-		return fmt.Errorf("qcheck: ledger: circuit after: %w", err)
+		return fmt.Errorf("budget: circuit after: %w", err)
 	}
 	return nil
+}
+
+// qubitList writes qubits as "q0, q2".
+func qubitList(qs []int) string {
+	s := make([]string, len(qs))
+	for i, q := range qs {
+		s[i] = fmt.Sprintf("q%d", q)
+	}
+	return strings.Join(s, ", ")
 }
 
 // inside reports whether every qubit of op is among qs (all true) or none is (all false); an op
@@ -197,14 +187,14 @@ func inside(op circuit.Op, qs []int) (all, none bool) {
 // cut returns the piece of c that a window's span holds on the window's qubits, as a circuit on
 // len(qs) qubits. Ops of the span on other qubits are let through; an op on some of the window's
 // qubits and some others is an error.
-func cut(c *circuit.Circuit, side string, s Span, qs []int) (*circuit.Circuit, error) {
+func cut(c *circuit.Circuit, side string, s circuit.Span, qs []int) (*circuit.Circuit, error) {
 	if s.End > c.Len() {
-		return nil, fmt.Errorf("qcheck: ledger: span [%d, %d) runs past the %d ops of the circuit %s", s.Start, s.End, c.Len(), side)
+		return nil, fmt.Errorf("budget: span [%d, %d) runs past the %d ops of the circuit %s", s.Start, s.End, c.Len(), side)
 	}
 	local := make(map[int]int, len(qs))
 	for i, q := range qs {
 		if q >= c.Qubits() {
-			return nil, fmt.Errorf("qcheck: ledger: window qubit %d out of range [0, %d) of the circuit %s", q, c.Qubits(), side)
+			return nil, fmt.Errorf("budget: window qubit %d out of range [0, %d) of the circuit %s", q, c.Qubits(), side)
 		}
 		local[q] = i
 	}
@@ -220,7 +210,7 @@ func cut(c *circuit.Circuit, side string, s Span, qs []int) (*circuit.Circuit, e
 			}
 			p.AppendOp(op)
 		case !none:
-			return nil, fmt.Errorf("qcheck: ledger: %s op %d (%s) acts on some of the window's qubits %s and some others", side, i, op, qubitList(qs))
+			return nil, fmt.Errorf("budget: %s op %d (%s) acts on some of the window's qubits %s and some others", side, i, op, qubitList(qs))
 		}
 	}
 	return p, nil
@@ -242,7 +232,7 @@ func (m mark) describe(c *circuit.Circuit, ws []Window) string {
 // outline lists a circuit as windows (each at the start of its span) and the ops outside them,
 // in order. Ops let through a window's span stay in the list after the window: they commute with
 // the piece, so moving the piece to the start of its span keeps the circuit's unitary.
-func outline(c *circuit.Circuit, ws []Window, span func(Window) Span) ([]mark, error) {
+func outline(c *circuit.Circuit, ws []Window, span func(Window) circuit.Span) ([]mark, error) {
 	order := make([]int, len(ws))
 	for k := range order {
 		order[k] = k

@@ -1,9 +1,10 @@
-package qcheck
+package circuit_test
 
 import (
 	"fmt"
 	"go/ast"
 	"go/parser"
+	"math"
 	"reflect"
 	"strconv"
 	"testing"
@@ -11,12 +12,12 @@ import (
 	"qcheck.dev/qcheck/circuit"
 )
 
-// GoCode must write, for every gate of the standard library, a call of a builder method that
+// GoString must write, for every gate of the standard library, a call of a builder method that
 // exists on *circuit.Circuit with that many arguments of the right kinds; calling the methods it
 // names (found by reflection) must rebuild the same circuit. The inverse of iswap used to come out
 // as .ISWAPDG(0, 1), a method that does not exist. (A round trip through the code's own text; no
 // outside source is needed.)
-func TestGoCodeCallsExistingBuilders(t *testing.T) {
+func TestGoStringCallsExistingBuilders(t *testing.T) {
 	for _, spec := range circuit.Standard() {
 		c := circuit.New(4)
 		qubits := []int{2, 0, 3}[:max(spec.Qubits, 1)]
@@ -36,14 +37,14 @@ func TestGoCodeCallsExistingBuilders(t *testing.T) {
 		if err := c.Validate(); err != nil {
 			t.Fatalf("%s: test circuit is ill formed: %v", spec.Name, err)
 		}
-		code := GoCode(c)
+		code := c.GoString()
 		got, err := rebuild(code)
 		if err != nil {
-			t.Errorf("%s: GoCode wrote %s: %v", spec.Name, code, err)
+			t.Errorf("%s: GoString wrote %s: %v", spec.Name, code, err)
 			continue
 		}
 		if !got.Equal(c) {
-			t.Errorf("%s: GoCode wrote %s, which builds %v, not %v", spec.Name, code, got.Ops, c.Ops)
+			t.Errorf("%s: GoString wrote %s, which builds %v, not %v", spec.Name, code, got.Ops, c.Ops)
 		}
 	}
 }
@@ -113,7 +114,7 @@ func rebuild(code string) (*circuit.Circuit, error) {
 				}
 				in[k] = reflect.ValueOf(v)
 			default:
-				return nil, fmt.Errorf("%s argument %d has kind %v, which GoCode cannot write", name, k+1, kind)
+				return nil, fmt.Errorf("%s argument %d has kind %v, which GoString cannot write", name, k+1, kind)
 			}
 		}
 		out := m.Call(in)
@@ -128,4 +129,12 @@ func rebuild(code string) (*circuit.Circuit, error) {
 // literal returns the source text of an argument, such as "-0.75" or "3".
 func literal(code string, e ast.Expr) string {
 	return code[e.Pos()-1 : e.End()-1]
+}
+
+func TestGoStringWritesBuilderCalls(t *testing.T) {
+	c := circuit.New(3).H(0).CX(0, 1).RZ(0.25, 2).Sdg(1).CP(math.Pi/4, 1, 2).Measure(2, 0)
+	want := "circuit.New(3).H(0).CX(0, 1).RZ(0.25, 2).Sdg(1).CP(0.7853981633974483, 1, 2).Measure(2, 0)"
+	if got := c.GoString(); got != want {
+		t.Errorf("GoString = %q, want %q", got, want)
+	}
 }

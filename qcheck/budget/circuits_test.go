@@ -1,4 +1,4 @@
-package qcheck
+package budget
 
 import (
 	"pgregory.net/rapid"

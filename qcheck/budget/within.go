@@ -1,30 +1,31 @@
-package qcheck
+package budget
 
 import (
 	"fmt"
 	"strings"
 	"text/tabwriter"
 
+	"qcheck.dev/qcheck"
 	"qcheck.dev/qcheck/circuit"
 )
 
 // budgetRows is how many of the largest contributions a budget failure lists.
 const budgetRows = 10
 
-// WithinBudget fails the test unless the ledger's certified bound Σ δ_k is at most eps and every
+// Within fails the test unless the ledger's certified bound Σ δ_k is at most eps and every
 // entry stayed within the share its pass allotted it. The failure lists the largest
 // contributions with their places, their δ and their part of ε, and states what the bound means
 // end to end: the phase-free operator-norm distance of the whole circuits and, from it, the bound
 // 2·Σ δ_k on the change of any measurement outcome's probability (Nielsen & Chuang §4.5.3).
 // On success it prints nothing.
-func WithinBudget(t TB, l *Ledger, eps float64) {
+func Within(t qcheck.TB, l *Ledger, eps float64) {
 	t.Helper()
 	if err := checkBudget(eps); err != nil {
 		t.Fatalf("%v", err)
 		return
 	}
 	if l == nil {
-		t.Fatalf("qcheck: WithinBudget: nil ledger")
+		t.Fatalf("budget.Within: nil ledger")
 		return
 	}
 	bound, over := l.Bound(), l.OverShare()
@@ -34,7 +35,7 @@ func WithinBudget(t TB, l *Ledger, eps float64) {
 	t.Errorf("%s", budgetReport(l, eps, bound, over))
 }
 
-// budgetReport writes the failure message of WithinBudget.
+// budgetReport writes the failure message of Within.
 func budgetReport(l *Ledger, eps, bound float64, over []Entry) string {
 	var b strings.Builder
 	n := l.Len()

@@ -1,7 +1,6 @@
-package qcheck
+package budget
 
 import (
-	"fmt"
 	"math"
 	"strings"
 	"sync"
@@ -20,7 +19,7 @@ const floatSlack = 1e-12
 
 func TestRecordKnownDistances(t *testing.T) {
 	// The phase-free distance of two unitaries is 2·sin(θ/4), θ the shortest arc holding the
-	// eigenphases of V†U (DESIGN.md, "Mathematics"). rz(θ) against the identity has eigenphases
+	// eigenphases of V†U (package metric's documentation). rz(θ) against the identity has eigenphases
 	// ∓θ/2, so θ-arc = |θ| for |θ| ≤ π; t against the identity has eigenphases 0 and π/4.
 	cases := []struct {
 		name        string
@@ -36,21 +35,18 @@ func TestRecordKnownDistances(t *testing.T) {
 	}
 	for _, c := range cases {
 		var l Ledger
-		w := Window{Before: Span{4, 5}, After: Span{4, 4 + c.repl.Len()}, Qubits: allQubits(c.piece.Qubits())}
+		w := Window{Before: circuit.Span{Start: 4, End: 5}, After: circuit.Span{Start: 4, End: 4 + c.repl.Len()}, Qubits: allQubits(c.piece.Qubits())}
 		if err := l.Record(Rewrite{Window: w, Piece: c.piece, Replacement: c.repl}); err != nil {
 			t.Fatalf("%s: %v", c.name, err)
 		}
 		if got := l.Bound(); math.Abs(got-c.want) > 1e-12 {
 			t.Errorf("%s: δ = %.15g, want %.15g", c.name, got, c.want)
 		}
-		if got := l.ProbabilityBound(); math.Abs(got-2*c.want) > 1e-12 {
-			t.Errorf("%s: probability bound %.15g, want 2δ = %.15g", c.name, got, 2*c.want)
-		}
 	}
 }
 
 func TestRecordRefusesNonUnitary(t *testing.T) {
-	w := Window{Before: Span{7, 8}, After: Span{7, 8}, Qubits: []int{3}}
+	w := Window{Before: circuit.Span{Start: 7, End: 8}, After: circuit.Span{Start: 7, End: 8}, Qubits: []int{3}}
 	measured := circuit.New(1).H(0).Measure(0, 0)
 	reset := circuit.New(1).Reset(0)
 	var l Ledger
@@ -110,7 +106,7 @@ func TestRecordRefusesBadRewrites(t *testing.T) {
 		{"no qubits", Rewrite{Window: Window{}, Piece: one, Replacement: one}, "names no qubits"},
 		{"repeated qubit", Rewrite{Window: Window{Qubits: []int{2, 2}}, Piece: one, Replacement: one}, "qubit 2 repeated"},
 		{"negative qubit", Rewrite{Window: Window{Qubits: []int{-1}}, Piece: one, Replacement: one}, "negative qubit -1"},
-		{"reversed span", Rewrite{Window: Window{Before: Span{5, 3}, Qubits: []int{0}}, Piece: one, Replacement: one}, "bad span [5, 3)"},
+		{"reversed span", Rewrite{Window: Window{Before: circuit.Span{Start: 5, End: 3}, Qubits: []int{0}}, Piece: one, Replacement: one}, "bad span [5, 3)"},
 		{"width", Rewrite{Window: Window{Qubits: []int{0, 1}}, Piece: one, Replacement: circuit.New(2)}, "the piece has 1 qubits, the window names 2"},
 		{"nil", Rewrite{Window: Window{Qubits: []int{0}}, Piece: one}, "no replacement circuit"},
 		{"bad op", Rewrite{Window: Window{Qubits: []int{0}}, Piece: one, Replacement: circuit.New(1).RZ(math.NaN(), 0)}, "op 0 (rz)"},
@@ -140,7 +136,7 @@ func TestLedgerConcurrent(t *testing.T) {
 			for i := 0; i < each; i++ {
 				k := w*each + i
 				// rz(θ) by nothing has δ = 2 sin(θ/4) (see TestRecordKnownDistances).
-				r := Rewrite{Window: Window{Before: Span{k, k + 1}, After: Span{0, 0}, Qubits: []int{w}},
+				r := Rewrite{Window: Window{Before: circuit.Span{Start: k, End: k + 1}, After: circuit.Span{Start: 0, End: 0}, Qubits: []int{w}},
 					Piece: circuit.New(1).RZ(1e-3, 0), Replacement: circuit.New(1), Share: 1}
 				if err := l.Record(r); err != nil {
 					t.Error(err)
@@ -171,24 +167,3 @@ func TestLedgerConcurrent(t *testing.T) {
 
 // matrix2 wraps a copy of a row-major 2×2 matrix.
 func matrix2(x []complex128) *mat.CDense { return mat.NewCDense(2, 2, append([]complex128(nil), x...)) }
-
-func ExampleLedger() {
-	// A pass replaced rz(0.01) on qubit 4 (op 12 of the circuit before) by nothing, and p(π/4)
-	// on qubit 1 (op 30) by the equal t gate (op 29 of the circuit after).
-	var l Ledger
-	_ = l.Record(Rewrite{
-		Window:      Window{Before: Span{12, 13}, After: Span{12, 12}, Qubits: []int{4}},
-		Piece:       circuit.New(1).RZ(0.01, 0),
-		Replacement: circuit.New(1),
-	})
-	_ = l.Record(Rewrite{
-		Window:      Window{Before: Span{30, 31}, After: Span{29, 30}, Qubits: []int{1}},
-		Piece:       circuit.New(1).P(math.Pi/4, 0),
-		Replacement: circuit.New(1).T(0),
-	})
-	fmt.Printf("%d rewrites, certified distance ≤ %.6f\n", l.Len(), l.Bound())
-	fmt.Printf("any outcome probability changes by ≤ %.6f\n", l.ProbabilityBound())
-	// Output:
-	// 2 rewrites, certified distance ≤ 0.005000
-	// any outcome probability changes by ≤ 0.010000
-}

@@ -1,4 +1,4 @@
-package qcheck
+package budget
 
 import (
 	"fmt"
@@ -60,10 +60,10 @@ func TestWeightedSplit(t *testing.T) {
 }
 
 // recordRZ records rz(θ) on qubit q replaced by nothing: δ = 2 sin(|θ|/4) (phase-free distance of
-// rz(θ) from the identity, eigenphases ∓θ/2; DESIGN.md "Mathematics").
+// rz(θ) from the identity, eigenphases ∓θ/2; package metric's documentation).
 func recordRZ(t *testing.T, l *Ledger, op, q int, theta, share float64) {
 	t.Helper()
-	err := l.Record(Rewrite{Window: Window{Before: Span{op, op + 1}, After: Span{0, 0}, Qubits: []int{q}},
+	err := l.Record(Rewrite{Window: Window{Before: circuit.Span{Start: op, End: op + 1}, After: circuit.Span{Start: 0, End: 0}, Qubits: []int{q}},
 		Piece: circuit.New(1).RZ(theta, 0), Replacement: circuit.New(1), Share: share})
 	if err != nil {
 		t.Fatal(err)
@@ -95,21 +95,21 @@ func (f *fakeTB) Errorf(s string, a ...any) { f.errors = append(f.errors, fmt.Sp
 func (f *fakeTB) Fatalf(s string, a ...any) { f.fatals = append(f.fatals, fmt.Sprintf(s, a...)) }
 func (f *fakeTB) Failed() bool              { return len(f.errors)+len(f.fatals) > 0 }
 
-func TestWithinBudget(t *testing.T) {
+func TestWithin(t *testing.T) {
 	var l Ledger
 	for k := 0; k < 20; k++ {
 		recordRZ(t, &l, 3*k, k%5, 0.001*float64(k+1), 0)
 	}
 	// Σ 2 sin(0.001(k+1)/4) for k < 20 ≈ 0.0005·210 = 0.105 (small-angle sum, by hand).
 	var pass fakeTB
-	WithinBudget(&pass, &l, 0.2)
+	Within(&pass, &l, 0.2)
 	if pass.Failed() {
-		t.Errorf("WithinBudget failed on a kept budget: %v %v", pass.errors, pass.fatals)
+		t.Errorf("Within failed on a kept budget: %v %v", pass.errors, pass.fatals)
 	}
 	var fail fakeTB
-	WithinBudget(&fail, &l, 0.05)
+	Within(&fail, &l, 0.05)
 	if len(fail.errors) != 1 {
-		t.Fatalf("WithinBudget on an exceeded budget reported %v", fail.errors)
+		t.Fatalf("Within on an exceeded budget reported %v", fail.errors)
 	}
 	msg := fail.errors[0]
 	for _, want := range []string{
@@ -130,37 +130,13 @@ func TestWithinBudget(t *testing.T) {
 	}
 	var over fakeTB
 	recordRZ(t, &l, 100, 0, 0.01, 1e-6)
-	WithinBudget(&over, &l, 1)
+	Within(&over, &l, 1)
 	if len(over.errors) != 1 || !strings.Contains(over.errors[0], "1 entries exceed the share") || !strings.Contains(over.errors[0], "(over)") {
 		t.Errorf("entry over its share not reported: %v", over.errors)
 	}
 	var bad fakeTB
-	WithinBudget(&bad, &l, -1)
+	Within(&bad, &l, -1)
 	if len(bad.fatals) != 1 || !strings.Contains(bad.fatals[0], "ε = -1") {
 		t.Errorf("a negative budget was not refused: %v", bad.fatals)
 	}
-}
-
-func ExampleWithinBudget() {
-	// In a test: a pass approximated two rotations; WithinBudget fails the test (with a table of
-	// the largest contributions) if their errors add up to more than ε. Here it passes silently.
-	t := &fakeTB{}
-	var l Ledger
-	_ = l.Record(Rewrite{
-		Window:      Window{Before: Span{0, 1}, After: Span{0, 1}, Qubits: []int{0}},
-		Piece:       circuit.New(1).RZ(0.79, 0),
-		Replacement: circuit.New(1).T(0), // rz(π/4) up to phase: δ ≈ 2 sin(|0.79 − π/4|/4)
-	})
-	WithinBudget(t, &l, 1e-2)
-	fmt.Printf("failed: %v, bound %.2e\n", t.Failed(), l.Bound())
-	// Output:
-	// failed: false, bound 2.30e-03
-}
-
-func ExampleWeightedSplit() {
-	// Three pieces whose synthesis costs 1, 1 and 2 units: the dearer one gets twice the share.
-	shares, _ := WeightedSplit(1e-3, []float64{1, 1, 2})
-	fmt.Printf("%.2e %.2e %.2e\n", shares[0], shares[1], shares[2])
-	// Output:
-	// 2.50e-04 2.50e-04 5.00e-04
 }

@@ -1,4 +1,4 @@
-package qcheck
+package budget
 
 import (
 	"fmt"
@@ -14,7 +14,7 @@ func EvenSplit(eps float64, n int) (float64, error) {
 		return 0, err
 	}
 	if n <= 0 {
-		return 0, fmt.Errorf("qcheck: budget: cannot split among %d pieces", n)
+		return 0, fmt.Errorf("budget: cannot split among %d pieces", n)
 	}
 	return eps / float64(n), nil
 }
@@ -30,12 +30,12 @@ func WeightedSplit(eps float64, costs []float64) ([]float64, error) {
 	total := 0.0
 	for k, c := range costs {
 		if !(c >= 0) || math.IsInf(c, 1) {
-			return nil, fmt.Errorf("qcheck: budget: cost %d is %v; costs are finite and non-negative", k, c)
+			return nil, fmt.Errorf("budget: cost %d is %v; costs are finite and non-negative", k, c)
 		}
 		total += c
 	}
 	if !(total > 0) || math.IsInf(total, 1) {
-		return nil, fmt.Errorf("qcheck: budget: the %d costs add up to %v; need a finite positive total", len(costs), total)
+		return nil, fmt.Errorf("budget: the %d costs add up to %v; need a finite positive total", len(costs), total)
 	}
 	shares := make([]float64, len(costs))
 	for k, c := range costs {
@@ -46,7 +46,7 @@ func WeightedSplit(eps float64, costs []float64) ([]float64, error) {
 
 func checkBudget(eps float64) error {
 	if !(eps > 0) || math.IsInf(eps, 1) {
-		return fmt.Errorf("qcheck: budget: ε = %v; a budget is a finite positive number", eps)
+		return fmt.Errorf("budget: ε = %v; a budget is a finite positive number", eps)
 	}
 	return nil
 }
@@ -71,7 +71,7 @@ func (l *Ledger) CheckShares() error {
 		return nil
 	}
 	var b strings.Builder
-	fmt.Fprintf(&b, "qcheck: budget: %d of %d entries exceed their share:", len(over), l.Len())
+	fmt.Fprintf(&b, "budget: %d of %d entries exceed their share:", len(over), l.Len())
 	for i, e := range over {
 		if i == 10 {
 			fmt.Fprintf(&b, "\n  ... and %d more", len(over)-i)

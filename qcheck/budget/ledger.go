@@ -1,4 +1,4 @@
-package qcheck
+package budget
 
 import (
 	"fmt"
@@ -94,11 +94,11 @@ func newEntry(r Rewrite) (Entry, error) {
 	// NaN fails the comparison; +Inf would be a share no δ can exceed, so OverShare would never
 	// flag the entry.
 	if !(r.Share >= 0) || math.IsInf(r.Share, 1) {
-		return Entry{}, fmt.Errorf("qcheck: ledger: rewrite at %s has share %v; a share is a finite non-negative number (0 for none)", r.Window, r.Share)
+		return Entry{}, fmt.Errorf("budget: rewrite at %s has share %v; a share is a finite non-negative number (0 for none)", r.Window, r.Share)
 	}
 	k := len(r.Window.Qubits)
 	if k > MaxPieceQubits {
-		return Entry{}, fmt.Errorf("qcheck: ledger: rewrite at %s spans %d qubits, over the limit of %d; record it as narrower pieces", r.Window, k, MaxPieceQubits)
+		return Entry{}, fmt.Errorf("budget: rewrite at %s spans %d qubits, over the limit of %d; record it as narrower pieces", r.Window, k, MaxPieceQubits)
 	}
 	u, err := pieceUnitary(r.Window, "piece", r.Piece, k)
 	if err != nil {
@@ -117,24 +117,25 @@ func newEntry(r Rewrite) (Entry, error) {
 // does not cover.
 func pieceUnitary(w Window, side string, c *circuit.Circuit, k int) (*mat.CDense, error) {
 	if c == nil {
-		return nil, fmt.Errorf("qcheck: ledger: rewrite at %s has no %s circuit", w, side)
+		return nil, fmt.Errorf("budget: rewrite at %s has no %s circuit", w, side)
 	}
 	if c.Qubits() != k {
-		return nil, fmt.Errorf("qcheck: ledger: rewrite at %s: the %s has %d qubits, the window names %d (local qubit i stands for Window.Qubits[i])", w, side, c.Qubits(), k)
+		return nil, fmt.Errorf("budget: rewrite at %s: the %s has %d qubits, the window names %d (local qubit i stands for Window.Qubits[i])", w, side, c.Qubits(), k)
 	}
 	if err := c.Validate(); err != nil {
-		return nil, fmt.Errorf("qcheck: ledger: rewrite at %s: %s: %w", w, side, err)
+		return nil, fmt.Errorf("budget: rewrite at %s: %s: %w", w, side, err)
 	}
 	for i, op := range c.Ops {
 		if !op.Unitary() && op.Gate.Name != "barrier" {
-			return nil, fmt.Errorf("qcheck: ledger: rewrite at %s: %s op %d (%s) is not unitary; the linear error bound holds only for unitary pieces", w, side, i, op)
+			return nil, fmt.Errorf("budget: rewrite at %s: %s op %d (%s) is not unitary; the linear error bound holds only for unitary pieces", w, side, i, op)
 		}
 	}
 	return sim.Unitary(c)
 }
 
 // Bound returns the certified bound Σ δ_k on the phase-free operator-norm distance between the
-// circuit before and after the pass (Nielsen & Chuang §4.5.3). Each δ_k is computed in floating
+// circuit before and after the pass (Nielsen & Chuang §4.5.3); twice it bounds the change of
+// any measurement outcome's probability. Each δ_k is computed in floating
 // point from the pieces' small matrices, good to about 1e-15 each; the bound is exact up to that
 // rounding.
 func (l *Ledger) Bound() float64 {
@@ -142,11 +143,6 @@ func (l *Ledger) Bound() float64 {
 	defer l.mu.Unlock()
 	return l.sum
 }
-
-// ProbabilityBound returns 2·Σ δ_k: for any input state and any measurement, each outcome's
-// probability after the pass differs from the one before by at most this much
-// (Nielsen & Chuang §4.5.3).
-func (l *Ledger) ProbabilityBound() float64 { return 2 * l.Bound() }
 
 // Len returns the number of entries.
 func (l *Ledger) Len() int {
