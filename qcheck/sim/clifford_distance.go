@@ -107,7 +107,7 @@ func CliffordDistance(u, v *circuit.Circuit) (CliffordDistanceResult, error) {
 			p, img := pair[0], pair[1]
 			switch {
 			case img.Equal(p):
-			case anticommute(p, img):
+			case p.Anticommutes(img):
 				r.Lower = max(r.Lower, 1/math.Sqrt2)
 			default:
 				r.Lower = max(r.Lower, 1)
@@ -261,14 +261,4 @@ func (t *Tableau) factorMatrix(qs []int) *mat.CDense {
 		}
 	}
 	return m
-}
-
-// anticommute reports whether two Pauli strings of the same width anticommute: whether the
-// qubits where one has an X part and the other a Z part are odd in number, counting both ways.
-func anticommute(p, q Pauli) bool {
-	odd := 0
-	for w := range p.x {
-		odd += bits.OnesCount64(p.x[w]&q.z[w]) + bits.OnesCount64(p.z[w]&q.x[w])
-	}
-	return odd%2 == 1
 }
