@@ -2,6 +2,7 @@ package zx
 
 import (
 	"fmt"
+	"math"
 
 	"qcheck.dev/metric"
 	"qcheck.dev/qcheck/circuit"
@@ -15,7 +16,8 @@ const roundingAllowance = 1e-12
 // Compare decides whether U and V are equal up to a global phase, in two steps. First the
 // difference window (sim.DifferenceWindow) cancels the ops the circuits share at their ends,
 // exactly; when what is left touches at most MaxSupport qubits, the distance of the windows'
-// dense matrices is the distance of the circuits (Result.Known). Otherwise Check simplifies the
+// dense matrices is the distance of the circuits (Result.Known), within a rounding allowance that
+// grows with the windows' length (Result.Bound). Otherwise Check simplifies the
 // ZX-diagram of the windows. Result.Support is given in the qubits of U and V.
 func Compare(u, v *circuit.Circuit, opts Options) (Result, error) {
 	if opts.MaxSupport == 0 {
@@ -39,7 +41,9 @@ func Compare(u, v *circuit.Circuit, opts Options) (Result, error) {
 			return Result{}, err
 		}
 		d := metric.PhaseDistance(ua, ub)
-		r := Result{Distance: d, Known: true, Support: w.Support}
+		// The products of the windows' gate matrices carry rounding that grows with their length.
+		ops := float64(len(w.A) + len(w.B))
+		r := Result{Distance: d, Known: true, Support: w.Support, Bound: ops * 1e-15 * math.Sqrt(float64(int(1)<<len(w.Support)))}
 		r.decide()
 		return r, nil
 	}
