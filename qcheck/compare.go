@@ -44,6 +44,7 @@ func compare(cfg *config, want, got *circuit.Circuit, full bool) (Result, error)
 		Qubits:     f.m,
 		Measured:   f.measured,
 		Bits:       f.bits,
+		Meaning:    f.meaning,
 	}
 	if err := eng.compare(cfg, f, &r, full); err != nil {
 		return Result{}, err

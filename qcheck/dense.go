@@ -25,6 +25,9 @@ var _ engine = denseEngine{}
 func (denseEngine) name() Engine { return Dense }
 
 func (denseEngine) refuses(cfg *config, f *frame, auto bool) error {
+	if err := refuseMeaning(f, Dense); err != nil {
+		return err
+	}
 	if auto && f.m > denseAuto {
 		return fmt.Errorf("%d qubits is wider than the dense engine takes automatically (%d)", f.m, denseAuto)
 	}

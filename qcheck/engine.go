@@ -80,7 +80,7 @@ type engine interface {
 
 // engines is every engine, in Auto's order of preference: the cheapest that answers exactly
 // first.
-var engines = []engine{denseEngine{}, tableauEngine{}, matrixFreeEngine{}, zxEngine{}}
+var engines = []engine{denseEngine{}, tableauEngine{}, matrixFreeEngine{}, stabilizerProgramEngine{}, programEngine{}, zeroEngine{}, zxEngine{}}
 
 // lookupEngine returns the engine of that name; Auto has none and returns nil.
 func lookupEngine(name Engine) (engine, error) {
@@ -124,6 +124,9 @@ func chooseEngine(cfg *config, f *frame) (engine, error) {
 // unitaryUpToPhase is the refusal shared by engines that compare unitaries up to a global
 // phase in operator norm only: it names the option that asks for more, or returns nil.
 func unitaryUpToPhase(cfg *config, f *frame, e Engine) error {
+	if err := refuseMeaning(f, e); err != nil {
+		return err
+	}
 	switch {
 	case f.measured != nil:
 		return fmt.Errorf("the %s engine does not compare measured distributions; they need the dense engine", e)

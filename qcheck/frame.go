@@ -34,6 +34,8 @@ type frame struct {
 	// want and got are the circuits to give meaning to: want moved onto got's register, and both
 	// with their final measurements removed when comparing distributions.
 	want, got *circuit.Circuit
+	// meaning is what the circuits mean here: "unitary", "program" or "from zero" (program.go).
+	meaning string
 }
 
 // frameOf checks the circuits and the options against each other.
@@ -48,6 +50,13 @@ func frameOf(cfg *config, want, got *circuit.Circuit) (*frame, error) {
 		return nil, fmt.Errorf("qcheck: got is ill formed: %w", err)
 	}
 	f := &frame{n: want.Qubits(), m: got.Qubits(), want: want, got: got}
+	var err error
+	if f.meaning, err = meaningOf(cfg, want, got); err != nil {
+		return nil, err
+	}
+	if f.meaning == meaningProgram {
+		return f, nil // programs meet at their classical bits; qubits are not related
+	}
 
 	if err := f.setAncillas(cfg); err != nil {
 		return nil, err

@@ -164,8 +164,11 @@ const (
 	// (2002)): what randomized benchmarking reports. Between 0 and d/(d+1).
 	AverageFidelity
 	// Distribution is the largest total-variation distance of measured output distributions; it
-	// is the measure Measured selects and cannot be chosen with UseMeasure.
+	// is the measure Measured selects and cannot be chosen with UseMeasure. Programs are
+	// compared in it too, exactly.
 	Distribution
+	// ZeroState is min over φ of ‖U|0⟩ − e^{iφ}V|0⟩‖, the measure FromZero selects.
+	ZeroState
 )
 
 // String returns the measure's name as reports write it.
@@ -179,6 +182,8 @@ func (m Measure) String() string {
 		return "average infidelity"
 	case Distribution:
 		return "total variation"
+	case ZeroState:
+		return "state distance from |0…0⟩"
 	}
 	return fmt.Sprintf("Measure(%d)", int(m))
 }
@@ -209,6 +214,7 @@ type config struct {
 	measuredSet  bool
 	measure      Measure
 	engine       Engine
+	meaning      string // set by AsProgram or FromZero; empty: decided from the circuits
 }
 
 // newConfig applies opts over the defaults and checks that they fit together; checks that need

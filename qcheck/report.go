@@ -180,6 +180,12 @@ func replaySection(b *strings.Builder, p *page) {
 // counting, or by the distributions of measuring some qubits.
 func (r Result) phaseWords() string {
 	switch {
+	case r.Meaning == meaningProgram:
+		return "programs: the distributions of their classical bits"
+	case r.Meaning == meaningFromZero && r.Measure == Distribution:
+		return "from |0…0⟩, distributions of measuring " + qubitList(r.Measured)
+	case r.Meaning == meaningFromZero:
+		return "from |0…0⟩, up to global phase"
 	case r.Measure == Distribution:
 		if r.Bits != nil {
 			return "distributions of classical bits " + bitNames(r.Bits, ", ")
@@ -318,6 +324,13 @@ func ketOrder(n int) string {
 // bound.
 func (r Result) writeEvidence(b *strings.Builder) {
 	n := r.Qubits
+	if r.Outcome != "" {
+		b.WriteString("\noutcome that tells them apart (classical bits, the highest first):\n")
+		fmt.Fprintf(b, "  %s with probability %s after want, %s after got\n", r.Outcome, prob(r.OutcomeWant), prob(r.OutcomeGot))
+	}
+	if r.Measure == ZeroState {
+		fmt.Fprintf(b, "\noverlap ⟨0|want†·got|0⟩ = %.4g%+.4gi, fidelity %.4g\n", real(r.Overlap), imag(r.Overlap), real(r.Overlap)*real(r.Overlap)+imag(r.Overlap)*imag(r.Overlap))
+	}
 	if p := r.Pauli; p != nil {
 		b.WriteString("\nwitness Pauli (the tableau engine; strings list qubits that are not I):\n")
 		fmt.Fprintf(b, "  want maps %s to %s, got maps it to %s\n", p.Generator, p.Want, p.Got)

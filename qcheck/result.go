@@ -77,6 +77,26 @@ type Result struct {
 	// writes, which reads 0); nil when the outcome bits are the qubits in Measured.
 	Measured []int
 	Bits     []int
+
+	// Meaning is what the circuits were taken to mean: "unitary" (the unitary on every input),
+	// "program" (the distribution of the classical bits at the end, see AsProgram) or
+	// "from zero" (the input |0…0⟩ only, see FromZero).
+	Meaning string
+	// Outcome, when programs or measured states from |0…0⟩ differ, is the outcome of the
+	// classical bits whose probability differs most, bit n−1 first as OpenQASM writes a
+	// register ("10" is bit 1 set); empty otherwise. OutcomeWant and OutcomeGot are its
+	// probabilities after want and after got.
+	Outcome                 string
+	OutcomeWant, OutcomeGot float64
+	// Overlap is ⟨0|U†V|0⟩ when FromZero compared states; its squared modulus is their fidelity.
+	Overlap complex128
+}
+
+// outcomeJSON is the JSON form of Result.Outcome and its probabilities.
+type outcomeJSON struct {
+	Bits string  `json:"bits"`
+	Want float64 `json:"want"`
+	Got  float64 `json:"got"`
 }
 
 // Measurement is a concrete experiment that tells the two circuits apart: prepare Input, run the
@@ -138,6 +158,9 @@ type resultJSON struct {
 	Qubits           int            `json:"qubits"`
 	Measured         []int          `json:"measured,omitempty"`
 	Bits             []int          `json:"bits,omitempty"`
+	Meaning          string         `json:"meaning"`
+	Outcome          *outcomeJSON   `json:"outcome,omitempty"`
+	Overlap          *[2]float64    `json:"overlap,omitempty"`
 }
 
 // MarshalJSON writes the result as one JSON object; see the Result type for its keys' meaning.
@@ -149,7 +172,13 @@ func (r Result) MarshalJSON() ([]byte, error) {
 		Tolerance: r.Tolerance, ExactPhase: r.ExactPhase, Phase: r.Phase,
 		OperatorDistance: r.OperatorDistance, Witness: make([][2]float64, len(r.Witness)),
 		WitnessGap: r.WitnessGap, Engine: r.Engine, Certifies: r.Certifies, Pauli: r.Pauli,
-		Qubits: r.Qubits, Measured: r.Measured, Bits: r.Bits,
+		Qubits: r.Qubits, Measured: r.Measured, Bits: r.Bits, Meaning: r.Meaning,
+	}
+	if r.Outcome != "" {
+		v.Outcome = &outcomeJSON{Bits: r.Outcome, Want: r.OutcomeWant, Got: r.OutcomeGot}
+	}
+	if r.Measure == ZeroState {
+		v.Overlap = &[2]float64{real(r.Overlap), imag(r.Overlap)}
 	}
 	for i, a := range r.Witness {
 		v.Witness[i] = [2]float64{real(a), imag(a)}

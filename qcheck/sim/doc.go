@@ -17,6 +17,26 @@
 // CliffordDistance gives the exact distance of two Clifford circuits from the tableau of V†U when
 // it splits into small tensor factors, and a certified lower bound otherwise.
 //
+// # Programs
+//
+// A circuit with measurements, resets and classically controlled ops is a program. Its meaning,
+// as OpenQASM 2.0 defines it, is the distribution of its classical bits at the end, every qubit
+// and bit starting at 0; two programs are compared through their bits (Outcomes), by the exact
+// total-variation distance and the outcome whose probability differs most (OutcomeGap):
+//
+//	TV(p, q) = ½ Σ_x |p(x) − q(x)|.
+//
+// ProgramOutcomes and ComparePrograms enumerate the measurement branches on statevectors, with
+// their probabilities; final measurements are read off the final state without branching.
+// StabilizerProgramOutcomes and CompareCliffordPrograms handle Clifford programs at any width,
+// each measurement outcome a symbol: the bits end as affine functions over GF(2) of independent
+// fair coins, so the distribution is uniform over an affine set A, and for two such sets
+//
+//	TV = 1 − |A ∩ B| / max(|A|, |B|).
+//
+// CompareFromZero compares two unitary circuits on the input |0…0⟩ alone, and MeasureAtEnd
+// turns a unitary circuit into the program that measures some of its qubits.
+//
 // # How the work is done
 //
 // Both engines share one set of kernels (kernel.go). Gates are first fused: consecutive gates on

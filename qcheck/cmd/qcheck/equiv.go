@@ -23,6 +23,8 @@ type compareFlags struct {
 	measure    string
 	engine     qcheck.Engine
 	limits     readLimits
+	program    bool
+	fromZero   bool
 }
 
 func (f *compareFlags) register(fs *flag.FlagSet) {
@@ -33,6 +35,8 @@ func (f *compareFlags) register(fs *flag.FlagSet) {
 	fs.StringVar(&f.ancillas, "ancillas", "", "qubits `Q,...` of B borrowed as ancillas (clean: start and end in |0⟩); A may omit them")
 	fs.BoolVar(&f.dirty, "dirty", false, "the -ancillas start in any state and must be restored")
 	fs.StringVar(&f.measure, "measure", "operator", "`MEASURE` that decides: operator (norm), diamond, or fidelity (average infidelity)")
+	fs.BoolVar(&f.program, "program", false, "compare as programs: the distributions of the classical bits at the end (the default when a file measures, resets or has an if)")
+	fs.BoolVar(&f.fromZero, "from-zero", false, "compare on the input |0…0⟩ only (with -measured: the distributions of the measured qubits from there)")
 	fs.TextVar(&f.engine, "engine", qcheck.Auto, "`ENGINE` that answers: auto, dense, tableau (Clifford circuits) or matrix-free (see above)")
 	f.limits.register(fs)
 }
@@ -74,6 +78,14 @@ func (f *compareFlags) options() ([]qcheck.Option, error) {
 		opts = append(opts, qcheck.UseMeasure(qcheck.AverageFidelity))
 	default:
 		return nil, fmt.Errorf("-measure %q: choose operator, diamond or fidelity", f.measure)
+	}
+	switch {
+	case f.program && f.fromZero:
+		return nil, fmt.Errorf("-program and -from-zero are different meanings; choose one")
+	case f.program:
+		opts = append(opts, qcheck.AsProgram())
+	case f.fromZero:
+		opts = append(opts, qcheck.FromZero())
 	}
 	if f.engine != qcheck.Auto {
 		opts = append(opts, qcheck.UseEngine(f.engine))
@@ -131,12 +143,12 @@ func (f *compareFlags) compareFiles(a, b string) (qcheck.Result, error) {
 	if err != nil {
 		return qcheck.Result{}, err
 	}
-	if !f.measured {
+	if f.fromZero {
 		for _, x := range []struct {
 			path string
 			prog *qasm.Program
 		}{{a, pa}, {b, pb}} {
-			if err := refuseDirectives(x.path, x.prog, "use -measured to compare measured distributions"); err != nil {
+			if err := refuseDirectives(x.path, x.prog, "without -from-zero, files that measure are compared as programs"); err != nil {
 				return qcheck.Result{}, err
 			}
 		}
@@ -152,7 +164,13 @@ const equivAbout = `
 Compares the circuit of B.qasm (got) with that of A.qasm (want, the reference) and exits 0 when
 they are equivalent within the tolerance, 1 when they are not, 2 on bad input or usage. By
 default the distance is the operator norm of the difference of the two unitaries, minimised over
-a global phase. Human output: a line naming A (want) and B (got), then the verdict with the
+a global phase. When either file measures, resets or has an if (and neither -measured nor
+-from-zero says otherwise), the files are compared as programs, as OpenQASM 2.0 defines them:
+every qubit and bit starts at 0, and the meaning is the joint distribution of the classical bits
+at the end, compared exactly by total variation through the bits (so a routed program needs no
+-perm); the first line of the output says so. Programs use the stabilizer-program engine when
+both are Clifford (exact, any width), else the program engine (statevector branches, up to 24
+qubits). Human output: a line naming A (want) and B (got), then the verdict with the
 measure and distance; on a difference, a report with the input state that exposes it and a
 measurement whose probabilities differ.
 
@@ -171,7 +189,16 @@ With -json, one JSON object (the encoding of qcheck.Result; keys stay, text may 
                      is then false, meaning not shown equivalent)
   distance           the distance in the chosen measure
   measure            "operator norm", "diamond norm" or "average infidelity" ("total variation"
-                     with -measured)
+                     with -measured and for programs, "state distance from |0…0⟩" with
+                     -from-zero)
+  meaning            "unitary" (every input), "program" (the classical bits at the end) or
+                     "from zero" (the input |0…0⟩ only)
+  outcome            for programs (and -from-zero -measured) that differ: the outcome of the
+                     classical bits whose probability differs most
+    bits             the outcome, the highest bit first
+    want             its probability after want
+    got              its probability after got
+  overlap            with -from-zero: ⟨0|want†·got|0⟩ as [re, im]
   tolerance          the tolerance used
   exact_phase        whether global phase counted
   phase              φ in radians with want ≈ e^{iφ}·got (0 with -exact-phase)
@@ -179,7 +206,8 @@ With -json, one JSON object (the encoding of qcheck.Result; keys stay, text may 
   witness            an input state that exposes the difference, as [re, im] amplitude pairs
                      indexed Σ b_q·2^q (qubit 0 is the least-significant bit); [] if none
   witness_gap        the gap the witness shows: a certified lower bound on operator_distance
-  engine             "dense", "tableau" or "matrix-free": the engine that answered
+  engine             "dense", "tableau", "matrix-free", "stabilizer-program", "program" or
+                     "zero-state": the engine that answered
   certifies          in words, what the engine's answer guarantees
   qubits             the width of the register that states and outcomes refer to (B's)
   measured           with -measured, the qubit of B's register each outcome bit reads (the
@@ -231,7 +259,14 @@ func equiv(args []string, stdout, stderr io.Writer) int {
 		}
 		fmt.Fprintf(stdout, "%s\n", out)
 	} else {
-		fmt.Fprintf(stdout, "%s (want) vs %s (got):\n", files[0], files[1])
+		switch r.Meaning {
+		case "program":
+			fmt.Fprintf(stdout, "%s (want) vs %s (got), as programs: the distributions of their classical bits at the end:\n", files[0], files[1])
+		case "from zero":
+			fmt.Fprintf(stdout, "%s (want) vs %s (got), from the input |0…0⟩ only:\n", files[0], files[1])
+		default:
+			fmt.Fprintf(stdout, "%s (want) vs %s (got):\n", files[0], files[1])
+		}
 		if r.Equivalent {
 			fmt.Fprintln(stdout, r.Headline())
 		} else {
