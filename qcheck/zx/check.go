@@ -234,21 +234,7 @@ func (g *graph) components(wires []int) [][]int {
 			continue
 		}
 		var group []int
-		stack := []int{g.in[q]}
-		for len(stack) > 0 {
-			x := stack[len(stack)-1]
-			stack = stack[:len(stack)-1]
-			if seen[x] {
-				continue
-			}
-			seen[x] = true
-			if o, ok := end[x]; ok {
-				stack = append(stack, o)
-			}
-			for w := range g.v[x].nbr {
-				stack = append(stack, w)
-			}
-		}
+		g.reach([]int{g.in[q]}, end, seen)
 		for _, p := range wires {
 			if seen[g.in[p]] && !assigned[p] {
 				assigned[p] = true
@@ -262,12 +248,25 @@ func (g *graph) components(wires []int) [][]int {
 
 // origins returns, sorted, the from marks (≥ 0) of the spiders joined to the given wires.
 func (g *graph) origins(wires []int) []int {
-	var out []int
-	seen := map[int]bool{}
-	var stack []int
+	var starts, out []int
 	for _, q := range wires {
-		stack = append(stack, g.in[q], g.out[q])
+		starts = append(starts, g.in[q], g.out[q])
 	}
+	seen := map[int]bool{}
+	g.reach(starts, nil, seen)
+	for x := range seen {
+		if g.isSpider(x) && g.v[x].from >= 0 {
+			out = append(out, g.v[x].from)
+		}
+	}
+	slices.Sort(out)
+	return out
+}
+
+// reach adds to seen every vertex joined to starts by edges of the graph or by the extra links
+// also (a map from a vertex to one more it counts as joined to).
+func (g *graph) reach(starts []int, also map[int]int, seen map[int]bool) {
+	stack := append([]int(nil), starts...)
 	for len(stack) > 0 {
 		x := stack[len(stack)-1]
 		stack = stack[:len(stack)-1]
@@ -275,15 +274,13 @@ func (g *graph) origins(wires []int) []int {
 			continue
 		}
 		seen[x] = true
-		if g.isSpider(x) && g.v[x].from >= 0 {
-			out = append(out, g.v[x].from)
+		if o, ok := also[x]; ok {
+			stack = append(stack, o)
 		}
 		for w := range g.v[x].nbr {
 			stack = append(stack, w)
 		}
 	}
-	slices.Sort(out)
-	return out
 }
 
 // bound is the proved bound on the distance the rewriting may have hidden: half the residuals

@@ -36,26 +36,12 @@ const maxComponent = 2000
 // the smallest tensor. It reports false when a tensor would exceed 2^maxScope entries.
 func (g *graph) matrix(wires []int) ([]complex128, bool) {
 	// Collect the component of the given boundaries.
-	seen := map[int]bool{}
-	var stack []int
+	var starts []int
 	for _, q := range wires {
-		for _, b := range []int{g.in[q], g.out[q]} {
-			if !seen[b] {
-				seen[b] = true
-				stack = append(stack, b)
-			}
-		}
+		starts = append(starts, g.in[q], g.out[q])
 	}
-	for len(stack) > 0 {
-		v := stack[len(stack)-1]
-		stack = stack[:len(stack)-1]
-		for w := range g.v[v].nbr {
-			if !seen[w] {
-				seen[w] = true
-				stack = append(stack, w)
-			}
-		}
-	}
+	seen := map[int]bool{}
+	g.reach(starts, nil, seen)
 	if len(seen) > maxComponent {
 		return nil, false
 	}
