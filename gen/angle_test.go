@@ -7,22 +7,63 @@ import (
 )
 
 // angleKind classifies an angle drawn by Angle: special (exactly one of
-// specialAngles), tiny (0 or ±2π plus ±10^−e, 5 ≤ e ≤ 15) or continuous.
+// specialAngles), tiny (a branch point plus ±10^−e, 5 ≤ e ≤ 15) or continuous.
 func angleKind(theta float64) int {
 	if slices.Contains(specialMagnitudes, math.Abs(theta)) {
 		return angleSpecial
 	}
-	for _, base := range tinyBases {
-		delta := math.Abs(theta - base)
-		if delta == 0 || delta > 1.5e-5 {
-			continue
-		}
-		// near 2π the offset 10^−15 is rounded to one ulp (8.9e-16)
-		if e := -math.Log10(delta); e > 4.7 && e < 15.3 && math.Abs(e-math.Round(e)) < 0.3 {
-			return angleTiny
-		}
+	if _, ok := tinyBase(theta); ok {
+		return angleTiny
 	}
 	return angleContinuous
+}
+
+// tinyBase returns the branch point a tiny angle is a hair off. Adding 10^−e
+// to a base of size at most 4π rounds by at most half an ulp of 4π, below
+// 1e-15.
+func tinyBase(theta float64) (float64, bool) {
+	for _, m := range tinyMagnitudes {
+		for _, base := range []float64{m, -m} {
+			delta := math.Abs(theta - base)
+			for e := 5; e <= 15; e++ {
+				if math.Abs(delta-math.Pow(10, -float64(e))) <= 1e-15 {
+					return base, true
+				}
+			}
+		}
+	}
+	return 0, false
+}
+
+func TestAngleBranchPoints(t *testing.T) {
+	// Every signed branch point is reached by tiny angles, 0 a third of the
+	// time and each of the eight others one time in twelve: chi-square with 8
+	// degrees of freedom, whose upper tail for an even number 2m of degrees
+	// of freedom is e^{−x/2}·Σ_{j<m} (x/2)^j/j! (Abramowitz & Stegun
+	// 26.4.21); fail below falseFailure.
+	sample, _ := drawAll(t, Angle(), 8000, 3)
+	counts := map[float64]int{}
+	total := 0
+	for _, theta := range sample {
+		if base, ok := tinyBase(theta); ok && angleKind(theta) == angleTiny {
+			counts[base]++
+			total++
+		}
+	}
+	want := map[float64]float64{0: 1.0 / 3}
+	for _, m := range tinyMagnitudes[1:5] {
+		want[m], want[-m] = 1.0/12, 1.0/12
+	}
+	chi2 := 0.0
+	for base, p := range want {
+		e := p * float64(total)
+		chi2 += (float64(counts[base]) - e) * (float64(counts[base]) - e) / e
+	}
+	y := chi2 / 2
+	tail := math.Exp(-y) * (1 + y + y*y/2 + y*y*y/6)
+	if len(counts) != len(want) || tail < falseFailure {
+		t.Errorf("tiny angles by branch point %v (%d in all): chi-square %.2f, upper tail %.3g", counts, total, chi2, tail)
+	}
 }
 
 func TestAngleMixture(t *testing.T) {

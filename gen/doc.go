@@ -21,7 +21,7 @@
 // Circuit draws circuits configured by Options, whose zero value is useful
 // (3 qubits, up to 20 ops, DefaultGateSet). Angles come from Angle, which
 // favours the special values 0, ±π/4, ±π/2, ±π, ±2π, ±4π and values a hair
-// away from 0 and 2π. Motifs (Options.Motifs) plant the structure rewrite
+// away from 0, ±π/2, ±π, ±2π, ±4π. Motifs (Options.Motifs) plant the structure rewrite
 // passes look for: runs of gates on the same qubits, a gate and its inverse
 // a few ops apart, runs of commuting diagonal gates, repeated blocks. A
 // failing circuit shrinks toward fewer ops, lower qubit indices, gates

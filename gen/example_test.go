@@ -58,7 +58,7 @@ func ExampleAngle() {
 	}
 	fmt.Println()
 	// Output:
-	// -0.8591 3π/4 -1.6824 4.6055 5.7136 -6.2832 -π 1.8845
+	// -6.2832 3π/4 -1e-09 4.6055 5.7136 -1e-10 -π 1.8845
 }
 
 // A Haar unitary: draws are unitary up to rounding.

@@ -74,7 +74,10 @@ func DistributionGap(u, v mat.CMatrix, outU, outV []int) Gap {
 	// ‖E‖ from above.
 	rows, cols := make([]float64, d), make([]float64, d)
 	frob := 0.0
-	e := make([]complex128, d*d)
+	var e []complex128 // the off-block part, kept only where its norm is computed exactly
+	if d <= exactLeakOrder {
+		e = make([]complex128, d*d)
+	}
 	for z := 0; z < d; z++ {
 		for x := 0; x < d; x++ {
 			if outU[z] != outV[x] {
@@ -82,12 +85,14 @@ func DistributionGap(u, v mat.CMatrix, outU, outV []int) Gap {
 				rows[z] += a
 				cols[x] += a
 				frob += a * a
-				e[z*d+x] = w[z*d+x]
+				if e != nil {
+					e[z*d+x] = w[z*d+x]
+				}
 			}
 		}
 	}
 	leak := math.Min(math.Sqrt(frob), math.Sqrt(maxOf(rows)*maxOf(cols)))
-	if d <= exactLeakOrder && leak > 0 {
+	if e != nil && leak > 0 {
 		leak = math.Min(leak, operatorNorm(e, d, d))
 	}
 	leak += float64(d) * 0x1p-52

@@ -2,6 +2,7 @@ package qcheck
 
 import (
 	"fmt"
+	"math"
 
 	"qcheck.dev/qcheck/sim"
 )
@@ -13,6 +14,12 @@ type programEngine struct{}
 var _ engine = programEngine{}
 
 func (programEngine) name() Engine { return "program" }
+
+// work: k·2^m for one run of each program over a statevector; each further measurement branch
+// repeats the ops after it, which the engine's own branch limit bounds.
+func (programEngine) work(f *frame) float64 {
+	return opsOf(f) * math.Exp2(float64(f.m))
+}
 
 func (programEngine) refuses(cfg *config, f *frame, auto bool) error {
 	if f.meaning != meaningProgram {

@@ -13,7 +13,8 @@
 //     rapid can shrink to. [PreservesLayout] does the same for a router that reports its final
 //     layout; [Search] runs the campaign outside a test and returns the [Failure] as a value.
 //   - [CheckRule](t, rule, pass, opts...) checks a local rewrite rule, and the pass that applies
-//     it inside random circuits on wider registers.
+//     it inside random circuits on wider registers. A rule whose sides are parametric circuits
+//     of package qcheck/param is proved for every value of its parameters.
 //   - [Property] and [RuleProperty] return the properties themselves, for rapid.MakeFuzz and go
 //     test -fuzz.
 //

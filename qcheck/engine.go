@@ -59,7 +59,7 @@ func UseEngine(e Engine) Option {
 
 // An engine answers a comparison. Each lives in its own file, with its own certificate text, and
 // has one entry in engines; nothing else in the package names it. To add one, write the file
-// (a type with these four methods and `var _ engine = myEngine{}`), give it a name constant
+// (a type with these five methods and `var _ engine = myEngine{}`), give it a name constant
 // above, and put it into engines where it should come in Auto's order of preference.
 type engine interface {
 	// name is the engine's name, as UseEngine takes it and a Result reports it.
@@ -76,6 +76,10 @@ type engine interface {
 	// equivalent. An engine whose answer does not settle the verdict leaves r.Equivalent false
 	// and says why in r.Undecided; an error is for comparisons it cannot run at all.
 	compare(cfg *config, f *frame, r *Result, full bool) error
+	// work estimates, before starting, how many amplitude updates compare would take (one
+	// gate applied to one amplitude, or one complex multiply-add), good to a small factor, so
+	// that work over the limit is refused rather than run for hours; see [WorkLimit].
+	work(f *frame) float64
 }
 
 // engines is every engine, in Auto's order of preference: the cheapest that answers exactly
@@ -108,11 +112,17 @@ func chooseEngine(cfg *config, f *frame) (engine, error) {
 		if err := e.refuses(cfg, f, false); err != nil {
 			return nil, fmt.Errorf("qcheck: %v", err)
 		}
+		if err := overWork(cfg, f, e); err != nil {
+			return nil, fmt.Errorf("qcheck: %v", err)
+		}
 		return e, nil
 	}
 	var reasons []string
 	for _, e := range engines {
 		err := e.refuses(cfg, f, true)
+		if err == nil {
+			err = overWork(cfg, f, e)
+		}
 		if err == nil {
 			return e, nil
 		}

@@ -2,6 +2,7 @@ package qcheck
 
 import (
 	"fmt"
+	"math"
 
 	"qcheck.dev/qcheck/circuit"
 	"qcheck.dev/qcheck/sim"
@@ -22,6 +23,11 @@ type matrixFreeEngine struct{}
 var _ engine = matrixFreeEngine{}
 
 func (matrixFreeEngine) name() Engine { return MatrixFree }
+
+// work: 60·k·2^m, about 52 Krylov steps, each running both circuits over a statevector.
+func (matrixFreeEngine) work(f *frame) float64 {
+	return 60 * opsOf(f) * math.Exp2(float64(f.m))
+}
 
 func (matrixFreeEngine) refuses(cfg *config, f *frame, auto bool) error {
 	if err := unitaryUpToPhase(cfg, f, MatrixFree); err != nil {

@@ -138,7 +138,7 @@ func Ancillas(qubits []int, state AncillaState) Option {
 // total-variation distance over all inputs from above (metric.DistributionGap). Equivalent means
 // that bound is within the tolerance, and Distance is the bound; different means an input was
 // found whose distributions differ by more, and Distance is that difference; when the tolerance
-// lies between the two, Compare returns an error saying the comparison is undecided. Use it for
+// lies between the two, the Result is not equivalent and Undecided gives both numbers. Use it for
 // passes that only promise to keep measurement statistics, such as dropping diagonal gates
 // before a final measurement.
 func Measured(qubits ...int) Option {
@@ -215,13 +215,14 @@ type config struct {
 	measure      Measure
 	engine       Engine
 	meaning      string // set by AsProgram or FromZero; empty: decided from the circuits
+	workLimit    float64
 }
 
 // newConfig applies opts over the defaults and checks that they fit together; checks that need
 // the circuits (ranges, widths) are done by frameOf, and what an engine cannot do is said by
 // its refuses method.
 func newConfig(opts []Option) (*config, error) {
-	c := &config{tol: DefaultTolerance, engine: Auto}
+	c := &config{tol: DefaultTolerance, engine: Auto, workLimit: DefaultWorkLimit}
 	if err := Options(opts).apply(c); err != nil {
 		return nil, err
 	}

@@ -221,7 +221,7 @@ func TestNilPassOrGenerator(t *testing.T) {
 		t.Errorf("nil generator: %v", err)
 	}
 	h := &searchTB{name: "nil"}
-	CheckRule(h, nil, nil)
+	CheckRule(h, Rule(nil), nil)
 	if !h.failed || !strings.Contains(strings.Join(h.errors, ""), "the rule is nil") {
 		t.Errorf("nil rule: %q", h.errors)
 	}

@@ -428,8 +428,12 @@ func bitNames(bits []int, sep string) string {
 	return strings.Join(s, sep)
 }
 
-// Headline is the first line of the failure's report.
+// Headline is the first line of the failure's report; a nil *Failure (no failure) has the
+// headline "qcheck: no failure".
 func (f *Failure) Headline() string {
+	if f == nil {
+		return "qcheck: no failure"
+	}
 	in := "input"
 	if f.Input != nil {
 		in = fmt.Sprintf("%d-qubit, %d-op circuit", f.Input.Qubits(), f.Input.Len())
@@ -452,8 +456,11 @@ func (f *Failure) Headline() string {
 // Report writes the failure for a person: what went wrong, the minimal input drawn and listed
 // (and as Go code to paste into a regression test), the pass's output beside it with their
 // difference, the comparison's evidence, and how to replay the failure. Like Result.Report, the
-// text may change between versions.
+// text may change between versions. A nil *Failure reports its headline only.
 func (f *Failure) Report() string {
+	if f == nil {
+		return f.Headline() + "\n"
+	}
 	return write(&page{r: f.Result, f: f, want: "input", got: "output"})
 }
 

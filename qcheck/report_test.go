@@ -60,3 +60,11 @@ func TestHeadlineOfEquivalentCircuitsNamesTheComparison(t *testing.T) {
 		}
 	}
 }
+
+// Issue 17, reproducer 11: a nil *Failure (no failure) reports instead of panicking.
+func TestNilFailureReports(t *testing.T) {
+	var f *Failure
+	if got := f.Report(); got != "qcheck: no failure\n" {
+		t.Errorf("(*Failure)(nil).Report() = %q", got)
+	}
+}

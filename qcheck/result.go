@@ -25,7 +25,8 @@ type Result struct {
 	// Distance is the distance of the two circuits in Measure. For measured distributions it
 	// is certified on the side of the verdict: an upper bound on the largest total-variation
 	// distance over all inputs when Equivalent, a distance found on an input when not (Certifies
-	// gives both bounds).
+	// gives both bounds); from the tableau engine it is, when Equivalent, the bound on how far
+	// angles rounded to Clifford ones move the circuits (0 when none was rounded).
 	Distance float64
 	// Measure is the measure of Distance and Tolerance.
 	Measure Measure

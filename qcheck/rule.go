@@ -6,12 +6,19 @@ import (
 	"pgregory.net/rapid"
 	"qcheck.dev/gen"
 	"qcheck.dev/qcheck/circuit"
+	"qcheck.dev/qcheck/param"
 )
 
 // Rule is a local rewrite rule: from parameters it draws with t (angles, a choice of gates), it
 // returns the pattern a pass looks for (left) and what the pass puts in its place (right), two
 // circuits of the same small width whose qubit i is the rule's i-th operand.
 type Rule func(t *rapid.T) (left, right *circuit.Circuit)
+
+// sides are what a rule returns: two circuits, or two parametric circuits of package param, whose
+// angles are affine expressions of named parameters (rz(a+b)).
+type sides interface {
+	*circuit.Circuit | *param.Circuit
+}
 
 // Limits of the random surroundings CheckRule embeds a rule in.
 const (
@@ -38,9 +45,18 @@ var ruleContextGates = []string{"h", "x", "s", "t", "sdg", "rz", "rx", "cx", "cz
 // With a nil pass only the first step runs. The options apply to both steps; options that name
 // qubits (OutputPermutation, Ancillas, Measured) describe a whole register, not a rule, and are
 // refused. Like Preserves, a failure is shrunk and reported once, with rapid's replay line.
-func CheckRule(t TB, rule Rule, pass Pass, opts ...Option) {
+//
+// When the rule returns parametric circuits (package param), step 1 is a proof for every value
+// of the parameters (param.Prove, up to global phase or exactly with ExactPhase, in the operator
+// norm), made once for each distinct pair the rule returns; a refutation fails with its
+// counterexample, and a pair that can be neither proved nor refuted fails as undecided. Step 2
+// then draws each parameter with gen.Angle, which favours branch points, and checks the pass on
+// the bound left side as above.
+func CheckRule[S interface {
+	*circuit.Circuit | *param.Circuit
+}](t TB, rule func(t *rapid.T) (left, right S), pass Pass, opts ...Option) {
 	t.Helper()
-	cfg, err := ruleConfig(rule, opts)
+	cfg, err := ruleConfig[S](rule == nil, opts)
 	if err != nil {
 		t.Fatalf("qcheck.CheckRule: %v", err)
 		return
@@ -50,16 +66,18 @@ func CheckRule(t TB, rule Rule, pass Pass, opts ...Option) {
 
 // RuleProperty returns the property CheckRule checks, for rapid.Check and rapid.MakeFuzz (see
 // Property for the fuzz target). Bad options fail every check with their error.
-func RuleProperty(rule Rule, pass Pass, opts ...Option) func(*rapid.T) {
-	cfg, err := ruleConfig(rule, opts)
+func RuleProperty[S interface {
+	*circuit.Circuit | *param.Circuit
+}](rule func(t *rapid.T) (left, right S), pass Pass, opts ...Option) func(*rapid.T) {
+	cfg, err := ruleConfig[S](rule == nil, opts)
 	if err != nil {
 		return func(t *rapid.T) { t.Fatalf("qcheck: %v", err) }
 	}
 	return ruleProperty(cfg, rule, pass)
 }
 
-func ruleConfig(rule Rule, opts []Option) (*config, error) {
-	if rule == nil {
+func ruleConfig[S sides](nilRule bool, opts []Option) (*config, error) {
+	if nilRule {
 		return nil, fmt.Errorf("the rule is nil")
 	}
 	cfg, err := newConfig(opts)
@@ -69,26 +87,27 @@ func ruleConfig(rule Rule, opts []Option) (*config, error) {
 	if err := cfg.registerFree(); err != nil {
 		return nil, err
 	}
+	var zero S
+	if _, ok := any(zero).(*param.Circuit); ok && cfg.measure != OperatorNorm {
+		return nil, fmt.Errorf("a rule with parameters is proved in the operator norm; UseMeasure(%v) does not apply to it", cfg.measure)
+	}
 	return cfg, nil
 }
 
-func ruleProperty(cfg *config, rule Rule, pass Pass) func(*rapid.T) {
+func ruleProperty[S sides](cfg *config, rule func(t *rapid.T) (left, right S), pass Pass) func(*rapid.T) {
 	var s subject
 	if pass != nil {
 		s = pass.subject()
 	}
+	var proofs proofCache
 	return func(t *rapid.T) {
-		left, right := rule(t)
-		if err := checkSides(left, right); err != nil {
-			t.Fatalf("qcheck: the rule is ill formed: %v", err)
-		}
-		r, err := compare(cfg, left, right, false)
-		if err != nil {
-			t.Fatalf("qcheck: comparing the rule's sides: %v", err)
-		}
-		if !r.Equivalent {
-			t.Log(lazyResult{&r})
-			t.Fatalf("qcheck: the rule itself is wrong: %s between its left and right sides (want = left, got = right)", r.verdict())
+		l, r := rule(t)
+		var left *circuit.Circuit
+		switch l := any(l).(type) {
+		case *circuit.Circuit:
+			left = checkRuleSides(t, cfg, l, any(r).(*circuit.Circuit))
+		case *param.Circuit:
+			left = proveRuleSides(t, cfg, &proofs, l, any(r).(*param.Circuit))
 		}
 		if s == nil {
 			return
@@ -99,6 +118,23 @@ func ruleProperty(cfg *config, rule Rule, pass Pass) func(*rapid.T) {
 			failWith(t, f)
 		}
 	}
+}
+
+// checkRuleSides is step 1 of CheckRule for circuits: the sides must be equivalent. It returns
+// the left side.
+func checkRuleSides(t *rapid.T, cfg *config, left, right *circuit.Circuit) *circuit.Circuit {
+	if err := checkSides(left, right); err != nil {
+		t.Fatalf("qcheck: the rule is ill formed: %v", err)
+	}
+	r, err := compare(cfg, left, right, false)
+	if err != nil {
+		t.Fatalf("qcheck: comparing the rule's sides: %v", err)
+	}
+	if !r.Equivalent {
+		t.Log(lazyResult{&r})
+		t.Fatalf("qcheck: the rule itself is wrong: %s between its left and right sides (want = left, got = right)", r.verdict())
+	}
+	return left
 }
 
 // checkSides checks that the two sides of a rule are valid circuits of the same width.

@@ -2,6 +2,7 @@ package qcheck
 
 import (
 	"fmt"
+	"math"
 
 	"qcheck.dev/qcheck/circuit"
 	"qcheck.dev/qcheck/sim"
@@ -15,6 +16,13 @@ type stabilizerProgramEngine struct{}
 var _ engine = stabilizerProgramEngine{}
 
 func (stabilizerProgramEngine) name() Engine { return "stabilizer-program" }
+
+// work: at most k·2m·⌈2m/64⌉ words, as if every op were a measurement, which updates every row
+// of the tableau.
+func (stabilizerProgramEngine) work(f *frame) float64 {
+	words := math.Ceil(2 * float64(f.m) / 64)
+	return opsOf(f) * 2 * float64(f.m) * words
+}
 
 func (stabilizerProgramEngine) refuses(cfg *config, f *frame, auto bool) error {
 	if f.meaning != meaningProgram {

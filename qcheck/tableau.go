@@ -31,6 +31,12 @@ var _ engine = tableauEngine{}
 
 func (tableauEngine) name() Engine { return Tableau }
 
+// work: k·⌈2m/64⌉ words for the gates, and 2m·⌈2m/64⌉ to compare the tableaux.
+func (tableauEngine) work(f *frame) float64 {
+	words := math.Ceil(2 * float64(f.m) / 64)
+	return opsOf(f)*words + 2*float64(f.m)*words
+}
+
 func (tableauEngine) refuses(cfg *config, f *frame, auto bool) error {
 	if err := unitaryUpToPhase(cfg, f, Tableau); err != nil {
 		return err
@@ -91,7 +97,10 @@ func compareTableau(cfg *config, f *frame, r *Result) error {
 		r.Certifies += fmt.Sprintf("; angles off Clifford ones by %.2g in total, which bounds the distance of equivalent circuits", rounding)
 	}
 	if res.Equivalent {
+		// The exact Cliffords agree, so the circuits are at most rounding apart: the distance
+		// reported is that bound (0 when no angle was rounded).
 		r.Equivalent = true
+		r.Distance, r.OperatorDistance = rounding, rounding
 		return nil
 	}
 	anti := res.Want.Anticommutes(res.Got)

@@ -350,6 +350,12 @@ func TestTableauRefusesRoundedAnglesBeyondTolerance(t *testing.T) {
 	if r.Engine != Tableau || !r.Equivalent || !strings.Contains(r.Certifies, "off Clifford") {
 		t.Errorf("engine %v, equivalent %v, certifies %q", r.Engine, r.Equivalent, r.Certifies)
 	}
+	// The distance reported is the rounding bound, not 0: the offsets of the float64 values of
+	// the Go constants π/2 + 1e-13 (0x1.921fb54442edbp+00) and −π/2 from multiples of π/2 are
+	// 1.00081e-13 and 6.12323e-17 (mpmath at 300 bits), 1.00142e-13 in total.
+	if math.Abs(r.Distance-1.0014211682118912e-13) > 1e-20 {
+		t.Errorf("tableau distance %.6g, want the rounding bound 1.00142e-13", r.Distance)
+	}
 }
 
 // Issue 17, reproducer 1: angles far from 0 whose offsets from multiples of 2π float64 cannot

@@ -2,6 +2,7 @@ package qcheck
 
 import (
 	"fmt"
+	"math"
 
 	"qcheck.dev/qcheck/sim"
 )
@@ -13,6 +14,11 @@ type zeroEngine struct{}
 var _ engine = zeroEngine{}
 
 func (zeroEngine) name() Engine { return "zero-state" }
+
+// work: k·2^m, one statevector run of each circuit.
+func (zeroEngine) work(f *frame) float64 {
+	return opsOf(f) * math.Exp2(float64(f.m))
+}
 
 func (zeroEngine) refuses(cfg *config, f *frame, auto bool) error {
 	if f.meaning != meaningFromZero {

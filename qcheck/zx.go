@@ -22,6 +22,16 @@ var _ engine = zxEngine{}
 
 func (zxEngine) name() Engine { return ZX }
 
+// work is the rewriting budget: about ten vertices per op and at most zx's default 200 edge
+// operations per vertex, plus, where an undecided pair falls back to it, the matrix-free engine's.
+func (zxEngine) work(f *frame) float64 {
+	w := 2000 * opsOf(f)
+	if f.m <= matrixFreeAuto {
+		w += matrixFreeEngine{}.work(f)
+	}
+	return w
+}
+
 func (zxEngine) refuses(cfg *config, f *frame, auto bool) error {
 	if err := unitaryUpToPhase(cfg, f, ZX); err != nil {
 		return err

@@ -8,6 +8,9 @@ import (
 	"strconv"
 	"strings"
 	"testing"
+
+	"gonum.org/v1/gonum/mat"
+	"qcheck.dev/metric"
 )
 
 // angleReference is one line of testdata/circuit/angles.txt: an angle with its offset from the
@@ -89,7 +92,7 @@ func TestLargeAngleMatrices(t *testing.T) {
 				t.Fatalf("u(%v, %v, %v)[%d] is NaN", r.x, r.x, r.x, i)
 			}
 		}
-		if e := unitaryDeviation(u, 2); e > 1e-14 {
+		if e := metric.UnitarityDeviation(mat.NewCDense(2, 2, u)); e > 1e-14 {
 			t.Errorf("u(%v, %v, %v) is %.3g from unitary", r.x, r.x, r.x, e)
 		}
 	}

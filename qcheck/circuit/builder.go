@@ -5,6 +5,7 @@ package circuit
 // order of the gate's textbook matrix. Bad arguments are recorded and reported by Validate.
 
 func (c *Circuit) add(name string, params []float64, qubits ...int) *Circuit {
+	mustExist(c, name)
 	c.Ops = append(c.Ops, Op{Gate: Gate{Name: name, Params: params}, Qubits: qubits})
 	return c
 }

@@ -112,33 +112,51 @@ type Circuit struct {
 // Validate.
 func New(qubits int) *Circuit { return &Circuit{qubits: qubits} }
 
-// Qubits returns the width of the circuit's register.
-func (c *Circuit) Qubits() int { return c.qubits }
+// Qubits returns the width of the circuit's register (0 for a nil circuit).
+func (c *Circuit) Qubits() int {
+	if c == nil {
+		return 0
+	}
+	return c.qubits
+}
 
 // Bits returns the number of classical bits: one more than the highest bit a measure writes or a
-// condition reads, or the number set by SetBits, whichever is larger.
-func (c *Circuit) Bits() int { return c.bits }
+// condition reads, or the number set by SetBits, whichever is larger (0 for a nil circuit).
+func (c *Circuit) Bits() int {
+	if c == nil {
+		return 0
+	}
+	return c.bits
+}
 
 // SetBits declares the size of the classical register.
 func (c *Circuit) SetBits(n int) *Circuit {
+	mustExist(c, "SetBits")
 	if n > c.bits {
 		c.bits = n
 	}
 	return c
 }
 
-// Len returns the number of ops.
-func (c *Circuit) Len() int { return len(c.Ops) }
+// Len returns the number of ops (0 for a nil circuit).
+func (c *Circuit) Len() int {
+	if c == nil {
+		return 0
+	}
+	return len(c.Ops)
+}
 
 // Append adds the gate on the given qubits and returns the circuit for chaining. Bad operands are
 // recorded as given and reported by Validate.
 func (c *Circuit) Append(g Gate, qubits ...int) *Circuit {
+	mustExist(c, "Append")
 	c.Ops = append(c.Ops, Op{Gate: g.Clone(), Qubits: append([]int(nil), qubits...)})
 	return c
 }
 
 // AppendOp adds a copy of op.
 func (c *Circuit) AppendOp(op Op) *Circuit {
+	mustExist(c, "AppendOp")
 	op = op.Clone()
 	for _, b := range op.Bits {
 		if b >= c.bits {
@@ -157,8 +175,12 @@ func (c *Circuit) AppendOp(op Op) *Circuit {
 }
 
 // Compose appends every op of d, whose width must not exceed c's (Validate reports out-of-range
-// qubits otherwise).
+// qubits otherwise). A nil d is the empty circuit and adds nothing.
 func (c *Circuit) Compose(d *Circuit) *Circuit {
+	mustExist(c, "Compose")
+	if d == nil {
+		return c
+	}
 	for _, op := range d.Ops {
 		c.AppendOp(op)
 	}
@@ -166,8 +188,11 @@ func (c *Circuit) Compose(d *Circuit) *Circuit {
 	return c
 }
 
-// Clone returns a deep copy of the circuit.
+// Clone returns a deep copy of the circuit (nil for a nil circuit).
 func (c *Circuit) Clone() *Circuit {
+	if c == nil {
+		return nil
+	}
 	d := &Circuit{qubits: c.qubits, bits: c.bits, Ops: make([]Op, len(c.Ops))}
 	for i, op := range c.Ops {
 		d.Ops[i] = op.Clone()
@@ -175,8 +200,12 @@ func (c *Circuit) Clone() *Circuit {
 	return d
 }
 
-// Equal reports whether two circuits have the same width and the same ops in the same order.
+// Equal reports whether two circuits have the same width and the same ops in the same order. A
+// nil circuit equals only a nil circuit.
 func (c *Circuit) Equal(d *Circuit) bool {
+	if c == nil || d == nil {
+		return c == d
+	}
 	if c.qubits != d.qubits || len(c.Ops) != len(d.Ops) {
 		return false
 	}
@@ -191,8 +220,11 @@ func (c *Circuit) Equal(d *Circuit) bool {
 // Inverse returns the circuit that undoes c: the ops in reverse order, each replaced by its exact
 // inverse. Barriers are kept in place; a circuit with measure, reset or classically controlled ops
 // has no inverse and those ops are kept as they are, so Validate still accepts it but unitary
-// engines refuse it.
+// engines refuse it. The inverse of a nil circuit is nil.
 func (c *Circuit) Inverse() *Circuit {
+	if c == nil {
+		return nil
+	}
 	d := &Circuit{qubits: c.qubits, bits: c.bits, Ops: make([]Op, 0, len(c.Ops))}
 	for i := len(c.Ops) - 1; i >= 0; i-- {
 		op := c.Ops[i].Clone()
@@ -205,8 +237,11 @@ func (c *Circuit) Inverse() *Circuit {
 }
 
 // Unitary reports whether every op is a unitary gate without a classical condition, or a barrier,
-// so that the circuit has a unitary matrix.
+// so that the circuit has a unitary matrix. A nil circuit has no ops and is unitary.
 func (c *Circuit) Unitary() bool {
+	if c == nil {
+		return true
+	}
 	for _, op := range c.Ops {
 		if !op.Unitary() && op.Gate.Name != "barrier" {
 			return false
@@ -327,4 +362,12 @@ func (c *Circuit) validateOp(op Op) string {
 		}
 	}
 	return ""
+}
+
+// mustExist panics on a nil circuit in a method that adds to it: there is nowhere to record the
+// op for Validate, so this is a programmer error, reported as gonum reports bad dimensions.
+func mustExist(c *Circuit, method string) {
+	if c == nil {
+		panic("circuit: " + method + " on a nil *Circuit; make circuits with New")
+	}
 }

@@ -2,11 +2,11 @@ package circuit
 
 import (
 	"fmt"
-	"math"
 	"math/cmplx"
 	"strings"
 
 	"gonum.org/v1/gonum/mat"
+	"qcheck.dev/metric"
 )
 
 // UnitaryTolerance is how far ‖M†M − I‖ (the largest absolute row sum, an upper bound on the
@@ -60,31 +60,10 @@ func Custom(name string, m mat.CMatrix) (Gate, error) {
 			data[i*r+j] = v
 		}
 	}
-	if dev := unitaryDeviation(data, r); !(dev <= UnitaryTolerance) {
+	if dev := metric.UnitarityDeviation(mat.NewCDense(r, r, data)); !(dev <= UnitaryTolerance) {
 		return Gate{}, fmt.Errorf("circuit: custom gate %s is not unitary: ‖M†M − I‖ = %.3g > %g", name, dev, UnitaryTolerance)
 	}
 	return Gate{Name: name, custom: &customGate{qubits: k, data: data}}, nil
-}
-
-// unitaryDeviation returns the largest absolute row sum of M†M − I, which bounds ‖M†M − I‖ from
-// above for a Hermitian matrix (the operator norm is at most the induced ∞-norm).
-func unitaryDeviation(m []complex128, d int) float64 {
-	worst := 0.0
-	for i := 0; i < d; i++ {
-		row := 0.0
-		for j := 0; j < d; j++ {
-			var s complex128
-			for k := 0; k < d; k++ {
-				s += cmplx.Conj(m[k*d+i]) * m[k*d+j]
-			}
-			if i == j {
-				s--
-			}
-			row += cmplx.Abs(s)
-		}
-		worst = math.Max(worst, row)
-	}
-	return worst
 }
 
 func (c *customGate) inverse(name string) Gate {

@@ -105,3 +105,24 @@ func TestCustomNameCannotInvertIntoLibrary(t *testing.T) {
 		}
 	}
 }
+
+// Issue 17, reproducer 12: the unitarity check now runs on metric's blocked product (the figure is
+// BenchmarkUnitarityDeviation in package metric) and still refuses, with ‖M†M − I‖ bounded by
+// its largest row sum: for the 6-qubit identity with column 0 doubled, M†M − I = diag(3, 0, …),
+// so the bound is 3 (by hand).
+func TestCustomRefusesNonUnitaryWithTheBound(t *testing.T) {
+	d := 64
+	data := make([]complex128, d*d)
+	for i := 0; i < d; i++ {
+		data[i*d+i] = 1
+	}
+	data[0] = 2
+	_, err := Custom("wide", mat.NewCDense(d, d, data))
+	if err == nil || !strings.Contains(err.Error(), "‖M†M − I‖ = 3 > 1e-10") {
+		t.Errorf("error %v, want a refusal giving ‖M†M − I‖ = 3", err)
+	}
+	data[0] = 1
+	if _, err := Custom("wide", mat.NewCDense(d, d, data)); err != nil {
+		t.Errorf("the 6-qubit identity: %v", err)
+	}
+}

@@ -32,5 +32,12 @@
 // Builder methods never panic and never fail on the spot: they record what they are given, and
 // Validate reports the first bad operation (qubit out of range, repeated operand, wrong arity,
 // non-finite angle) with its index. Every engine validates before it computes, so a bad builder
-// call surfaces as an error there too.
+// call surfaces as an error there too. Gate methods never panic either: an ill-formed Gate
+// literal has no Matrix and is its own Inverse, and Validate reports it.
+//
+// A nil *Circuit reads as an empty circuit on no qubits (Qubits, Bits and Len are 0, Clone and
+// Inverse return nil, String and GoString say nil, Compose(nil) adds nothing) and Validate
+// reports it. Adding ops to a nil *Circuit (a builder method, Append, AppendOp, Compose, SetBits)
+// is a programmer error, as gonum treats a dimension mismatch: it panics with a message naming
+// the method, since there is nowhere to record the op.
 package circuit

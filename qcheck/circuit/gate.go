@@ -132,14 +132,15 @@ func (g Gate) Elements() []complex128 {
 // as s and sdg swap, angles are negated where that inverts the gate, and u(θ, φ, λ) becomes
 // u(−θ, −λ, −φ). The inverse of a custom gate is a custom gate holding the conjugate transpose,
 // named name+"dg", or name without its "dg" when it ends so (Custom refuses names for which either
-// would be a library gate's name).
+// would be a library gate's name). An ill-formed gate (an unknown name, or the wrong number of
+// angles) is returned unchanged, and Validate reports it wherever it is used.
 func (g Gate) Inverse() Gate {
 	if g.custom != nil {
 		return g.custom.inverse(g.Name)
 	}
 	d, ok := library[g.Name]
-	if !ok || d.inverse == nil {
-		return g.Clone()
+	if !ok || d.inverse == nil || len(g.Params) != d.spec.Params {
+		return g.Clone() // an ill-formed gate stays as it is, for Validate to report
 	}
 	name, params := d.inverse(g.Params)
 	return Gate{Name: name, Params: params}

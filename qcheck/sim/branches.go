@@ -78,7 +78,7 @@ func ProgramOutcomes(c *circuit.Circuit, opts ProgramOptions) (*Outcomes, error)
 	n, nbits := c.Qubits(), bitsOf(c)
 	maxBranches, maxBytes := opts.limits()
 	if n > maxStateQubits || int64(16)<<n > maxBytes {
-		return nil, fmt.Errorf("sim: a %d-qubit statevector needs %s, more than the %s allowed", n, bytesString(int64(16)<<min(n, 62)), bytesString(maxBytes))
+		return nil, fmt.Errorf("sim: a %d-qubit statevector needs %s, more than the %s allowed", n, bytesString(math.Ldexp(16, n)), bytesString(float64(maxBytes)))
 	}
 	maxBranches = int(min(int64(maxBranches), maxBytes/(int64(16)<<n)))
 	final := finalMeasures(c)

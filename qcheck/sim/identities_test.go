@@ -3,6 +3,7 @@ package sim
 import (
 	"math"
 	"math/cmplx"
+	"strings"
 	"testing"
 
 	"gonum.org/v1/gonum/mat"
@@ -125,6 +126,14 @@ func TestUnitaryRefusesBadInput(t *testing.T) {
 	}
 	if _, err := UnitaryWithin(circuit.New(15), 1<<30); err == nil {
 		t.Error("UnitaryWithin accepted a 15-qubit matrix under a 1 GiB limit")
+	}
+	// Issue 17, reproducer 4: 16·4^n bytes overflowed int64 at 30 qubits (2^64 B = 16 EiB, by
+	// hand), passed the check and panicked in make; at 31 the message said "needs 0 B".
+	for n, size := range map[int]string{30: "needs 16.0 EiB", 31: "needs 64.0 EiB", 40: "needs 16.0 YiB", 29: "needs 4.0 EiB"} {
+		_, err := UnitaryWithin(circuit.New(n).H(0), math.MaxInt64)
+		if err == nil || !strings.Contains(err.Error(), size) {
+			t.Errorf("UnitaryWithin(%d qubits, MaxInt64): %v, want a refusal that %s", n, err, size)
+		}
 	}
 	if err := Apply(circuit.New(2).H(0), make([]complex128, 3)); err == nil {
 		t.Error("Apply accepted a state of the wrong length")

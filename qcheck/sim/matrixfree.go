@@ -244,10 +244,10 @@ func (o MatrixFreeOptions) settle(n int) (MatrixFreeOptions, error) {
 	if o.ExploreSteps < 0 || !(o.Failure > 0 && o.Failure < 1) || o.MemoryLimit < 0 || !(o.Tolerance >= 0) {
 		return o, fmt.Errorf("sim: bad matrix-free options: ExploreSteps %d, Failure %g, Tolerance %g, MemoryLimit %d", o.ExploreSteps, o.Failure, o.Tolerance, o.MemoryLimit)
 	}
-	vector := int64(16) << n
-	fit := int(o.MemoryLimit/vector) - 4 // the basis, the vector being built, the witness and its two images
+	vector := complexBytes(n)
+	fit := int(math.Min(float64(o.MemoryLimit)/vector, 1<<30)) - 4 // the basis, the vector being built, the witness and its two images
 	if fit < 2 {
-		return o, fmt.Errorf("sim: a %d-qubit matrix-free distance needs at least 6 statevectors (%s), over the limit of %s", n, bytesString(6*vector), bytesString(o.MemoryLimit))
+		return o, fmt.Errorf("sim: a %d-qubit matrix-free distance needs at least 6 statevectors (%s), over the limit of %s", n, bytesString(6*vector), bytesString(float64(o.MemoryLimit)))
 	}
 	o.ExploreSteps = min(o.ExploreSteps, fit)
 	o.CertifySteps = min(o.CertifySteps, fit)

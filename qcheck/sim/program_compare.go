@@ -79,7 +79,7 @@ const fromZeroMaxQubits = 26
 func CompareFromZero(want, got *circuit.Circuit) (StateGap, error) {
 	u, v, err := buildPair(want, got, "want", "got", func(c *circuit.Circuit) ([]complex128, error) {
 		if c.Qubits() > fromZeroMaxQubits {
-			return nil, fmt.Errorf("a %d-qubit statevector needs %s; this comparison holds two of at most %d qubits (1 GiB each)", c.Qubits(), bytesString(int64(16)<<min(c.Qubits(), 62)), fromZeroMaxQubits)
+			return nil, fmt.Errorf("a %d-qubit statevector needs %s; this comparison holds two of at most %d qubits (1 GiB each)", c.Qubits(), bytesString(math.Ldexp(16, c.Qubits())), fromZeroMaxQubits)
 		}
 		s := make([]complex128, 1<<c.Qubits())
 		s[0] = 1

@@ -422,7 +422,7 @@ func (r *symbolicRun) measure(a int) affineBit {
 
 func rowBit(col []uint64, r int) bool { return col[r/64]>>(r%64)&1 == 1 }
 
-func spread(b bool) uint64 {
+func wordMask(b bool) uint64 {
 	if b {
 		return ^uint64(0)
 	}
@@ -443,7 +443,7 @@ func (r *symbolicRun) multiplyRows(mask []uint64, p int) {
 		if !x1 && !z1 {
 			continue
 		}
-		bx, bz := spread(x1), spread(z1)
+		bx, bz := wordMask(x1), wordMask(z1)
 		for i, m := range mask {
 			if m == 0 {
 				continue
@@ -469,12 +469,12 @@ func (r *symbolicRun) multiplyRows(mask []uint64, p int) {
 			zc[i] ^= m & bz
 		}
 	}
-	sp := spread(rowBit(t.sign, p))
+	sp := wordMask(rowBit(t.sign, p))
 	for i, m := range mask {
 		t.sign[i] ^= m & (sp ^ hi[i])
 	}
 	for _, s := range r.syms {
-		sp := spread(rowBit(s, p))
+		sp := wordMask(rowBit(s, p))
 		for i, m := range mask {
 			s[i] ^= m & sp
 		}
@@ -556,7 +556,7 @@ func (r *symbolicRun) fixedOutcome(a int) affineBit {
 			e ^= e << 32
 			e ^= before
 			parity ^= bits.OnesCount64(xm & e)
-			before ^= spread(bits.OnesCount64(zm)&1 == 1)
+			before ^= wordMask(bits.OnesCount64(zm)&1 == 1)
 		}
 	}
 	out := affineBit{c: (parity+ys/2)&1 == 1}

@@ -44,11 +44,15 @@ func identityTableau(n int) *Tableau {
 // circuit, a measure or reset, or a gate that is not Clifford: t, ch, ccx, ccz, cswap, any gate
 // with angles that are not multiples of π/2 (multiples of π for cp, crx, cry, crz) within about
 // CliffordTolerance, and custom gates on more than three qubits or that do not map Pauli strings to
-// Pauli strings. Barriers and gates that act as the identity are skipped.
+// Pauli strings. Barriers and gates that act as the identity are skipped. It also fails when the
+// tableau (n²/2 bytes) would need more than half of DefaultMemoryLimit: about 65,000 qubits.
 func NewTableau(c *circuit.Circuit) (*Tableau, error) {
 	ops, _, err := compileClifford(c)
 	if err != nil {
 		return nil, err
+	}
+	if need := tableauBytes(c.Qubits()); need > float64(DefaultMemoryLimit)/2 {
+		return nil, fmt.Errorf("sim: the tableau of %d qubits needs %s, over the limit of %s (half of DefaultMemoryLimit, so that two fit)", c.Qubits(), bytesString(need), bytesString(float64(DefaultMemoryLimit)/2))
 	}
 	t := identityTableau(c.Qubits())
 	for _, op := range ops {
@@ -101,7 +105,7 @@ func compileClifford(c *circuit.Circuit) ([]cliffordOp, float64, error) {
 	if err := c.Validate(); err != nil {
 		return nil, 0, err
 	}
-	cache := mapCache{}
+	cache := newMapCache()
 	ops := make([]cliffordOp, 0, len(c.Ops))
 	dev := 0.0
 	for i, op := range c.Ops {

@@ -22,15 +22,111 @@ type CliffordResult struct {
 
 // CompareClifford decides whether two Clifford circuits of the same width are equal up to a
 // global phase, by comparing how each conjugates the 2n generators X_q and Z_q, signs included.
-// It fails when the widths differ or either circuit is refused by NewTableau; the error says
-// which circuit and which op. It cannot decide equality including the global phase: a tableau
-// does not record it.
+// Qubits that no gate of either circuit touches are the identity in both, so the tableaux are
+// built on the touched qubits only (barriers do not count) and the witness is put back on the
+// full register; a million-qubit register with a few gates costs what those gates cost. It fails
+// when the widths differ, either circuit is refused by NewTableau (the error says which circuit
+// and which op), or the two tableaux would need more than DefaultMemoryLimit. It cannot decide
+// equality including the global phase: a tableau does not record it.
 func CompareClifford(want, got *circuit.Circuit) (CliffordResult, error) {
-	tw, tg, err := buildPair(want, got, "want", "got", NewTableau)
+	if want == nil || got == nil {
+		return CliffordResult{}, fmt.Errorf("sim: nil circuit")
+	}
+	if err := want.Validate(); err != nil {
+		return CliffordResult{}, fmt.Errorf("sim: want circuit: %w", err)
+	}
+	if err := got.Validate(); err != nil {
+		return CliffordResult{}, fmt.Errorf("sim: got circuit: %w", err)
+	}
+	n := want.Qubits()
+	touched := touchedQubits(n, want, got)
+	if need := 2 * tableauBytes(len(touched)); need > float64(DefaultMemoryLimit) && n == got.Qubits() {
+		return CliffordResult{}, fmt.Errorf("sim: the tableaux of %d touched qubits need %s, over the limit of %s", len(touched), bytesString(need), bytesString(float64(DefaultMemoryLimit)))
+	}
+	if len(touched) == 0 && n == got.Qubits() {
+		return CliffordResult{Equivalent: true}, nil // barriers only: both are the identity
+	}
+	a, b := want, got
+	if len(touched) < n && n == got.Qubits() {
+		a, b = onQubits(want, touched), onQubits(got, touched)
+	}
+	tw, tg, err := buildPair(a, b, "want", "got", NewTableau)
 	if err != nil {
 		return CliffordResult{}, err
 	}
-	return tw.Compare(tg), nil
+	r := tw.Compare(tg)
+	if !r.Equivalent && a != want {
+		r.Generator, r.Want, r.Got = spread(r.Generator, touched, n), spread(r.Want, touched, n), spread(r.Got, touched, n)
+	}
+	return r, nil
+}
+
+// touchedQubits lists, in increasing order, the qubits of an n-qubit register that some op of
+// the circuits other than a barrier acts on.
+func touchedQubits(n int, cs ...*circuit.Circuit) []int {
+	seen := make([]bool, n)
+	for _, c := range cs {
+		for _, op := range c.Ops {
+			if op.Gate.Name == "barrier" {
+				continue
+			}
+			for _, q := range op.Qubits {
+				if q >= 0 && q < n {
+					seen[q] = true
+				}
+			}
+		}
+	}
+	var qs []int
+	for q, s := range seen {
+		if s {
+			qs = append(qs, q)
+		}
+	}
+	return qs
+}
+
+// onQubits returns c on a register of len(qubits) qubits, qubit qubits[i] becoming qubit i, with
+// the same ops in the same places (so errors name the same op); barriers keep only the listed
+// qubits (qubit 0 when none is left). Every other op must act on listed qubits only, and qubits
+// must not be empty.
+func onQubits(c *circuit.Circuit, qubits []int) *circuit.Circuit {
+	to := make(map[int]int, len(qubits))
+	for i, q := range qubits {
+		to[q] = i
+	}
+	d := circuit.New(len(qubits))
+	d.Ops = make([]circuit.Op, len(c.Ops))
+	for i, op := range c.Ops {
+		qs := make([]int, 0, len(op.Qubits))
+		for _, q := range op.Qubits {
+			if k, ok := to[q]; ok {
+				qs = append(qs, k)
+			}
+		}
+		if len(qs) == 0 { // a barrier on untouched qubits only: keep its place
+			qs = []int{0}
+		}
+		op.Qubits = qs
+		d.Ops[i] = op
+	}
+	return d
+}
+
+// spread returns p, a string on the listed qubits, on the full n-qubit register.
+func spread(p Pauli, qubits []int, n int) Pauli {
+	out := newPauli(n)
+	for i, q := range qubits {
+		out.set(q, p.At(i))
+	}
+	out.neg = p.neg
+	return out
+}
+
+// tableauBytes is the memory of the tableau of n qubits: two bit matrices of n columns of
+// ⌈2n/64⌉ words.
+func tableauBytes(n int) float64 {
+	return 2 * float64(n) * float64((2*n+63)/64) * 8
 }
 
 // Compare returns the verdict for the circuits of two tableaux: equivalent when every image

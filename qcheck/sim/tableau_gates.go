@@ -215,15 +215,35 @@ type angleKey struct {
 }
 
 // mapCache finds the Pauli map of each op, analysing gates with angles once per distinct rounded
-// angle.
-type mapCache map[angleKey]*pauliMap
+// angle, and rounding each distinct list of angles once (exact rounding costs a few
+// microseconds).
+type mapCache struct {
+	maps    map[angleKey]*pauliMap
+	rounded map[rawAngles]roundedAngles
+}
+
+// rawAngles and roundedAngles memoise cliffordAngles.
+type rawAngles struct {
+	name   string
+	params [3]float64
+}
+
+type roundedAngles struct {
+	turns [3]int
+	dev   float64
+	why   string
+}
+
+func newMapCache() *mapCache {
+	return &mapCache{maps: map[angleKey]*pauliMap{}, rounded: map[rawAngles]roundedAngles{}}
+}
 
 // lookup returns the op's map, nil for an op the tableau skips (barrier, id, or any gate that
 // acts as the identity), or an error naming the op. It also returns the op's deviation (see
 // cliffordAngles): 0 for gates without angles, NaN for custom gates, which have none. The map of
 // a gate with angles is analysed from its matrix at the rounded angles k·π/2 with k in −3…4, far
 // from where floating point loses digits, and is the map of the exact Clifford gate there.
-func (mc mapCache) lookup(i int, op circuit.Op) (*pauliMap, float64, error) {
+func (mc *mapCache) lookup(i int, op circuit.Op) (*pauliMap, float64, error) {
 	g := op.Gate
 	refuse := func(why string) error { return &circuit.OpError{Index: i, Gate: g.Name, Err: why} }
 	if g.Name == "barrier" {
@@ -253,12 +273,19 @@ func (mc mapCache) lookup(i int, op circuit.Op) (*pauliMap, float64, error) {
 		}
 		return pm, math.NaN(), nil
 	}
-	turns, dev, why := cliffordAngles(g)
+	raw := rawAngles{name: g.Name}
+	copy(raw.params[:], g.Params)
+	ra, done := mc.rounded[raw]
+	if !done {
+		ra.turns, ra.dev, ra.why = cliffordAngles(g)
+		mc.rounded[raw] = ra
+	}
+	turns, dev, why := ra.turns, ra.dev, ra.why
 	if why != "" {
 		return nil, 0, refuse(why)
 	}
 	key := angleKey{name: g.Name, turns: turns}
-	pm, seen := mc[key]
+	pm, seen := mc.maps[key]
 	if !seen {
 		rounded := circuit.Gate{Name: g.Name, Params: make([]float64, len(g.Params))} // the exact Clifford gate
 		for k := range rounded.Params {
@@ -273,7 +300,7 @@ func (mc mapCache) lookup(i int, op circuit.Op) (*pauliMap, float64, error) {
 		if pm == nil {
 			return nil, 0, refuse(why)
 		}
-		mc[key] = pm
+		mc.maps[key] = pm
 	}
 	if pm.identity {
 		return nil, dev, nil

@@ -511,3 +511,31 @@ func TestCliffordDeviationOfLargeAngles(t *testing.T) {
 		t.Error("CliffordDeviation bounded a custom gate")
 	}
 }
+
+// Issue 17, reproducer 7: h q[0] on a register of 2^20 qubits once asked for a 256 GiB tableau.
+// Untouched qubits are the identity in both circuits, so only touched qubits are tableau columns;
+// the verdicts are the textbook ones (HSH ≠ S: H conjugates X to Z, N&C §4.2), with the witness
+// back on the full register.
+func TestTableauOfTouchedQubitsOnly(t *testing.T) {
+	const n = 1 << 20
+	r, err := CompareClifford(circuit.New(n).H(0), circuit.New(n).H(0))
+	if err != nil || !r.Equivalent {
+		t.Fatalf("h q[0] against itself on 2^20 qubits: %+v, %v", r, err)
+	}
+	r, err = CompareClifford(circuit.New(n).H(700000).S(700000).H(700000).Barrier(1, 2, 3), circuit.New(n).S(700000))
+	if err != nil || r.Equivalent {
+		t.Fatalf("HSH against S on qubit 700000: %+v, %v", r, err)
+	}
+	// HSH maps X to H·S·Z·S†·H = H·Z·H = X, while S maps X to Y: X_700000 is the first generator
+	// whose images differ.
+	if r.Generator.Qubits() != n || r.Generator.String() != "+X700000" {
+		t.Errorf("witness generator %v on %d qubits, want +X700000 on %d", r.Generator, r.Generator.Qubits(), n)
+	}
+	if _, err := NewTableau(circuit.New(100000)); err == nil || !strings.Contains(err.Error(), "over the limit") {
+		t.Errorf("a 100,000-qubit tableau (5 GB): %v", err)
+	}
+	// Only barriers: both are the identity.
+	if r, err := CompareClifford(circuit.New(n).Barrier(0, 1), circuit.New(n)); err != nil || !r.Equivalent {
+		t.Errorf("barriers only: %+v, %v", r, err)
+	}
+}

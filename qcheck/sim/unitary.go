@@ -2,6 +2,7 @@ package sim
 
 import (
 	"fmt"
+	"math"
 	"runtime"
 
 	"gonum.org/v1/gonum/mat"
@@ -26,12 +27,8 @@ func UnitaryWithin(c *circuit.Circuit, limit int64) (*mat.CDense, error) {
 		return nil, err
 	}
 	n := c.Qubits()
-	if n > 31 {
-		return nil, fmt.Errorf("sim: a dense unitary of %d qubits cannot be held (2^%d × 2^%d entries)", n, n, n)
-	}
-	need := int64(16) << (2 * n)
-	if n > 30 || need > limit {
-		return nil, fmt.Errorf("sim: a dense unitary of %d qubits needs %s, over the limit of %s; use a statevector or tableau engine", n, bytesString(need), bytesString(limit))
+	if need := complexBytes(2 * n); need > float64(limit) || need > addressable {
+		return nil, fmt.Errorf("sim: a dense unitary of %d qubits needs %s, over the limit of %s; use a statevector or tableau engine", n, bytesString(need), bytesString(float64(limit)))
 	}
 	dim := 1 << n
 	data := make([]complex128, dim*dim)
@@ -104,15 +101,29 @@ func checkUnitary(c *circuit.Circuit) error {
 	return nil
 }
 
-func bytesString(b int64) string {
+// addressable is the most memory a Go program can allocate on the 64-bit platforms it supports
+// (a 48-bit address space): larger requests are refused whatever limit the caller sets.
+const addressable = 1 << 48
+
+// bytesString writes a size in bytes briefly: "512 B", "4.0 GiB", "16.0 EiB".
+func bytesString(b float64) string {
 	const unit = 1024
 	if b < unit {
-		return fmt.Sprintf("%d B", b)
+		return fmt.Sprintf("%.0f B", b)
 	}
-	div, exp := int64(unit), 0
-	for n := b / unit; n >= unit; n /= unit {
-		div *= unit
+	exp := 0
+	for b >= unit && exp < len(bytesUnits) {
+		b /= unit
 		exp++
 	}
-	return fmt.Sprintf("%.1f %ciB", float64(b)/float64(div), "KMGTPE"[exp])
+	if b >= unit {
+		return fmt.Sprintf("2^%d B", int(math.Log2(b))+10*exp)
+	}
+	return fmt.Sprintf("%.1f %ciB", b, bytesUnits[exp-1])
 }
+
+const bytesUnits = "KMGTPEZY"
+
+// complexBytes returns the bytes of 2^k complex128 values, 16·2^k, as a float64: exact for every
+// k (a power of two), and free of the overflow an int64 meets at k = 59.
+func complexBytes(k int) float64 { return math.Ldexp(16, k) }

@@ -7,6 +7,7 @@ import (
 	"io"
 	"strconv"
 	"strings"
+	"time"
 
 	"qcheck.dev/qcheck"
 	"qcheck.dev/qcheck/qasm"
@@ -22,6 +23,8 @@ type compareFlags struct {
 	dirty      bool
 	measure    string
 	engine     qcheck.Engine
+	work       float64
+	timeout    time.Duration
 	limits     readLimits
 	program    bool
 	fromZero   bool
@@ -38,12 +41,17 @@ func (f *compareFlags) register(fs *flag.FlagSet) {
 	fs.BoolVar(&f.program, "program", false, "compare as programs: the distributions of the classical bits at the end (the default when a file measures, resets or has an if)")
 	fs.BoolVar(&f.fromZero, "from-zero", false, "compare on the input |0…0⟩ only (with -measured: the distributions of the measured qubits from there)")
 	fs.TextVar(&f.engine, "engine", qcheck.Auto, "`ENGINE` that answers: auto, dense, tableau (Clifford circuits) or matrix-free (see above)")
+	fs.Float64Var(&f.work, "work", qcheck.DefaultWorkLimit, "refuse, before starting, a comparison estimated to take more than `UNITS` amplitude updates")
+	fs.DurationVar(&f.timeout, "timeout", 0, "give up on a comparison after `DURATION` (such as 30s or 5m; 0: no limit), exit 2")
 	f.limits.register(fs)
 }
 
 // options turns the flags into qcheck options.
 func (f *compareFlags) options() ([]qcheck.Option, error) {
-	opts := []qcheck.Option{qcheck.Tolerance(f.tol)}
+	opts := []qcheck.Option{qcheck.Tolerance(f.tol), qcheck.WorkLimit(f.work)}
+	if f.timeout < 0 {
+		return nil, fmt.Errorf("-timeout %v: the timeout must not be negative", f.timeout)
+	}
 	if f.exactPhase {
 		opts = append(opts, qcheck.ExactPhase())
 	}
@@ -153,11 +161,36 @@ func (f *compareFlags) compareFiles(a, b string) (qcheck.Result, error) {
 			}
 		}
 	}
-	r, err := qcheck.Compare(pa.Circuit, pb.Circuit, opts...)
+	r, err := f.compareWithin(pa, pb, opts)
 	if err != nil {
 		return qcheck.Result{}, fmt.Errorf("%s vs %s: %s", a, b, flagWords.Replace(err.Error()))
 	}
 	return r, nil
+}
+
+// compareWithin runs the comparison, giving up after the -timeout. A comparison given up on keeps
+// running on its goroutine until it ends (Compare cannot be interrupted); the command exits.
+func (f *compareFlags) compareWithin(pa, pb *qasm.Program, opts []qcheck.Option) (qcheck.Result, error) {
+	if f.timeout == 0 {
+		return qcheck.Compare(pa.Circuit, pb.Circuit, opts...)
+	}
+	type answer struct {
+		r   qcheck.Result
+		err error
+	}
+	done := make(chan answer, 1)
+	go func() {
+		r, err := qcheck.Compare(pa.Circuit, pb.Circuit, opts...)
+		done <- answer{r, err}
+	}()
+	timer := time.NewTimer(f.timeout)
+	defer timer.Stop()
+	select {
+	case a := <-done:
+		return a.r, a.err
+	case <-timer.C:
+		return qcheck.Result{}, fmt.Errorf("gave up after -timeout %v", f.timeout)
+	}
 }
 
 const equivAbout = `
@@ -181,7 +214,10 @@ circuits are Clifford (exact, thousands of qubits), else the matrix-free estimat
 qubits (runs on statevectors; the witness certifies a lower bound, the upper bound holds with a
 stated probability, and a pair neither bound settles is not counted as equivalent). The wide engines compare in operator norm up to global phase only, without
 -exact-phase, -measured or clean -ancillas; -engine dense forces the dense engine at any width
-its memory allows (16·4^n bytes a matrix, at most 4 GiB: 14 qubits), which may take hours.
+its memory allows (16·4^n bytes a matrix, at most 4 GiB: 14 qubits). Before starting, the
+command estimates the work of the chosen engine (dense: ops·4^n + 6·8^n amplitude updates;
+matrix-free: 60·ops·2^n) and refuses more than -work (default 1e12, a few minutes), with the
+estimate; -timeout gives up on a comparison after a wall-clock time.
 
 With -json, one JSON object (the encoding of qcheck.Result; keys stay, text may change):
   equivalent         true when distance ≤ tolerance, as the engine certifies it

@@ -555,3 +555,25 @@ func TestBuiltBinary(t *testing.T) {
 		t.Errorf("equiv toffoli: %v", err)
 	}
 }
+
+// Issue 17, reproducer 9: the command bounds a comparison's cost before starting (-work) and its
+// wall-clock time (-timeout); both give exit 2 with the reason.
+func TestEquivWorkAndTimeout(t *testing.T) {
+	var b strings.Builder
+	b.WriteString("qreg q[10];\n")
+	for i := 0; i < 200; i++ {
+		fmt.Fprintf(&b, "t q[%d];\ncx q[%d],q[%d];\n", i%10, i%10, (i+1)%10)
+	}
+	dir := writeFiles(t, map[string]string{"a.qasm": b.String(), "b.qasm": b.String() + "h q[0];\n"})
+	a, c := filepath.Join(dir, "a.qasm"), filepath.Join(dir, "b.qasm")
+	// 401 + 400 ops on 10 qubits, dense: 801·4^10 + 6·8^10 ≈ 7.3e9 amplitude updates.
+	if code, _, stderr := runCmd("equiv", "-work", "1e9", a, c); code != exitBadUsed || !strings.Contains(stderr, "about 7.3e+09 amplitude updates") {
+		t.Errorf("-work 1e9: exit %d, stderr %q", code, stderr)
+	}
+	if code, _, stderr := runCmd("equiv", "-timeout", "1ms", a, c); code != exitBadUsed || !strings.Contains(stderr, "gave up after -timeout 1ms") {
+		t.Errorf("-timeout 1ms: exit %d, stderr %q", code, stderr)
+	}
+	if code, _, stderr := runCmd("equiv", "-timeout", "-1s", a, c); code != exitBadUsed || !strings.Contains(stderr, "must not be negative") {
+		t.Errorf("-timeout -1s: exit %d, stderr %q", code, stderr)
+	}
+}
