@@ -94,7 +94,7 @@ func StabilizerProgramOutcomes(c *circuit.Circuit, opts ProgramOptions) (*Stabil
 	nbits := bitsOf(c)
 	first := &symbolicRun{t: identityTableau(c.Qubits()), bits: make([]affineBit, nbits), weight: 1}
 	runs := []*symbolicRun{first}
-	cache := mapCache{}
+	cache := newMapCache()
 	deviation := 0.0
 	for i, op := range c.Ops {
 		var m *pauliMap
@@ -177,7 +177,7 @@ func CliffordProgram(c *circuit.Circuit) error {
 	if err := c.Validate(); err != nil {
 		return err
 	}
-	cache := mapCache{}
+	cache := newMapCache()
 	for i, op := range c.Ops {
 		if g := op.Gate.Name; g == "measure" || g == "reset" {
 			continue
