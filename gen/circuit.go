@@ -1,6 +1,9 @@
 package gen
 
 import (
+	"math"
+	"slices"
+
 	"pgregory.net/rapid"
 	"qcheck.dev/qcheck/circuit"
 )
@@ -49,6 +52,9 @@ type building struct {
 	first bool
 	pool  []int
 	pick  []int
+	// touch holds the qubits of a sandwich's first op, which the ops after it
+	// share; nil outside a sandwich.
+	touch []int
 }
 
 // extraOp is one op of a chunk, or the mark that ends the chunk.
@@ -60,11 +66,24 @@ type extraOp struct {
 
 // Kinds of chunk, in shrinking order.
 const (
-	chunkOp      = iota // one op
-	chunkSameRun        // ops confined to the qubits of the first
-	chunkInverse        // an op, ops elsewhere, the op's inverse
-	chunkCommute        // diagonal gates, which all commute
-	chunkRepeat         // a block of ops written twice or three times
+	chunkOp       = iota // one op
+	chunkSameRun         // ops confined to the qubits of the first
+	chunkSandwich        // an op, then ops on its qubits or elsewhere, each followed by the op again
+	chunkCommute         // diagonal gates, which all commute
+	chunkRepeat          // a block of ops written twice or three times
+	chunkPattern         // a textbook identity's left-hand side, or a near miss of it
+	chunkKinds
+)
+
+// Forms in which a sandwich repeats its first op, in shrinking order.
+const (
+	formSame     = iota // the same op
+	formInverse         // its inverse, when the set has it
+	formReversed        // the same gate on its qubits in reverse order
+	formSibling         // another gate of the same width on the same qubits
+	formToTwoPi         // the same gate with angles 2π − θ: the two add up to 2π
+	formToPi            // the same gate with angles π − θ
+	formKinds
 )
 
 // maxMotif is the most ops a motif draws (before repetition or the closing
@@ -77,29 +96,28 @@ const maxMotif = 5
 // 1/(remaining+1) spreads lengths evenly over [MinOps, MaxOps] when every
 // chunk is one op.
 //
-// Every chunk has the same shape whatever its kind: kind, a repeat count,
-// then its ops, each drawn as its own group behind a "go on" mark (see
-// drawExtra), and a final mark. A plain op reads that final mark and ignores
-// it. So shrinking deletes any op of a motif, the first included, and once
-// one op is left, lowering the kind to chunkOp keeps every later draw
-// aligned: the motif becomes a plain op.
+// Every chunk but a pattern has the same shape whatever its kind: kind, a
+// repeat count, a form and a sibling gate, then its ops, each drawn as its
+// own group behind a "go on" mark (see drawExtra), and a final mark. A plain
+// op reads that final mark and ignores it. So shrinking deletes any op of a
+// motif, the first included, and once one op is left, lowering the kind to
+// chunkOp keeps every later draw aligned: the motif becomes a plain op.
 func (b *building) chunk(t *rapid.T) bool {
 	n := len(b.c.Ops)
-	stop := drawBelow(t, b.maxOps-n+1) == 0
+	stop := drawBelow(t, b.stopRange(b.maxOps-n)) == 0
 	if stop && n >= b.minOps {
 		return false
 	}
 	kind := drawWeighted(t, b.chunkWeights)
+	if kind == chunkPattern {
+		b.add(b.drawPattern(t)...)
+		return true
+	}
 	times := 2 + drawBelow(t, 2)
-	b.first, b.pool, b.pick = true, nil, b.weights
-	switch kind {
-	case chunkInverse:
-		if inv := b.invertible(); inv != nil {
-			b.pick = inv
-		} else {
-			kind = chunkOp
-		}
-	case chunkCommute:
+	form := drawBelow(t, formKinds)
+	sibling := 8*drawBelow(t, 8) + drawBelow(t, 8)
+	b.first, b.pool, b.pick, b.touch = true, nil, b.weights, nil
+	if kind == chunkCommute {
 		if diagonal := b.diagonal(); diagonal != nil {
 			b.pick = diagonal
 		} else {
@@ -107,6 +125,7 @@ func (b *building) chunk(t *rapid.T) bool {
 		}
 	}
 	var ops []circuit.Op
+	var first circuit.Op
 	firstChoice := -1
 	for len(ops) < maxMotif {
 		e := b.extra.Draw(t, "op")
@@ -115,20 +134,17 @@ func (b *building) chunk(t *rapid.T) bool {
 		}
 		ops = append(ops, e.op)
 		if b.first {
-			b.first, firstChoice = false, e.choice
+			b.first, firstChoice, first = false, e.choice, e.op
 			b.pool, b.pick = b.extrasFor(kind, e.op)
+			if kind == chunkSandwich {
+				b.touch = e.op.Qubits
+			}
+		}
+		if kind == chunkSandwich {
+			ops = append(ops, b.again(firstChoice, first, form, sibling))
 		}
 	}
-	switch kind {
-	case chunkInverse:
-		if i := b.choices[firstChoice].inverse; i >= 0 {
-			inv := ops[0].Gate.Inverse()
-			if inv.IsCustom() {
-				inv = b.choices[i].gate
-			}
-			ops = append(ops, circuit.Op{Gate: inv, Qubits: append([]int(nil), ops[0].Qubits...)})
-		}
-	case chunkRepeat:
+	if kind == chunkRepeat {
 		block := ops
 		for range times - 1 {
 			for _, op := range block {
@@ -140,19 +156,72 @@ func (b *building) chunk(t *rapid.T) bool {
 	return true
 }
 
+// stopRange returns the range of the stop mark with room for left more ops:
+// left+1 without motifs, so that lengths are even over [MinOps, MaxOps];
+// 2·left+1 with them, which leans lengths toward MaxOps, where more
+// structure fits (a failure still shrinks to the shortest circuit).
+func (b *building) stopRange(left int) int {
+	if b.motifs {
+		return 2*left + 1
+	}
+	return left + 1
+}
+
+// again returns the sandwich's first op, choice i of the set, written again
+// in the given form; for formSibling, sibling (below 64, drawn whatever the
+// first op so that the draws after it keep their meaning when shrinking
+// changes it, and as six bits, which rapid shrinks fast) picks by weight,
+// modulo their total, the gate of the same width written instead.
+func (b *building) again(i int, op circuit.Op, form, sibling int) circuit.Op {
+	out := op.Clone()
+	switch form {
+	case formInverse:
+		if j := b.choices[i].inverse; j >= 0 {
+			inv := op.Gate.Inverse()
+			if inv.IsCustom() {
+				inv = b.choices[j].gate
+			}
+			out.Gate = inv
+		}
+	case formReversed:
+		slices.Reverse(out.Qubits)
+	case formSibling:
+		w := b.fitting(len(op.Qubits))
+		total := 0
+		for j, ch := range b.choices {
+			if ch.qubits != len(op.Qubits) {
+				w[j] = 0
+			}
+			total += w[j]
+		}
+		r := sibling % total // the first op's own gate has width len(op.Qubits): total > 0
+		j := 0
+		for ; r >= w[j]; j++ {
+			r -= w[j]
+		}
+		ch := b.choices[j]
+		out.Gate = ch.gate
+		if ch.params > 0 {
+			out.Gate.Params = make([]float64, ch.params)
+			for k := range out.Gate.Params {
+				out.Gate.Params[k] = math.Pi / 2
+				if len(op.Gate.Params) > 0 {
+					out.Gate.Params[k] = op.Gate.Params[k%len(op.Gate.Params)]
+				}
+			}
+		}
+	}
+	return out
+}
+
 // extrasFor returns the qubits and gate weights for the ops of a chunk of the
 // given kind after its first op.
 func (b *building) extrasFor(kind int, first circuit.Op) (pool, pick []int) {
 	switch kind {
 	case chunkSameRun:
-		return first.Qubits, b.fitting(len(first.Qubits))
-	case chunkInverse:
-		for q := range b.qubits {
-			if !contains(first.Qubits, q) {
-				pool = append(pool, q)
-			}
-		}
-		return pool, b.fitting(len(pool))
+		return first.Qubits, b.sameWidth(len(first.Qubits))
+	case chunkSandwich:
+		return nil, b.otherWidth(len(first.Qubits))
 	case chunkCommute:
 		return nil, b.diagonal()
 	case chunkRepeat:
@@ -163,29 +232,55 @@ func (b *building) extrasFor(kind int, first circuit.Op) (pool, pick []int) {
 
 // drawExtra draws a "go on" mark (on with probability 3/4; 0 stops) and then
 // one op under the current pool and pick, if this is the chunk's first op or
-// the mark is on and the chunk takes more.
+// the mark is on and the chunk takes more. In a sandwich (touch not nil) the
+// op shares a qubit with the first op, in a role drawn at random, three times
+// in four, and acts elsewhere otherwise.
 func (b *building) drawExtra(t *rapid.T) extraOp {
 	more := drawBelow(t, 4) != 0
 	if !b.first && (!more || b.pick == nil) {
 		return extraOp{}
 	}
 	i := drawWeighted(t, b.pick)
-	return extraOp{op: b.op(t, i, b.pool), choice: i, more: more}
+	if b.touch == nil {
+		return extraOp{op: b.op(t, i, b.pool), choice: i, more: more}
+	}
+	elsewhere := drawBelow(t, 4) == 0
+	if rest := without(b.touch, b.qubits); elsewhere && len(rest) >= b.choices[i].qubits {
+		return extraOp{op: b.op(t, i, rest), choice: i, more: more}
+	}
+	op := b.op(t, i, nil)
+	pos, shared := drawBelow(t, len(op.Qubits)), b.touch[drawBelow(t, len(b.touch))]
+	if k := slices.Index(op.Qubits, shared); k >= 0 {
+		op.Qubits[k], op.Qubits[pos] = op.Qubits[pos], op.Qubits[k]
+	} else {
+		op.Qubits[pos] = shared
+	}
+	return extraOp{op: op, choice: i, more: more}
 }
 
-// invertible returns the weights of the gates whose inverse is in the set,
-// or nil if there are none.
-func (b *building) invertible() []int {
-	w := make([]int, len(b.weights))
-	any := false
+// otherWidth returns the weights of the gates, those of a width other than k
+// counted twice, so that the ops a single-qubit gate is sandwiched
+// around are as often multi-qubit gates, in each of their roles, as
+// single-qubit ones.
+func (b *building) otherWidth(k int) []int {
+	w := slices.Clone(b.weights)
 	for i, ch := range b.choices {
-		if ch.inverse >= 0 && ch.weight > 0 {
-			w[i] = ch.weight
-			any = true
+		if ch.qubits != k {
+			w[i] *= 2
 		}
 	}
-	if !any {
-		return nil
+	return w
+}
+
+// sameWidth returns the weights of the gates that fit on k qubits, those of
+// exactly k qubits counted three times, so that a run on the qubits of a
+// two-qubit gate holds other two-qubit gates as often as single-qubit ones.
+func (b *building) sameWidth(k int) []int {
+	w := b.fitting(k)
+	for i, ch := range b.choices {
+		if w != nil && ch.qubits == k {
+			w[i] *= 3
+		}
 	}
 	return w
 }

@@ -10,6 +10,7 @@ import (
 	"gonum.org/v1/gonum/mat"
 	"pgregory.net/rapid"
 	"qcheck.dev/qcheck/circuit"
+	"qcheck.dev/qcheck/shrink"
 )
 
 func TestCircuitZeroOptions(t *testing.T) {
@@ -282,8 +283,10 @@ func TestCircuitOptionErrors(t *testing.T) {
 
 func TestCircuitShrinksToMinimalCounterexample(t *testing.T) {
 	// The property "no cx with target 2 follows an h on qubit 2" fails; from
-	// circuits of up to 200 ops rapid must reach the two-op counterexample
-	// h q2; cx q0,q2 (lowest control, nothing else).
+	// circuits of up to 200 ops rapid, and shrink.Minimize after it, must
+	// reach the two-op counterexample h q2; cx q0,q2 (lowest control,
+	// nothing else). rapid alone may stop at two ops whose qubits were drawn
+	// together (a pattern's), which Minimize then lowers one at a time.
 	fails := func(c *circuit.Circuit) bool {
 		hOn2 := false
 		for _, op := range c.Ops {
@@ -296,7 +299,8 @@ func TestCircuitShrinksToMinimalCounterexample(t *testing.T) {
 		}
 		return false
 	}
-	minimal, first := shrunkFrom(t, Circuit(Options{Qubits: 4, MaxOps: 200}), fails)
+	shrunk, first := shrunkFrom(t, Circuit(Options{Qubits: 4, MaxOps: 200}), fails)
+	minimal := shrink.Minimize(shrunk, fails)
 	want := circuit.New(4).H(2).CX(0, 2)
 	if !minimal.Equal(want) {
 		t.Errorf("shrunk to %d ops (from %d):\n%v\nwant\n%v", minimal.Len(), first.Len(), minimal, want)
@@ -304,27 +308,32 @@ func TestCircuitShrinksToMinimalCounterexample(t *testing.T) {
 	if first.Len() < 50 {
 		t.Errorf("the first failing circuit had only %d ops; the test should shrink from a long one", first.Len())
 	}
-	t.Logf("shrunk from %d ops to %d", first.Len(), minimal.Len())
+	t.Logf("shrunk from %d ops to %d by rapid, %d by Minimize", first.Len(), shrunk.Len(), minimal.Len())
 }
 
 func TestCircuitShrinksTowardSimpleGatesAndAngles(t *testing.T) {
 	opts := Options{Qubits: 4, MaxOps: 50}
-	// Any two-qubit gate: cx is the first in DefaultGateSet, on qubits 0, 1.
-	got := shrunk(t, Circuit(opts), func(c *circuit.Circuit) bool {
+	// Any two-qubit gate: one op on qubits 0, 1 (cx, the first two-qubit
+	// gate of DefaultGateSet, when rapid reaches it; a gate written by a
+	// motif, whose choice rapid cannot lower alone, otherwise).
+	twoQubit := func(c *circuit.Circuit) bool {
 		return slices.ContainsFunc(c.Ops, func(op circuit.Op) bool { return len(op.Qubits) == 2 })
-	})
-	if want := circuit.New(4).CX(0, 1); !got.Equal(want) {
-		t.Errorf("a circuit with a two-qubit gate shrinks to\n%v\nwant\n%v", got, want)
 	}
-	// Any gate with a nonzero angle: rz is the first with an angle, π/4 the
-	// first nonzero special angle.
-	got = shrunk(t, Circuit(opts), func(c *circuit.Circuit) bool {
+	got := shrink.Minimize(shrunk(t, Circuit(opts), twoQubit), twoQubit)
+	if len(got.Ops) != 1 || !slices.Equal(got.Ops[0].Qubits, []int{0, 1}) || slices.ContainsFunc(got.Ops[0].Gate.Params, func(a float64) bool { return a != 0 }) {
+		t.Errorf("a circuit with a two-qubit gate shrinks to\n%v\nwant one op on qubits 0, 1 with angles 0", got)
+	}
+	// Any gate with a nonzero angle: one op, on the lowest qubits, with π/4,
+	// the first nonzero special angle (rz, the first gate with an angle,
+	// when rapid reaches it; a pattern's gate with an angle otherwise).
+	angled := func(c *circuit.Circuit) bool {
 		return slices.ContainsFunc(c.Ops, func(op circuit.Op) bool {
 			return slices.ContainsFunc(op.Gate.Params, func(a float64) bool { return a != 0 })
 		})
-	})
-	if want := circuit.New(4).RZ(math.Pi/4, 0); !got.Equal(want) {
-		t.Errorf("a circuit with a nonzero angle shrinks to\n%v\nwant\n%v", got, want)
+	}
+	got = shrink.Minimize(shrunk(t, Circuit(opts), angled), angled)
+	if len(got.Ops) != 1 || !slices.Contains(got.Ops[0].Gate.Params, math.Pi/4) || got.Ops[0].Qubits[0] != 0 {
+		t.Errorf("a circuit with a nonzero angle shrinks to\n%v\nwant one op on qubit 0 with angle π/4", got)
 	}
 }
 

@@ -19,12 +19,12 @@ func ExampleCircuit() {
 		fmt.Println(op)
 	}
 	// Output:
-	// cx q1,q0
-	// cx q0,q2
-	// cx q1,q0
-	// cx q0,q2
-	// rz(-2π) q0
-	// rz(5.7038) q0
+	// cx q1,q2
+	// h q2
+	// h q2
+	// h q2
+	// rz(-4π) q2
+	// h q2
 }
 
 // The zero Options draw up to 20 ops on 3 qubits from DefaultGateSet.

@@ -8,7 +8,7 @@ import (
 )
 
 // Options configure Circuit. The zero value is useful: circuits of up to 20
-// ops on 3 qubits, drawn from DefaultGateSet with equal weights, with 30% of
+// ops on 3 qubits, drawn from DefaultGateSet with equal weights, with 85% of
 // the draws spent on motifs.
 type Options struct {
 	// Qubits is the width of the drawn circuits; 0 means 3.
@@ -16,8 +16,8 @@ type Options struct {
 
 	// MaxOps is the most ops a drawn circuit has; 0 means 20. MinOps is the
 	// fewest (default 0); shrinking never goes below it. Lengths are spread
-	// evenly over [MinOps, MaxOps] when no motifs are drawn, and close to
-	// that with them.
+	// evenly over [MinOps, MaxOps] when no motifs are drawn, and lean toward
+	// MaxOps with them, where more structure fits.
 	MinOps, MaxOps int
 
 	// GateSet names the standard gates to draw from (lower-case OpenQASM
@@ -37,9 +37,15 @@ type Options struct {
 
 	// Motifs is the percentage of draws that place a motif, a short stretch
 	// of the structure that rewrite passes look for, instead of a single
-	// op: runs of gates on the same qubits, a gate and (a few ops later)
-	// its inverse, runs of commuting diagonal gates, and a block of ops
-	// repeated two or three times. 0 means 30; a negative value means none;
+	// op: the left-hand side of a textbook identity whose gates are all in
+	// the set, or a near miss of it (one op moved to another qubit, its
+	// operands exchanged or its angle moved by π); a sandwich, an op with
+	// ops after it that share its qubits in every role (or act elsewhere),
+	// each followed by the op again, its inverse, the op with its operands
+	// reversed, or another gate of the same width; runs of gates on the
+	// same qubits; runs of commuting diagonal gates; and a block of ops
+	// repeated two or three times. Only gates of the set with a positive
+	// weight appear, in motifs too. 0 means 85; a negative value means none;
 	// at most 100.
 	Motifs int
 }
@@ -60,7 +66,7 @@ func DefaultGateSet() []string {
 const (
 	defaultQubits = 3
 	defaultMaxOps = 20
-	defaultMotifs = 30
+	defaultMotifs = 85 // measured: testdata/catalogue/detection.txt
 )
 
 // choice is one gate Circuit may draw.
@@ -80,7 +86,9 @@ type plan struct {
 	minOps, maxOps int
 	choices        []choice
 	weights        []int
-	chunkWeights   []int // single op, then each motif kind
+	chunkWeights   []int     // single op, then each motif kind
+	patterns       []pattern // the identities whose gates are all in the set
+	motifs         bool      // whether any motif is drawn
 }
 
 // diagonalGates are the standard gates whose matrices are diagonal
@@ -183,7 +191,21 @@ func (o Options) resolve() (*plan, error) {
 	case motifs > 100:
 		return nil, fmt.Errorf("gen.Options: Motifs = %d, want a percentage ≤ 100", o.Motifs)
 	}
-	p.chunkWeights = []int{4 * (100 - motifs), motifs, motifs, motifs, motifs}
+	p.patterns = p.available()
+	p.motifs = motifs > 0
+	// Of the motifs, patterns get half, sandwiches a quarter and the
+	// other kinds a twelfth each.
+	p.chunkWeights = make([]int, chunkKinds)
+	p.chunkWeights[chunkOp] = 12 * (100 - motifs)
+	p.chunkWeights[chunkSandwich] = 3 * motifs
+	p.chunkWeights[chunkPattern] = 6 * motifs
+	p.chunkWeights[chunkSameRun] = motifs
+	p.chunkWeights[chunkCommute] = motifs
+	p.chunkWeights[chunkRepeat] = motifs
+	if len(p.patterns) == 0 {
+		p.chunkWeights[chunkSandwich] += p.chunkWeights[chunkPattern]
+		p.chunkWeights[chunkPattern] = 0
+	}
 	return p, nil
 }
 

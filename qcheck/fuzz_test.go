@@ -17,10 +17,11 @@ import (
 //	go test ./qcheck -run '^$' -fuzz FuzzMergeRZRule -fuzztime 1h -parallel 1
 //
 // Inputs that fail are saved by Go under testdata/fuzz/<target>/ and from then on run with
-// every go test, as a regression corpus. testdata/fuzz/FuzzMergeRZRule/ holds one such input: it
-// was found by fuzzing the rule with mergeRZAnyQubit (the pass whose matcher ignores qubits) and
-// kept when the pass was fixed; TestFuzzCorpusCatchesTheMatcherBug checks that it still exposes
-// the bug.
+// every go test, as a regression corpus. testdata/fuzz/FuzzMergeRZRule/ holds one such input: an
+// input on which the rule with mergeRZAnyQubit (the pass whose matcher ignores qubits) fails and
+// the fixed pass does not, found again by a search over random byte strings when gen's circuits
+// changed (issue 16), since an entry holds rapid's choices and not the circuit;
+// TestFuzzCorpusCatchesTheMatcherBug checks that it still exposes the bug.
 
 //
 // rapid reads eight bytes per choice and skips an input that runs out of bytes before the

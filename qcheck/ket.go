@@ -111,7 +111,7 @@ func basisKet(x, n int) string {
 }
 
 // phaseTerm writes a unit-modulus coefficient with its joining sign: "", " + ", " − ", "i",
-// " − i", "e^{iπ/4}".
+// " − i", "e^{iπ/4}", "e^{−i0.3}".
 func phaseTerm(z complex128, first bool) string {
 	var sign, body string
 	switch {
@@ -123,6 +123,8 @@ func phaseTerm(z complex128, first bool) string {
 		sign, body = "+", "i"
 	case cmplx.Abs(z+1i) < 1e-6:
 		sign, body = "−", "i"
+	case cmplx.Phase(z) < 0:
+		sign, body = "+", "e^{−i"+circuit.FormatAngle(-cmplx.Phase(z))+"}"
 	default:
 		sign, body = "+", "e^{i"+circuit.FormatAngle(cmplx.Phase(z))+"}"
 	}

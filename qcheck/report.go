@@ -3,6 +3,7 @@ package qcheck
 import (
 	"fmt"
 	"slices"
+	"strconv"
 	"strings"
 
 	"github.com/google/go-cmp/cmp"
@@ -111,7 +112,7 @@ func circuitsSection(b *strings.Builder, p *page) {
 		return
 	}
 	if f.Input != nil {
-		writeCircuit(b, "input (as small as rapid could make it)", f.Input)
+		writeCircuit(b, "input (shrunk)", f.Input)
 		b.WriteString(wrapList("  as Go: ", []string{f.Input.GoString()}, ""))
 	}
 	switch f.Kind {
@@ -241,12 +242,36 @@ func wrapList(prefix string, items []string, sep string) string {
 	return b.String()
 }
 
+// writeAngleDiff is writeDiff for op lists whose printed forms agree: it says they have the same
+// ops only when they do exactly, and otherwise lists the angles that differ beyond the digits
+// printed, in full.
+func writeAngleDiff(b *strings.Builder, aName string, a *circuit.Circuit, bName string, c *circuit.Circuit) {
+	var lines []string
+	for i := range min(len(a.Ops), len(c.Ops)) {
+		pa, pc := a.Ops[i].Gate.Params, c.Ops[i].Gate.Params
+		for k := range min(len(pa), len(pc)) {
+			if pa[k] != pc[k] {
+				lines = append(lines, fmt.Sprintf("  op %d (%s): angle %d is %s in %s and %s in %s\n", i, a.Ops[i].Gate.Name, k,
+					strconv.FormatFloat(pa[k], 'g', -1, 64), aName, strconv.FormatFloat(pc[k], 'g', -1, 64), bName))
+			}
+		}
+	}
+	if len(lines) == 0 {
+		fmt.Fprintf(b, "\nops: %s and %s have the same ops\n", aName, bName)
+		return
+	}
+	fmt.Fprintf(b, "\nops: %s and %s print the same, but these angles differ:\n", aName, bName)
+	for _, l := range lines {
+		b.WriteString(l)
+	}
+}
+
 // writeDiff writes the structural difference of two op lists with go-cmp.
 func writeDiff(b *strings.Builder, aName string, a *circuit.Circuit, bName string, c *circuit.Circuit) {
 	as, cs := opStrings(a), opStrings(c)
 	d := cmp.Diff(as, cs)
 	if d == "" {
-		fmt.Fprintf(b, "\nops: %s and %s have the same ops\n", aName, bName)
+		writeAngleDiff(b, aName, a, bName, c)
 		return
 	}
 	fmt.Fprintf(b, "\nops (−%s +%s):\n", aName, bName)
@@ -355,9 +380,15 @@ func (r Result) writeEvidence(b *strings.Builder) {
 		b.WriteString("\nmeasurement that tells them apart:\n")
 	}
 	switch {
+	case m.Input == nil && r.Witness != nil && r.ExactPhase:
+		b.WriteString("  none found: no outcome probability differs visibly; the circuits differ by a global phase\n")
+		b.WriteString("  or by too little to move a probability, and a global phase shows when the circuit is\n")
+		b.WriteString("  controlled, which is what ExactPhase guards\n")
 	case m.Input == nil && r.Witness != nil:
-		b.WriteString("  none: the circuits differ only by a global phase, which no measurement of them alone can\n")
-		b.WriteString("  see; it shows when the circuit is controlled, which is what ExactPhase guards\n")
+		// Without ExactPhase the distance above is phase-free: the circuits differ by more than a
+		// global phase, however little the probabilities move.
+		b.WriteString("  none found: no outcome probability differs visibly, though the circuits differ by more\n")
+		b.WriteString("  than a global phase (the distance above is phase-free); a controlled or repeated use shows it\n")
 	case m.Input != nil:
 		input := Ket(m.Input, n)
 		if m.InputBasis >= 0 {

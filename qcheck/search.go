@@ -16,7 +16,11 @@ import (
 )
 
 // Search runs the same campaign as Preserves outside a test, for the command-line tool and
-// demos: it returns the shrunk counterexample as a value, or nil when every check passed. The
+// demos: it returns the shrunk counterexample as a value, or nil when every check passed. Where
+// rapid's shrinking stops short, shrink.Minimize finishes it: the input reported is 1-minimal
+// (removing any op, lowering any qubit or replacing any angle by a simpler special angle makes
+// the failure go away), and its report's "as Go" line rebuilds it; the seed replays rapid's
+// search, which ends at rapid's own shrunk input. The
 // error reports bad options, or a campaign that failed without a failure of the pass (a panicking
 // generator, or a failure rapid could not reproduce).
 //
@@ -77,7 +81,7 @@ func search(name string, s subject, g *rapid.Generator[*circuit.Circuit], opts [
 	if m := passedPattern.FindStringSubmatch(msg); m != nil {
 		last.Passed, _ = strconv.Atoi(m[1])
 	}
-	return last, nil
+	return minimized(cfg, s, last), nil
 }
 
 // testingFlags makes rapid usable outside a test binary: rapid reads testing.Short, which panics

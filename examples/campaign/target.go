@@ -31,7 +31,7 @@ const DefaultChecks = 100
 
 // Hunt runs qcheck.Search on the target with rapid's seed and number of checks set as given, and
 // without fail files (so that nothing is written to, or replayed from, testdata/rapid/). It
-// returns the shrunk failure, or nil when all checks passed. Hunt sets rapid's command-line
+// returns the shrunk failure (1-minimal, as Search makes it), or nil when all checks passed. Hunt sets rapid's command-line
 // settings for the duration of the call and restores them; like Search, calls must not overlap.
 func Hunt(t Target, seed uint64, checks int) (*qcheck.Failure, error) {
 	if seed == 0 {
@@ -40,7 +40,7 @@ func Hunt(t Target, seed uint64, checks int) (*qcheck.Failure, error) {
 	if checks < 1 {
 		return nil, fmt.Errorf("campaign: %d checks; want at least 1", checks)
 	}
-	restore, err := setFlags(map[string]string{
+	restore, err := SetRapidFlags(map[string]string{
 		"rapid.seed":       strconv.FormatUint(seed, 10),
 		"rapid.checks":     strconv.Itoa(checks),
 		"rapid.nofailfile": "true",
@@ -56,8 +56,10 @@ func Hunt(t Target, seed uint64, checks int) (*qcheck.Failure, error) {
 	return qcheck.Search(t.Pass, t.Circuits, t.Options...)
 }
 
-// setFlags sets rapid's flags and returns a function that puts back their old values.
-func setFlags(values map[string]string) (restore func(), err error) {
+// SetRapidFlags sets rapid's command-line flags (such as "rapid.seed") to the given values and
+// returns a function that puts back their old values; other example packages that drive rapid
+// with fixed settings use it too. Calls must not overlap.
+func SetRapidFlags(values map[string]string) (restore func(), err error) {
 	old := map[string]string{}
 	restore = func() {
 		for name, v := range old {

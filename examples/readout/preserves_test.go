@@ -26,11 +26,12 @@ func TestPreservesPrograms(t *testing.T) {
 // Search finds each careless variant's bug and shrinks it to a small program. The programs are
 // those the bugs need, on two qubits: a cz whose second qubit is rotated afterwards, a SWAP of
 // qubits in different states. The first is often missing from rapid's 100 draws, so the seed is fixed
-// (rapid's -rapid.seed, which Search reads) to keep the test from depending on luck.
+// (rapid's -rapid.seed, which Search reads) to keep the test from depending on luck; it was chosen
+// again when gen.Circuit's draws changed (issue 16).
 func TestSearchCatchesCareless(t *testing.T) {
 	seed := flag.Lookup("rapid.seed")
 	old := seed.Value.String()
-	if err := seed.Value.Set("1383598150670856857"); err != nil {
+	if err := seed.Value.Set("2"); err != nil {
 		t.Fatal(err)
 	}
 	t.Cleanup(func() { seed.Value.Set(old) })

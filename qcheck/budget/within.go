@@ -73,8 +73,13 @@ func budgetReport(l *Ledger, eps, bound float64, over []Entry) string {
 	if k := len(rows); k < n && bound > eps {
 		fmt.Fprintf(&b, "  (%d more entries)\n", n-k)
 	}
-	fmt.Fprintf(&b, "end to end: where the windows account for every change (Ledger.Covers), the circuits are within %.4g of each other in phase-free operator norm, "+
-		"so any measurement outcome's probability changes by at most 2·Σδ = %.4g (Nielsen & Chuang §4.5.3)", bound, 2*bound)
+	fmt.Fprintf(&b, "end to end: where the windows account for every change (Ledger.Covers), the circuits are within %.4g of each other in phase-free operator norm, ", bound)
+	if 2*bound < 1 {
+		fmt.Fprintf(&b, "so any measurement outcome's probability changes by at most 2·Σδ = %.4g (Nielsen & Chuang §4.5.3)", 2*bound)
+	} else {
+		// A probability cannot change by more than 1: the bound 2·Σδ says nothing beyond it.
+		fmt.Fprintf(&b, "which bounds nothing about outcome probabilities: 2·Σδ = %.4g is at least 1, the most a probability can change", 2*bound)
+	}
 	return b.String()
 }
 

@@ -567,8 +567,17 @@ func TestEquivWorkAndTimeout(t *testing.T) {
 	dir := writeFiles(t, map[string]string{"a.qasm": b.String(), "b.qasm": b.String() + "h q[0];\n"})
 	a, c := filepath.Join(dir, "a.qasm"), filepath.Join(dir, "b.qasm")
 	// 401 + 400 ops on 10 qubits, dense: 801·4^10 + 6·8^10 ≈ 7.3e9 amplitude updates.
-	if code, _, stderr := runCmd("equiv", "-work", "1e9", a, c); code != exitBadUsed || !strings.Contains(stderr, "about 7.3e+09 amplitude updates") {
-		t.Errorf("-work 1e9: exit %d, stderr %q", code, stderr)
+	if code, _, stderr := runCmd("equiv", "-engine", "dense", "-work", "1e9", a, c); code != exitBadUsed || !strings.Contains(stderr, "about 7.3e+09 amplitude updates") {
+		t.Errorf("-engine dense -work 1e9: exit %d, stderr %q", code, stderr)
+	}
+	// Left to choose, the command passes over the dense engine to one whose work fits: the
+	// matrix-free engine, 60·801·2^10 ≈ 4.9e7 updates, finds the added h.
+	if code, stdout, _ := runCmd("equiv", "-work", "1e9", a, c); code != exitDiffer || !strings.Contains(stdout, "matrix-free") {
+		t.Errorf("-work 1e9: exit %d, stdout %q", code, stdout)
+	}
+	// With no engine within the limit, the refusal lists each engine's reason.
+	if code, _, stderr := runCmd("equiv", "-work", "1e3", a, c); code != exitBadUsed || !strings.Contains(stderr, "over the work limit") {
+		t.Errorf("-work 1e3: exit %d, stderr %q", code, stderr)
 	}
 	if code, _, stderr := runCmd("equiv", "-timeout", "1ms", a, c); code != exitBadUsed || !strings.Contains(stderr, "gave up after -timeout 1ms") {
 		t.Errorf("-timeout 1ms: exit %d, stderr %q", code, stderr)
