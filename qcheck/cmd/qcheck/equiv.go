@@ -240,7 +240,8 @@ With -json, one JSON object (the encoding of qcheck.Result; keys stay, text may 
   phase              φ in radians with want ≈ e^{iφ}·got (0 with -exact-phase)
   operator_distance  the operator-norm distance whatever the measure
   witness            an input state that exposes the difference, as [re, im] amplitude pairs
-                     indexed Σ b_q·2^q (qubit 0 is the least-significant bit); [] if none
+                     indexed Σ b_q·2^q (qubit 0 is the least-significant bit); [] if none,
+                     if it shows no gap, or if it has more than 4,096 amplitudes (12 qubits)
   witness_gap        the gap the witness shows: a certified lower bound on operator_distance
   engine             "dense", "tableau", "matrix-free", "stabilizer-program", "program" or
                      "zero-state": the engine that answered

@@ -1,0 +1,15 @@
+OPENQASM 2.0;
+include "qelib1.inc";
+qreg q[5];
+x q[4];
+h q[0];
+h q[1];
+h q[2];
+h q[3];
+h q[4];
+cx q[0],q[4];
+cx q[3],q[4];
+h q[0];
+h q[1];
+h q[2];
+h q[3];

@@ -1,0 +1,11 @@
+OPENQASM 3.0;
+include "stdgates.inc";
+qubit[5] q;
+bit[5] c;
+h q[0];
+c[0] = measure q[0];
+reset q[0];
+h q[1];
+cx q[1],q[2];
+barrier q;
+c = measure q;

@@ -1,0 +1,11 @@
+OPENQASM 2.0;
+include "qelib1.inc";
+qreg q[5];
+creg c[5];
+h q[0];
+measure q[0] -> c[0];
+if(c==2) x q[0];
+h q[1];
+cx q[1],q[2];
+barrier q;
+measure q -> c;

@@ -1,0 +1,11 @@
+OPENQASM 2.0;
+include "qelib1.inc";
+qreg q[5];
+h q[0];
+cx q[0],q[1];
+cx q[1],q[2];
+cx q[3],q[4];
+s q[0];
+s q[3];
+sdg q[0];
+sdg q[3];

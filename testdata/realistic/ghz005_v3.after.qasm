@@ -1,0 +1,15 @@
+OPENQASM 3.0;
+include "stdgates.inc";
+qubit[5] q;
+bit[5] c;
+h q[0];
+cx q[0],q[1];
+cx q[1],q[2];
+cx q[2],q[3];
+cx q[3],q[4];
+s q[0];
+s q[3];
+sdg q[0];
+sdg q[3];
+barrier q;
+c = measure q;

@@ -1,0 +1,14 @@
+OPENQASM 2.0;
+include "qelib1.inc";
+qreg q[5];
+creg c[5];
+creg m[1];
+h q[0];
+measure q[0] -> m[0];
+if(m==1) x q[1];
+reset q[0];
+h q[2];
+cx q[2],q[3];
+cx q[0],q[4];
+barrier q;
+measure q -> c;

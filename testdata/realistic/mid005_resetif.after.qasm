@@ -1,0 +1,14 @@
+OPENQASM 3.0;
+include "stdgates.inc";
+qubit[5] q;
+bit[5] c;
+bit[1] m;
+h q[0];
+m[0] = measure q[0];
+if (m == 1) x q[1];
+if (m == 1) x q[0];
+h q[2];
+cx q[2],q[3];
+cx q[0],q[4];
+barrier q;
+c = measure q;
