@@ -101,7 +101,7 @@ func TestBadInput(t *testing.T) {
 		{"exact phase with diamond", c2, c2, []Option{ExactPhase(), UseMeasure(Diamond)}, "ExactPhase with the diamond norm"},
 		{"measure ops with UseEngine(Dense)", circuit.New(1).H(0).Measure(0, 0), circuit.New(1).H(0).Measure(0, 0), []Option{UseEngine(Dense)}, "the dense engine compares unitaries on every input, not program meanings"},
 		{"unknown measure", c2, c2, []Option{UseMeasure(Measure(42))}, "UseMeasure(Measure(42))"},
-		{"too wide for auto", wideCustom, wideCustom, nil, "25 qubits is wider than the dense engine takes automatically (12); tableau: want is not a circuit the tableau engine can answer for"},
+		{"too wide for auto", wideCustom, wideCustom, nil, "tableau: want is not a circuit the tableau engine can answer for: circuit: op 1 (t): not a Clifford gate; the tableau engine needs a Clifford circuit; dense: 25 qubits is wider than the dense engine takes automatically (12)"},
 		{"too wide for auto, matrix-free", wideCustom, wideCustom, nil, "matrix-free: 25 qubits is wider than the matrix-free engine takes automatically (22)"},
 		{"too wide for auto, zx", wideCustom, wideCustom, nil, "zx: the zx engine has no ZX-diagram for op 0"},
 		{"measured at width", circuit.New(13).T(0), circuit.New(13).T(0), []Option{Measured(0)}, "13 qubits is wider than the dense engine"},
@@ -320,7 +320,7 @@ func TestEngine(t *testing.T) {
 		}
 	}
 	var e Engine
-	if err := e.UnmarshalText([]byte("fast")); err == nil || !strings.Contains(err.Error(), "choose auto, dense") {
+	if err := e.UnmarshalText([]byte("fast")); err == nil || !strings.Contains(err.Error(), "choose auto, tableau, dense, zx, matrix-free") {
 		t.Errorf("unknown name read as %q, %v", e, err)
 	}
 }

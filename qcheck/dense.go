@@ -38,6 +38,9 @@ func (denseEngine) refuses(cfg *config, f *frame, auto bool) error {
 	if auto && f.m > denseAuto {
 		return fmt.Errorf("%d qubits is wider than the dense engine takes automatically (%d)", f.m, denseAuto)
 	}
+	if auto && f.m >= zxAutoFrom && (zxEngine{}).refuses(cfg, f, true) == nil {
+		return fmt.Errorf("at %d qubits the ZX engine answers first (and hands what it leaves undecided to the dense engine)", f.m)
+	}
 	return nil
 }
 
@@ -129,10 +132,12 @@ func compareDense(cfg *config, f *frame, r *Result, full bool) error {
 		switch {
 		case upper <= cfg.tol:
 			r.Equivalent, r.Distance = true, upper
+			r.UpperBound = lower < upper
 		case lower > cfg.tol:
 			r.Distance = lower
+			r.LowerBound = lower < upper
 		default:
-			r.Distance = lower
+			r.Distance, r.LowerBound = lower, true
 			r.Undecided = fmt.Sprintf("the largest total-variation distance of the measured distributions over all inputs is at least %.4g (found on an input) and at most %.4g (certified bound); the tolerance %g lies between", lower, upper, cfg.tol)
 		}
 		r.Certifies += fmt.Sprintf("; the largest over all inputs lies in [%.4g, %.4g]", lower, upper)

@@ -65,6 +65,7 @@ func (matrixFreeEngine) compare(cfg *config, f *frame, r *Result, full bool) err
 		r.Certifies = fmt.Sprintf("certain: the witness shows %.4g > tolerance (a certified lower bound)", res.Lower)
 	case res.Upper <= cfg.tol:
 		r.Equivalent = true
+		r.LowerBound = true // the estimate; the verdict rests on the probabilistic upper bound
 		r.Certifies = fmt.Sprintf("upper bound %.3g ≤ tolerance with probability ≥ 1 − %.0e over the random start", res.Upper, res.Failure)
 	default:
 		// The estimate never exceeds the true distance, so it cannot vouch for equivalence.

@@ -31,8 +31,11 @@ func (r *Result) verdict() string {
 	if r.Equivalent {
 		rel = "≤"
 	}
-	if r.LowerBound {
+	switch {
+	case r.LowerBound:
 		return fmt.Sprintf("%s at least %.4g %s tolerance %g", r.Measure, r.Distance, rel, r.Tolerance)
+	case r.UpperBound:
+		return fmt.Sprintf("%s at most %.4g %s tolerance %g", r.Measure, r.Distance, rel, r.Tolerance)
 	}
 	return fmt.Sprintf("%s %.4g %s tolerance %g", r.Measure, r.Distance, rel, r.Tolerance)
 }

@@ -33,6 +33,10 @@ type Result struct {
 	// they are (the tableau for Clifford circuits too entangled to split into small factors, the
 	// matrix-free engine's estimate).
 	LowerBound bool
+	// UpperBound reports that Distance is a certified upper bound, not the distance itself: the
+	// engine proved the circuits at most Distance apart (ZX rewriting, angles rounded to Clifford
+	// ones, measured distributions over every input).
+	UpperBound bool
 	// Measure is the measure of Distance and Tolerance.
 	Measure Measure
 	// Tolerance is the ε the verdict used.
@@ -150,6 +154,7 @@ type resultJSON struct {
 	Undecided        string         `json:"undecided,omitempty"`
 	Distance         float64        `json:"distance"`
 	LowerBound       bool           `json:"lower_bound,omitempty"`
+	UpperBound       bool           `json:"upper_bound,omitempty"`
 	Measure          Measure        `json:"measure"`
 	Tolerance        float64        `json:"tolerance"`
 	ExactPhase       bool           `json:"exact_phase"`
@@ -180,7 +185,7 @@ const maxJSONWitness = 1 << 12
 // the circuits have the same ops.
 func (r Result) MarshalJSON() ([]byte, error) {
 	v := resultJSON{
-		Equivalent: r.Equivalent, Undecided: r.Undecided, Distance: r.Distance, LowerBound: r.LowerBound, Measure: r.Measure,
+		Equivalent: r.Equivalent, Undecided: r.Undecided, Distance: r.Distance, LowerBound: r.LowerBound, UpperBound: r.UpperBound, Measure: r.Measure,
 		Tolerance: r.Tolerance, ExactPhase: r.ExactPhase, Phase: r.Phase,
 		OperatorDistance: r.OperatorDistance,
 		WitnessGap:       r.WitnessGap, Engine: r.Engine, Certifies: r.Certifies, Pauli: r.Pauli,

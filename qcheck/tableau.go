@@ -41,6 +41,9 @@ func (tableauEngine) refuses(cfg *config, f *frame, auto bool) error {
 	if err := unitaryUpToPhase(cfg, f, Tableau); err != nil {
 		return err
 	}
+	if auto && f.m < zxAutoFrom {
+		return fmt.Errorf("%d qubits is narrow enough for the dense engine's exact distance", f.m)
+	}
 	b, err := cliffordRounding(f.want, f.got)
 	if err != nil {
 		return err
@@ -101,6 +104,7 @@ func compareTableau(cfg *config, f *frame, r *Result) error {
 		// reported is that bound (0 when no angle was rounded).
 		r.Equivalent = true
 		r.Distance, r.OperatorDistance = rounding, rounding
+		r.UpperBound = rounding > 0
 		return nil
 	}
 	anti := res.Want.Anticommutes(res.Got)

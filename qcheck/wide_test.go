@@ -214,16 +214,20 @@ func TestAutoMatrixFreeAtWidth(t *testing.T) {
 		perm[i] = i
 	}
 	perm[3], perm[9] = 9, 3
-	r, err := Compare(want, got, OutputPermutation(perm))
+	r, err := Compare(want, got, OutputPermutation(perm), UseEngine(MatrixFree))
 	if err != nil {
 		t.Fatal(err)
 	}
 	if r.Engine != MatrixFree || !r.Equivalent {
 		t.Fatalf("engine %v, equivalent %v, distance %.3g; want the matrix-free engine to accept it", r.Engine, r.Equivalent, r.Distance)
 	}
+	// Left to choose, Compare gives a 14-qubit pair to the ZX engine first, which proves it.
+	if r, err := Compare(want, got, OutputPermutation(perm)); err != nil || r.Engine != ZX || !r.Equivalent {
+		t.Fatalf("auto: engine %v, equivalent %v, err %v; want the ZX engine's proof", r.Engine, r.Equivalent, err)
+	}
 	bad := want.Clone()
 	bad.Ops[len(bad.Ops)-2] = circuit.Op{Gate: circuit.Gate{Name: "tdg"}, Qubits: []int{3}}
-	r, err = Compare(want, bad)
+	r, err = Compare(want, bad, UseEngine(MatrixFree))
 	if err != nil {
 		t.Fatal(err)
 	}

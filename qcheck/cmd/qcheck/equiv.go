@@ -257,6 +257,7 @@ With -json, one JSON object (the encoding of qcheck.Result; keys stay, text may 
   exact_phase        whether global phase counted
   phase              φ in radians with want ≈ e^{iφ}·got (0 with -exact-phase)
   lower_bound        true when distance is a certified lower bound, not the distance itself
+  upper_bound        true when distance is a certified upper bound, not the distance itself
   operator_distance  the operator-norm distance whatever the measure
   witness            an input state that exposes the difference, as [re, im] amplitude pairs
                      indexed Σ b_q·2^q (qubit 0 is the least-significant bit); [] if none,

@@ -198,7 +198,7 @@ func TestEquivEngineFlag(t *testing.T) {
 		stderr string
 	}{
 		{[]string{"-engine", "tableau", ta, tb}, "Clifford"},
-		{[]string{"-engine", "fast", ta, tb}, "flag -engine: unknown engine; choose auto, dense, tableau, matrix-free, stabilizer-program, program, zero-state or zx"},
+		{[]string{"-engine", "fast", ta, tb}, "flag -engine: unknown engine; choose auto, tableau, dense, zx, matrix-free, stabilizer-program, program or zero-state"},
 	} {
 		if code, _, errOut := engineOf(c.args...); code != exitBadUsed || !strings.Contains(errOut, c.stderr) {
 			t.Errorf("equiv %v: exit %d, stderr %q; want exit 2 and …%s…", c.args, code, errOut, c.stderr)
@@ -585,7 +585,7 @@ func TestEquivWorkAndTimeout(t *testing.T) {
 	if code, _, stderr := runCmd("equiv", "-work", "1e3", a, c); code != exitBadUsed || !strings.Contains(stderr, "over the work limit") {
 		t.Errorf("-work 1e3: exit %d, stderr %q", code, stderr)
 	}
-	if code, _, stderr := runCmd("equiv", "-timeout", "1ms", a, c); code != exitBadUsed || !strings.Contains(stderr, "gave up after -timeout 1ms") {
+	if code, _, stderr := runCmd("equiv", "-engine", "dense", "-timeout", "1ms", a, c); code != exitBadUsed || !strings.Contains(stderr, "gave up after -timeout 1ms") {
 		t.Errorf("-timeout 1ms: exit %d, stderr %q", code, stderr)
 	}
 	if code, _, stderr := runCmd("equiv", "-timeout", "-1s", a, c); code != exitBadUsed || !strings.Contains(stderr, "must not be negative") {
