@@ -2,6 +2,7 @@ package main
 
 import (
 	"encoding/json"
+	"errors"
 	"flag"
 	"fmt"
 	"io"
@@ -162,7 +163,18 @@ func (f *compareFlags) compareFiles(a, b string) (qcheck.Result, error) {
 		}
 	}
 	r, err := f.compareWithin(pa, pb, opts)
-	if err != nil {
+	var opErr *qcheck.OpError
+	switch {
+	case errors.As(err, &opErr):
+		path, prog := a, pa
+		if opErr.Circuit == "got" {
+			path, prog = b, pb
+		}
+		if opErr.Index < len(prog.Lines) {
+			return qcheck.Result{}, fmt.Errorf("%s:%d: %s: %s", path, prog.Lines[opErr.Index], opErr.Op, flagWords.Replace(opErr.Err))
+		}
+		fallthrough
+	case err != nil:
 		return qcheck.Result{}, fmt.Errorf("%s vs %s: %s", a, b, flagWords.Replace(err.Error()))
 	}
 	return r, nil

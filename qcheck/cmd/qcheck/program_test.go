@@ -126,3 +126,33 @@ func TestEquivPaperPrograms(t *testing.T) {
 		t.Errorf("teleport.qasm against its deferred form: exit %d, %s%s", code, out, errOut)
 	}
 }
+
+// -measured on files that measure, reset or branch before the end is refused at the line of the
+// op at fault, saying that -measured takes final measurements only and that without it the files
+// are compared as programs — not with advice to compare measured distributions, nor with "want
+// measures nothing" when want's only measurement is followed by a gate.
+func TestEquivMeasuredRefusesPrograms(t *testing.T) {
+	cases := []struct {
+		pair, at, why string
+	}{
+		{"mid005_deferred", "mid005_deferred.before.qasm:7: measure q0 -> c5", "followed by reset q0"},
+		{"probe002_gateafter", "probe002_gateafter.before.qasm:6: measure q0 -> c0", "followed by x q0 on the same qubit, so it is not final"},
+		{"probe002_measuretwice", "probe002_measuretwice.before.qasm:6: measure q0 -> c0", "followed by measure q0 -> c1"},
+	}
+	for _, c := range cases {
+		a := filepath.Join(realisticDir, c.pair+".before.qasm")
+		b := filepath.Join(realisticDir, c.pair+".after.qasm")
+		code, out, errOut := runCmd("equiv", "-measured", a, b)
+		if code != exitBadUsed {
+			t.Errorf("%s: exit %d, want %d\n%s%s", c.pair, code, exitBadUsed, out, errOut)
+		}
+		for _, s := range []string{c.at, c.why, "-measured takes circuits whose measurements are all final", "Without -measured", "compared as programs"} {
+			if !strings.Contains(errOut, s) {
+				t.Errorf("%s: %q does not say %q", c.pair, errOut, s)
+			}
+		}
+		if strings.Contains(errOut, "measures nothing") || strings.Contains(errOut, "compare measured distributions") {
+			t.Errorf("%s: circular advice: %q", c.pair, errOut)
+		}
+	}
+}
