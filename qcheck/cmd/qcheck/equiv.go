@@ -140,15 +140,27 @@ func intList(s string) ([]int, error) {
 
 // compareFiles parses both files and compares them; errors name the file and line at fault.
 func (f *compareFlags) compareFiles(a, b string) (qcheck.Result, error) {
+	pa, pb, err := f.loadPair(a, b)
+	if err != nil {
+		return qcheck.Result{}, err
+	}
+	return f.comparePrograms(a, b, pa, pb)
+}
+
+// loadPair parses both files.
+func (f *compareFlags) loadPair(a, b string) (pa, pb *qasm.Program, err error) {
+	if pa, err = f.limits.load(a); err != nil {
+		return nil, nil, err
+	}
+	if pb, err = f.limits.load(b); err != nil {
+		return nil, nil, err
+	}
+	return pa, pb, nil
+}
+
+// comparePrograms compares the parsed files a and b; errors name the file and line at fault.
+func (f *compareFlags) comparePrograms(a, b string, pa, pb *qasm.Program) (qcheck.Result, error) {
 	opts, err := f.options()
-	if err != nil {
-		return qcheck.Result{}, err
-	}
-	pa, err := f.limits.load(a)
-	if err != nil {
-		return qcheck.Result{}, err
-	}
-	pb, err := f.limits.load(b)
 	if err != nil {
 		return qcheck.Result{}, err
 	}
@@ -217,7 +229,10 @@ at the end, compared exactly by total variation through the bits (so a routed pr
 both are Clifford (exact, any width), else the program engine (statevector branches, up to 24
 qubits). Human output: a line naming A (want) and B (got), then the verdict with the
 measure and distance; on a difference, a report with the input state that exposes it and a
-measurement whose probabilities differ.
+measurement whose probabilities differ. The report numbers classical bits c0, c1, … as the
+files lay them out; when both files declare the same classical registers, other than one
+register c, it ends with those numbers in the registers' names (c5 is m[0]) and the outcome
+that tells programs apart in them (m[0]=1 c[4]=0 …).
 
 Cost: -engine auto (the default) uses the dense engine up to 12 qubits: exact, but it builds both
 2^n × 2^n unitaries, and at 11-12 qubits circuits that differ take seconds to minutes (the
@@ -296,7 +311,11 @@ func equiv(args []string, stdout, stderr io.Writer) int {
 	if !ok {
 		return code
 	}
-	r, err := f.compareFiles(files[0], files[1])
+	pa, pb, err := f.loadPair(files[0], files[1])
+	if err != nil {
+		return c.fail("%v", err)
+	}
+	r, err := f.comparePrograms(files[0], files[1], pa, pb)
 	if err != nil {
 		return c.fail("%v", err)
 	}
@@ -319,6 +338,11 @@ func equiv(args []string, stdout, stderr io.Writer) int {
 			fmt.Fprintln(stdout, r.Headline())
 		} else {
 			fmt.Fprint(stdout, r.Report())
+			outcome := ""
+			if r.Meaning == "program" {
+				outcome = r.Outcome
+			}
+			fmt.Fprint(stdout, registerWords(pa, pb, outcome))
 		}
 	}
 	if !r.Equivalent {

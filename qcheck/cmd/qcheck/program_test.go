@@ -156,3 +156,35 @@ func TestEquivMeasuredRefusesPrograms(t *testing.T) {
 		}
 	}
 }
+
+// Files whose classical registers are not one register c get a legend of the report's bits in
+// the files' register names, and the outcome that tells programs apart in those names. By hand
+// for mid005_dropreset: with the reset, m[0]=1 (probability ½) leaves q0 at 0 and q1 at 1, and
+// c[2]=c[3] is 0 with probability ½, so m[0]=1 c[1]=1 and the rest 0 has probability ¼; without
+// the reset, m[0]=1 makes c[0]=c[4]=1, so that outcome cannot occur.
+func TestEquivRegisterNames(t *testing.T) {
+	a := filepath.Join(realisticDir, "mid005_dropreset.before.qasm")
+	b := filepath.Join(realisticDir, "mid005_dropreset.after.qasm")
+	code, out, errOut := runCmd("equiv", a, b)
+	if code != exitDiffer {
+		t.Fatalf("exit %d, want %d\n%s%s", code, exitDiffer, out, errOut)
+	}
+	for _, s := range []string{
+		"c0…c4 are c[0]…c[4]; c5 is m[0]",
+		"outcome 100010: m[0]=1 c[4]=0 c[3]=0 c[2]=0 c[1]=1 c[0]=0",
+		"100010 with probability 0.25 after want, 0 after got",
+	} {
+		if !strings.Contains(out, s) {
+			t.Errorf("report does not say %q:\n%s", s, out)
+		}
+	}
+	// One register c: the report's c0, c1, … already name c[0], c[1], …; no legend.
+	dir := writeFiles(t, map[string]string{
+		"a.qasm": "qreg q[1];\ncreg c[1];\nh q[0];\nmeasure q[0] -> c[0];\n",
+		"b.qasm": "qreg q[1];\ncreg c[1];\nmeasure q[0] -> c[0];\n",
+	})
+	code, out, errOut = runCmd("equiv", filepath.Join(dir, "a.qasm"), filepath.Join(dir, "b.qasm"))
+	if code != exitDiffer || !strings.Contains(out, "outcome that tells them apart") || strings.Contains(out, "registers") {
+		t.Errorf("one register c: exit %d, want %d and no legend:\n%s%s", code, exitDiffer, out, errOut)
+	}
+}
