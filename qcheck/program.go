@@ -82,6 +82,10 @@ func outcomeVerdict(cfg *config, r *Result, g sim.OutcomeGap, rounding float64) 
 	case g.Distance-rounding <= cfg.tol:
 		r.Undecided = fmt.Sprintf("the distance %.4g is within the rounding %.2g of the tolerance", g.Distance, rounding)
 	}
-	r.Outcome, r.OutcomeWant, r.OutcomeGot = g.Outcome, g.Want, g.Got
+	if !r.Equivalent {
+		// Rounding can carry a sum of branch probabilities a hair past 1; a probability is
+		// reported within [0, 1].
+		r.Outcome, r.OutcomeWant, r.OutcomeGot = g.Outcome, min(max(g.Want, 0), 1), min(max(g.Got, 0), 1)
+	}
 	return nil
 }

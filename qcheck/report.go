@@ -365,7 +365,10 @@ func (r Result) writeEvidence(b *strings.Builder) {
 		}
 		fmt.Fprintf(b, "  so the distance up to global phase is at least %.4g (half of ‖%s − %s‖)\n", r.Distance, p.Want, p.Got)
 	}
-	if r.Witness != nil {
+	// A witness that shows no gap witnesses nothing (the circuits' unitaries agree and the
+	// difference lies in how their bits are read, say); it is left out.
+	witness := r.Witness != nil && r.WitnessGap > 0
+	if witness {
 		fmt.Fprintf(b, "\nwitness input ψ (kets are %s: qubit 0 is the rightmost bit):\n", ketOrder(n))
 		b.WriteString(wrapList("  ψ = ", strings.Fields(Ket(r.Witness, n)), " "))
 		if r.ExactPhase {
@@ -376,15 +379,15 @@ func (r Result) writeEvidence(b *strings.Builder) {
 		}
 	}
 	m := r.Measurement
-	if r.Witness != nil || m.Input != nil {
+	if witness || m.Input != nil {
 		b.WriteString("\nmeasurement that tells them apart:\n")
 	}
 	switch {
-	case m.Input == nil && r.Witness != nil && r.ExactPhase:
+	case m.Input == nil && witness && r.ExactPhase:
 		b.WriteString("  none found: no outcome probability differs visibly; the circuits differ by a global phase\n")
 		b.WriteString("  or by too little to move a probability, and a global phase shows when the circuit is\n")
 		b.WriteString("  controlled, which is what ExactPhase guards\n")
-	case m.Input == nil && r.Witness != nil:
+	case m.Input == nil && witness:
 		// Without ExactPhase the distance above is phase-free: the circuits differ by more than a
 		// global phase, however little the probabilities move.
 		b.WriteString("  none found: no outcome probability differs visibly, though the circuits differ by more\n")
@@ -393,7 +396,7 @@ func (r Result) writeEvidence(b *strings.Builder) {
 		input := Ket(m.Input, n)
 		if m.InputBasis >= 0 {
 			input = basisKet(m.InputBasis, n)
-		} else if r.Witness != nil && slices.Equal(m.Input, r.Witness) {
+		} else if witness && slices.Equal(m.Input, r.Witness) {
 			input = "ψ, the witness above"
 		}
 		b.WriteString(wrapList("  prepare ", strings.Fields(input+" and run the circuit;"), " "))
@@ -412,7 +415,10 @@ func (r Result) writeEvidence(b *strings.Builder) {
 				basisKet(m.Outcome, n), prob(m.Want), prob(m.Got))
 		}
 	}
-	if (r.Witness != nil || m.Input != nil) && 2*r.OperatorDistance < 1 {
+	// The bound holds when both circuits are read the same way; with classical bits each is
+	// read through its own measurements, and a different reading moves probabilities however
+	// close the unitaries are.
+	if (witness || m.Input != nil) && r.Bits == nil && 2*r.OperatorDistance < 1 {
 		fmt.Fprintf(b, "  no outcome probability can differ by more than 2 × %.4g = %.4g, twice the operator-norm\n",
 			r.OperatorDistance, 2*r.OperatorDistance)
 		b.WriteString("  distance (Nielsen & Chuang §4.5.3)\n")

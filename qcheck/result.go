@@ -164,15 +164,20 @@ type resultJSON struct {
 	Overlap          *[2]float64    `json:"overlap,omitempty"`
 }
 
+// maxJSONWitness is the most amplitudes of a witness the JSON form carries: a 12-qubit state,
+// about 200 KB of text.
+const maxJSONWitness = 1 << 12
+
 // MarshalJSON writes the result as one JSON object; see the Result type for its keys' meaning.
+// The witness is written when it shows a gap and has at most 4,096 amplitudes ([] otherwise).
 // The measurement is left out when there is none (Measurement.Input nil), and the blame when
 // the circuits have the same ops.
 func (r Result) MarshalJSON() ([]byte, error) {
 	v := resultJSON{
 		Equivalent: r.Equivalent, Undecided: r.Undecided, Distance: r.Distance, Measure: r.Measure,
 		Tolerance: r.Tolerance, ExactPhase: r.ExactPhase, Phase: r.Phase,
-		OperatorDistance: r.OperatorDistance, Witness: make([][2]float64, len(r.Witness)),
-		WitnessGap: r.WitnessGap, Engine: r.Engine, Certifies: r.Certifies, Pauli: r.Pauli,
+		OperatorDistance: r.OperatorDistance,
+		WitnessGap:       r.WitnessGap, Engine: r.Engine, Certifies: r.Certifies, Pauli: r.Pauli,
 		Qubits: r.Qubits, Measured: r.Measured, Bits: r.Bits, Meaning: r.Meaning,
 	}
 	if r.Outcome != "" {
@@ -181,8 +186,15 @@ func (r Result) MarshalJSON() ([]byte, error) {
 	if r.Measure == ZeroState {
 		v.Overlap = &[2]float64{real(r.Overlap), imag(r.Overlap)}
 	}
-	for i, a := range r.Witness {
-		v.Witness[i] = [2]float64{real(a), imag(a)}
+	// The witness is written only when it witnesses something, and only up to maxJSONWitness
+	// amplitudes, so that a wide comparison never writes megabytes of state.
+	if r.WitnessGap > 0 && !r.Equivalent && len(r.Witness) <= maxJSONWitness {
+		v.Witness = make([][2]float64, len(r.Witness))
+		for i, a := range r.Witness {
+			v.Witness[i] = [2]float64{real(a), imag(a)}
+		}
+	} else {
+		v.Witness = [][2]float64{}
 	}
 	if r.Measurement.Input != nil {
 		v.Measurement = &r.Measurement
