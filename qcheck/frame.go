@@ -151,6 +151,12 @@ func checkPermutation(perm []int, m int) error {
 // outcome is the given qubits of want (all of them when none are given), read on the same
 // logical qubits of got.
 func (f *frame) setMeasured(qubits []int) error {
+	if err := onlyFinalMeasurements(f.want, "want"); err != nil {
+		return err
+	}
+	if err := onlyFinalMeasurements(f.got, "got"); err != nil {
+		return err
+	}
 	wantW, gotW := finalWrites(f.want), finalWrites(f.got)
 	if len(wantW) == 0 && len(gotW) == 0 {
 		return f.setMeasuredQubits(qubits)
@@ -238,6 +244,48 @@ func (f *frame) setMeasuredQubits(qubits []int) error {
 		f.measured = append(f.measured, q)
 	}
 	f.measuredWant = f.measured
+	return nil
+}
+
+// An OpError is a refusal caused by one op of want or got. It gives the op's position so that a
+// caller holding the source of the circuit, such as a parsed OpenQASM file, can point at it.
+type OpError struct {
+	Circuit string // "want" or "got"
+	Index   int    // the op's position in the Ops of the circuit given to Compare
+	Op      string // the op, as circuit.Op.String writes it
+	Err     string // what is wrong, and what to do instead
+}
+
+func (e *OpError) Error() string {
+	return fmt.Sprintf("qcheck: %s's op %d (%s): %s", e.Circuit, e.Index, e.Op, e.Err)
+}
+
+// onlyFinalMeasurements returns an *OpError for the first op of c (named which) that Measured
+// cannot take: a measurement followed by an op on its qubit, a reset, or a classically
+// controlled op. Such a circuit is a program, whose meaning is the default without Measured.
+func onlyFinalMeasurements(c *circuit.Circuit, which string) error {
+	final := finalMeasurements(c)
+	for i, op := range c.Ops {
+		if op.Unitary() || op.Gate.Name == "barrier" || final != nil && final[i] {
+			continue
+		}
+		var why string
+		switch {
+		case op.If != nil:
+			why = "a classically controlled op"
+		case op.Gate.Name == "measure":
+			why = "the measurement is not final"
+			for _, later := range c.Ops[i+1:] {
+				if later.Gate.Name != "barrier" && slices.Contains(later.Qubits, op.Qubits[0]) {
+					why = fmt.Sprintf("the measurement is followed by %s on the same qubit, so it is not final", later)
+					break
+				}
+			}
+		default:
+			why = fmt.Sprintf("a %s", op.Gate.Name)
+		}
+		return &OpError{Circuit: which, Index: i, Op: op.String(), Err: why + "; Measured takes circuits whose measurements are all final and that otherwise only apply gates. Without Measured, circuits that measure, reset or branch before the end are compared as programs, their default meaning"}
+	}
 	return nil
 }
 

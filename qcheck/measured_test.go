@@ -1,6 +1,7 @@
 package qcheck
 
 import (
+	"errors"
 	"math"
 	"strings"
 	"testing"
@@ -68,13 +69,43 @@ func TestMeasuredRefusesWhatItCannotRead(t *testing.T) {
 	}{
 		{"one side measures", circuit.New(1).H(0).Measure(0, 0), circuit.New(1).H(0), []Option{Measured()}, "got measures nothing"},
 		{"unmeasured qubit named", circuit.New(2).Measure(0, 0), circuit.New(2).Measure(0, 0), []Option{Measured(1)}, "want does not measure qubit 1"},
-		{"mid-circuit measurement", circuit.New(1).Measure(0, 0).H(0), circuit.New(1).H(0).Measure(0, 0), []Option{Measured()}, "measure"},
+		{"mid-circuit measurement", circuit.New(1).Measure(0, 0).H(0), circuit.New(1).H(0).Measure(0, 0), []Option{Measured()}, "want's op 0 (measure q0 -> c0): the measurement is followed by h q0"},
+		{"gate after the only measurement", circuit.New(1).H(0).Measure(0, 0).X(0), circuit.New(1).H(0).Measure(0, 0), []Option{Measured()}, "want's op 1 (measure q0 -> c0): the measurement is followed by x q0 on the same qubit, so it is not final"},
+		{"reset", circuit.New(2).H(0).Measure(0, 0), circuit.New(2).H(0).Reset(1).Measure(0, 0), []Option{Measured()}, "got's op 1 (reset q1): a reset; Measured takes circuits whose measurements are all final"},
 	}
 	for _, c := range cases {
 		_, err := Compare(c.want, c.got, c.opts...)
 		if err == nil || !strings.Contains(err.Error(), c.msg) {
 			t.Errorf("%s: error %v, want one containing %q", c.name, err, c.msg)
 		}
+	}
+}
+
+// A circuit that measures before the end is refused by Measured with the op at fault, as an
+// *OpError a caller can map to its source, and with the meaning to use instead: never by a
+// complaint about the measured distributions the caller asked for.
+func TestMeasuredRefusesProgramsWithTheirOp(t *testing.T) {
+	want := circuit.New(2).H(0).Measure(0, 1).X(1).Measure(0, 0).Measure(1, 1)
+	want.Ops[2].If = &circuit.Condition{Bits: []int{1}, Value: 1}
+	got := circuit.New(2).H(0).CX(0, 1).Measure(0, 0).Measure(1, 1)
+	_, err := Compare(want, got, Measured())
+	var e *OpError
+	if !errors.As(err, &e) {
+		t.Fatalf("error %v, want an *OpError", err)
+	}
+	if e.Circuit != "want" || e.Index != 1 || e.Op != "measure q0 -> c1" {
+		t.Errorf("OpError %+v, want want's op 1, measure q0 -> c1", e)
+	}
+	for _, s := range []string{"followed by measure q0 -> c0 on the same qubit", "Without Measured", "compared as programs"} {
+		if !strings.Contains(err.Error(), s) {
+			t.Errorf("error %q does not say %q", err, s)
+		}
+	}
+	// Without Measured the same pair is a program pair, and equivalent: both give 00 or 11
+	// with probability ½ (N&C §4.4: a classically controlled X after measuring the control
+	// acts as the CNOT before it).
+	if r := mustCompare(t, want, got); !r.Equivalent || r.Meaning != "program" {
+		t.Errorf("as programs: %s (meaning %q)", r.Headline(), r.Meaning)
 	}
 }
 

@@ -75,11 +75,7 @@ func (o Op) Equal(p Op) bool {
 func (o Op) String() string {
 	s := o.Gate.String()
 	if o.If != nil {
-		cmp := "=="
-		if o.If.Not {
-			cmp = "!="
-		}
-		s = "if" + bitList(" ", "c", o.If.Bits) + cmp + strconv.FormatUint(o.If.Value, 10) + ": " + s
+		s = o.If.text() + ": " + s
 	}
 	if len(o.Qubits) > 0 {
 		s += bitList(" ", "q", o.Qubits)
@@ -88,6 +84,15 @@ func (o Op) String() string {
 		s += bitList(" -> ", "c", o.Bits)
 	}
 	return s
+}
+
+// text writes the condition as "if c0,c1==2" (or "!=" with Not), the bits in their order.
+func (c *Condition) text() string {
+	cmp := "=="
+	if c.Not {
+		cmp = "!="
+	}
+	return "if" + bitList(" ", "c", c.Bits) + cmp + strconv.FormatUint(c.Value, 10)
 }
 
 // bitList writes bits as prefix followed by "q0,q2" (with the given letter).

@@ -2,12 +2,14 @@ package circuit
 
 import (
 	"errors"
+	"fmt"
 	"math"
 	"os"
 	"path/filepath"
 	"strconv"
 	"strings"
 	"testing"
+	"unicode/utf8"
 )
 
 // Validate names the op index and what is wrong for each kind of bad input, and engines rely on
@@ -139,6 +141,56 @@ func TestDrawGolden(t *testing.T) {
 	bad := New(2).H(0).CX(0, 5).String()
 	if !strings.Contains(bad, "op 1 (cx)") || !strings.Contains(bad, "1: cx q0,q5") {
 		t.Errorf("ill-formed circuit drawn as:\n%s", bad)
+	}
+}
+
+// A classically controlled op is drawn with its condition, and ops are ordered through the
+// classical bits as the program runs them (Cross, Bishop, Smolin & Gambetta 2017, §3: statements
+// execute in order, so if(c==1) reads what an earlier measure wrote): a condition after the
+// measurement that writes its bit, a measurement after an earlier condition reading its bit, and
+// two measurements of the same bit in their order — even on qubits the other op does not touch.
+func TestDrawConditions(t *testing.T) {
+	// column returns where label starts on qubit q's row of the drawing, in runes.
+	column := func(t *testing.T, drawing string, q int, label string) int {
+		t.Helper()
+		for _, row := range strings.Split(drawing, "\n") {
+			if strings.HasPrefix(row, fmt.Sprintf("q%d:", q)) {
+				if i := strings.Index(row, label); i >= 0 {
+					return utf8.RuneCountInString(row[:i])
+				}
+			}
+		}
+		t.Fatalf("no %q on qubit %d's row of\n%s", label, q, drawing)
+		return 0
+	}
+	conditioned := func(c *Circuit, cond *Condition) *Circuit {
+		c.Ops[len(c.Ops)-1].If = cond
+		return c
+	}
+
+	// Read after write: X on q1 if c5 is 1, after q0 is measured into c5.
+	c := conditioned(New(2).H(0).Measure(0, 5).X(1), &Condition{Bits: []int{5}, Value: 1})
+	d := c.String()
+	if m, x := column(t, d, 0, "M→c5"), column(t, d, 1, "X if c5==1"); x <= m {
+		t.Errorf("the conditioned X (rune %d) is not drawn after the measurement it reads (rune %d):\n%s", x, m, d)
+	}
+	// An else branch and a condition on several bits read as Op.String writes them.
+	c = conditioned(New(2).Measure(0, 0).Measure(1, 1).CX(0, 1), &Condition{Bits: []int{0, 1}, Value: 2, Not: true})
+	d = c.String()
+	if m, x := column(t, d, 1, "M→c1"), column(t, d, 1, "X if c0,c1!=2"); x <= m {
+		t.Errorf("the conditioned CX is not drawn after the measurements:\n%s", d)
+	}
+	// Write after read: measuring q2 into c0 comes after the condition that reads the c0 that
+	// measuring q0 wrote, though q2 is free from the start.
+	c = conditioned(New(3).Measure(0, 0).X(1), &Condition{Bits: []int{0}, Value: 1}).Measure(2, 0)
+	d = c.String()
+	if x, m := column(t, d, 1, "X if c0==1"), column(t, d, 2, "M→c0"); m <= x {
+		t.Errorf("measure q2 -> c0 (rune %d) is drawn before the condition reading c0 (rune %d):\n%s", m, x, d)
+	}
+	// Write after write: two measurements into c0 keep their order across qubits.
+	d = New(2).H(0).Measure(0, 0).Measure(1, 0).String()
+	if first, second := column(t, d, 0, "M→c0"), column(t, d, 1, "M→c0"); second <= first {
+		t.Errorf("measure q1 -> c0 (rune %d) is drawn before measure q0 -> c0 (rune %d):\n%s", second, first, d)
 	}
 }
 

@@ -12,7 +12,10 @@ const DrawWidth = 100
 
 // String draws the circuit as text, one row per qubit (qubit 0 on top) and time running left to
 // right, wrapped at DrawWidth columns. Controls are ●, swap ends ×, and a vertical bar joins the
-// operands of a multi-qubit gate. An ill-formed circuit is listed op by op instead, and a nil
+// operands of a multi-qubit gate. A classically controlled op carries its condition on its last
+// operand ("X if c5==1"). Ops are ordered through the classical bits as well as the qubits: a
+// condition is drawn after every earlier measurement writing a bit it reads, and a measurement
+// after every earlier op reading or writing its bit. An ill-formed circuit is listed op by op instead, and a nil
 // circuit is written as "(nil circuit)" so that a failure report can always print it.
 func (c *Circuit) String() string {
 	if c == nil {
@@ -37,17 +40,40 @@ func (c *Circuit) String() string {
 	for i := range busy {
 		busy[i] = -1
 	}
+	// The last column that writes, and that reads or writes, each classical bit.
+	written, used := map[int]int{}, map[int]int{}
 	for _, op := range c.Ops {
 		lo, hi := span(op.Qubits)
 		col := 0
 		for q := lo; q <= hi; q++ {
 			col = max(col, busy[q]+1)
 		}
+		for _, b := range op.Bits {
+			if k, ok := used[b]; ok {
+				col = max(col, k+1)
+			}
+		}
+		if op.If != nil {
+			for _, b := range op.If.Bits {
+				if k, ok := written[b]; ok {
+					col = max(col, k+1)
+				}
+			}
+			for _, b := range op.If.Bits {
+				used[b] = max(used[b], col)
+			}
+		}
+		for _, b := range op.Bits {
+			written[b], used[b] = col, col
+		}
 		for col >= len(columns) {
 			columns = append(columns, make([]string, rows))
 			widths = append(widths, 1)
 		}
 		labels := opLabels(op)
+		if op.If != nil {
+			labels[len(labels)-1] += " " + op.If.text()
+		}
 		for k, q := range op.Qubits {
 			columns[col][2*q] = labels[k]
 			widths[col] = max(widths[col], utf8.RuneCountInString(labels[k]))

@@ -2,6 +2,7 @@ package main
 
 import (
 	"encoding/json"
+	"errors"
 	"flag"
 	"fmt"
 	"io"
@@ -167,7 +168,18 @@ func (f *compareFlags) comparePrograms(a, b string, pa, pb *qasm.Program) (qchec
 		}
 	}
 	r, err := f.compareWithin(pa, pb, opts)
-	if err != nil {
+	var opErr *qcheck.OpError
+	switch {
+	case errors.As(err, &opErr):
+		path, prog := a, pa
+		if opErr.Circuit == "got" {
+			path, prog = b, pb
+		}
+		if opErr.Index < len(prog.Lines) {
+			return qcheck.Result{}, fmt.Errorf("%s:%d: %s: %s", path, prog.Lines[opErr.Index], opErr.Op, flagWords.Replace(opErr.Err))
+		}
+		fallthrough
+	case err != nil:
 		return qcheck.Result{}, fmt.Errorf("%s vs %s: %s", a, b, flagWords.Replace(err.Error()))
 	}
 	return r, nil
@@ -223,7 +235,10 @@ at the end, compared exactly by total variation through the bits (so a routed pr
 both are Clifford (exact, any width), else the program engine (statevector branches, up to 24
 qubits). Human output: a line naming A (want) and B (got), then the verdict with the
 measure and distance; on a difference, a report with the input state that exposes it and a
-measurement whose probabilities differ.
+measurement whose probabilities differ. The report numbers classical bits c0, c1, … as the
+files lay them out; when both files declare the same classical registers, other than one
+register c, it ends with those numbers in the registers' names (c5 is m[0]) and the outcome
+that tells programs apart in them (m[0]=1 c[4]=0 …).
 
 Cost: -engine auto (the default) uses the dense engine up to 12 qubits: exact, but it builds both
 2^n × 2^n unitaries, and at 11-12 qubits circuits that differ take seconds to minutes (the
@@ -340,6 +355,11 @@ func equiv(args []string, stdout, stderr io.Writer) int {
 			fmt.Fprintln(stdout, r.Headline())
 		} else {
 			fmt.Fprint(stdout, r.Report())
+			outcome := ""
+			if r.Meaning == "program" {
+				outcome = r.Outcome
+			}
+			fmt.Fprint(stdout, registerWords(pa, pb, outcome))
 		}
 	}
 	if !r.Equivalent {

@@ -126,3 +126,65 @@ func TestEquivPaperPrograms(t *testing.T) {
 		t.Errorf("teleport.qasm against its deferred form: exit %d, %s%s", code, out, errOut)
 	}
 }
+
+// -measured on files that measure, reset or branch before the end is refused at the line of the
+// op at fault, saying that -measured takes final measurements only and that without it the files
+// are compared as programs — not with advice to compare measured distributions, nor with "want
+// measures nothing" when want's only measurement is followed by a gate.
+func TestEquivMeasuredRefusesPrograms(t *testing.T) {
+	cases := []struct {
+		pair, at, why string
+	}{
+		{"mid005_deferred", "mid005_deferred.before.qasm:7: measure q0 -> c5", "followed by reset q0"},
+		{"probe002_gateafter", "probe002_gateafter.before.qasm:6: measure q0 -> c0", "followed by x q0 on the same qubit, so it is not final"},
+		{"probe002_measuretwice", "probe002_measuretwice.before.qasm:6: measure q0 -> c0", "followed by measure q0 -> c1"},
+	}
+	for _, c := range cases {
+		a := filepath.Join(realisticDir, c.pair+".before.qasm")
+		b := filepath.Join(realisticDir, c.pair+".after.qasm")
+		code, out, errOut := runCmd("equiv", "-measured", a, b)
+		if code != exitBadUsed {
+			t.Errorf("%s: exit %d, want %d\n%s%s", c.pair, code, exitBadUsed, out, errOut)
+		}
+		for _, s := range []string{c.at, c.why, "-measured takes circuits whose measurements are all final", "Without -measured", "compared as programs"} {
+			if !strings.Contains(errOut, s) {
+				t.Errorf("%s: %q does not say %q", c.pair, errOut, s)
+			}
+		}
+		if strings.Contains(errOut, "measures nothing") || strings.Contains(errOut, "compare measured distributions") {
+			t.Errorf("%s: circular advice: %q", c.pair, errOut)
+		}
+	}
+}
+
+// Files whose classical registers are not one register c get a legend of the report's bits in
+// the files' register names, and the outcome that tells programs apart in those names. By hand
+// for mid005_dropreset: with the reset, m[0]=1 (probability ½) leaves q0 at 0 and q1 at 1, and
+// c[2]=c[3] is 0 with probability ½, so m[0]=1 c[1]=1 and the rest 0 has probability ¼; without
+// the reset, m[0]=1 makes c[0]=c[4]=1, so that outcome cannot occur.
+func TestEquivRegisterNames(t *testing.T) {
+	a := filepath.Join(realisticDir, "mid005_dropreset.before.qasm")
+	b := filepath.Join(realisticDir, "mid005_dropreset.after.qasm")
+	code, out, errOut := runCmd("equiv", a, b)
+	if code != exitDiffer {
+		t.Fatalf("exit %d, want %d\n%s%s", code, exitDiffer, out, errOut)
+	}
+	for _, s := range []string{
+		"c0…c4 are c[0]…c[4]; c5 is m[0]",
+		"outcome 100010: m[0]=1 c[4]=0 c[3]=0 c[2]=0 c[1]=1 c[0]=0",
+		"100010 with probability 0.25 after want, 0 after got",
+	} {
+		if !strings.Contains(out, s) {
+			t.Errorf("report does not say %q:\n%s", s, out)
+		}
+	}
+	// One register c: the report's c0, c1, … already name c[0], c[1], …; no legend.
+	dir := writeFiles(t, map[string]string{
+		"a.qasm": "qreg q[1];\ncreg c[1];\nh q[0];\nmeasure q[0] -> c[0];\n",
+		"b.qasm": "qreg q[1];\ncreg c[1];\nmeasure q[0] -> c[0];\n",
+	})
+	code, out, errOut = runCmd("equiv", filepath.Join(dir, "a.qasm"), filepath.Join(dir, "b.qasm"))
+	if code != exitDiffer || !strings.Contains(out, "outcome that tells them apart") || strings.Contains(out, "registers") {
+		t.Errorf("one register c: exit %d, want %d and no legend:\n%s%s", code, exitDiffer, out, errOut)
+	}
+}
