@@ -72,6 +72,8 @@ func TestMeasuresClosedForm(t *testing.T) {
 
 func TestBadInput(t *testing.T) {
 	c2, c3 := circuit.New(2).H(0), circuit.New(3).H(0)
+	// A wide non-Clifford circuit with a gate of the user's own: no engine takes it by itself.
+	wideCustom := circuit.New(25).Append(phaseFlipOnAllOnes(t, 1), 0).T(1)
 	cases := []struct {
 		name      string
 		want, got *circuit.Circuit
@@ -99,8 +101,9 @@ func TestBadInput(t *testing.T) {
 		{"exact phase with diamond", c2, c2, []Option{ExactPhase(), UseMeasure(Diamond)}, "ExactPhase with the diamond norm"},
 		{"measure ops with UseEngine(Dense)", circuit.New(1).H(0).Measure(0, 0), circuit.New(1).H(0).Measure(0, 0), []Option{UseEngine(Dense)}, "the dense engine compares unitaries on every input, not program meanings"},
 		{"unknown measure", c2, c2, []Option{UseMeasure(Measure(42))}, "UseMeasure(Measure(42))"},
-		{"too wide for auto", circuit.New(25).T(0), circuit.New(25).T(0), nil, "25 qubits is wider than the dense engine takes automatically (12); tableau: want is not a circuit the tableau engine can answer for"},
-		{"too wide for auto, matrix-free", circuit.New(25).T(0), circuit.New(25).T(0), nil, "matrix-free: 25 qubits is wider than the matrix-free engine takes automatically (22)"},
+		{"too wide for auto", wideCustom, wideCustom, nil, "25 qubits is wider than the dense engine takes automatically (12); tableau: want is not a circuit the tableau engine can answer for"},
+		{"too wide for auto, matrix-free", wideCustom, wideCustom, nil, "matrix-free: 25 qubits is wider than the matrix-free engine takes automatically (22)"},
+		{"too wide for auto, zx", wideCustom, wideCustom, nil, "zx: the zx engine has no ZX-diagram for op 0"},
 		{"measured at width", circuit.New(13).T(0), circuit.New(13).T(0), []Option{Measured(0)}, "13 qubits is wider than the dense engine"},
 	}
 	for _, tc := range cases {

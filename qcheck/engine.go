@@ -26,6 +26,9 @@ const (
 	// without forming either matrix: chosen for 13 to 22 qubits. Its witness certifies a
 	// lower bound; its upper bound holds with a stated probability.
 	MatrixFree Engine = "matrix-free"
+	// ZX rewrites the ZX-diagram of V†U: equivalence proved within a stated bound, or the exact
+	// distance of what is left, at any width; chosen above 22 qubits.
+	ZX Engine = "zx"
 )
 
 // MarshalText writes the engine's name.
@@ -81,7 +84,7 @@ type engine interface {
 
 // engines is every engine, in Auto's order of preference: the cheapest that answers exactly
 // first.
-var engines = []engine{denseEngine{}, tableauEngine{}, matrixFreeEngine{}, stabilizerProgramEngine{}, programEngine{}, zeroEngine{}}
+var engines = []engine{denseEngine{}, tableauEngine{}, matrixFreeEngine{}, stabilizerProgramEngine{}, programEngine{}, zeroEngine{}, zxEngine{}}
 
 // lookupEngine returns the engine of that name; Auto has none and returns nil.
 func lookupEngine(name Engine) (engine, error) {

@@ -61,6 +61,7 @@ func (matrixFreeEngine) compare(cfg *config, f *frame, r *Result, full bool) err
 	switch {
 	case res.Lower > cfg.tol:
 		r.Equivalent = false
+		r.LowerBound = true // the Krylov estimate never exceeds the distance
 		r.Certifies = fmt.Sprintf("certain: the witness shows %.4g > tolerance (a certified lower bound)", res.Lower)
 	case res.Upper <= cfg.tol:
 		r.Equivalent = true

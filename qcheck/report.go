@@ -31,6 +31,9 @@ func (r *Result) verdict() string {
 	if r.Equivalent {
 		rel = "≤"
 	}
+	if r.LowerBound {
+		return fmt.Sprintf("%s at least %.4g %s tolerance %g", r.Measure, r.Distance, rel, r.Tolerance)
+	}
 	return fmt.Sprintf("%s %.4g %s tolerance %g", r.Measure, r.Distance, rel, r.Tolerance)
 }
 

@@ -28,6 +28,11 @@ type Result struct {
 	// gives both bounds); from the tableau engine it is, when Equivalent, the bound on how far
 	// angles rounded to Clifford ones move the circuits (0 when none was rounded).
 	Distance float64
+	// LowerBound reports that Distance is a certified lower bound, not the distance itself: the
+	// engine showed the circuits differ by at least Distance without computing how far apart
+	// they are (the tableau for Clifford circuits too entangled to split into small factors, the
+	// matrix-free engine's estimate).
+	LowerBound bool
 	// Measure is the measure of Distance and Tolerance.
 	Measure Measure
 	// Tolerance is the ε the verdict used.
@@ -144,6 +149,7 @@ type resultJSON struct {
 	Equivalent       bool           `json:"equivalent"`
 	Undecided        string         `json:"undecided,omitempty"`
 	Distance         float64        `json:"distance"`
+	LowerBound       bool           `json:"lower_bound,omitempty"`
 	Measure          Measure        `json:"measure"`
 	Tolerance        float64        `json:"tolerance"`
 	ExactPhase       bool           `json:"exact_phase"`
@@ -174,7 +180,7 @@ const maxJSONWitness = 1 << 12
 // the circuits have the same ops.
 func (r Result) MarshalJSON() ([]byte, error) {
 	v := resultJSON{
-		Equivalent: r.Equivalent, Undecided: r.Undecided, Distance: r.Distance, Measure: r.Measure,
+		Equivalent: r.Equivalent, Undecided: r.Undecided, Distance: r.Distance, LowerBound: r.LowerBound, Measure: r.Measure,
 		Tolerance: r.Tolerance, ExactPhase: r.ExactPhase, Phase: r.Phase,
 		OperatorDistance: r.OperatorDistance,
 		WitnessGap:       r.WitnessGap, Engine: r.Engine, Certifies: r.Certifies, Pauli: r.Pauli,

@@ -113,6 +113,20 @@ func compareTableau(cfg *config, f *frame, r *Result) error {
 		return fmt.Errorf("qcheck: the tableau engine shows the circuits differ, with a distance of at least %.4g, which does not settle a tolerance of %g; use a tolerance below 1/√2 or the dense engine", bound, cfg.tol)
 	}
 	r.Distance, r.OperatorDistance, r.WitnessGap = bound, bound, bound
+	r.LowerBound = true
+	// Where V†U splits into small tensor factors, their matrices give the distance itself.
+	if cd, err := sim.CliffordDistance(f.want, got); err == nil && cd.Known && cd.Exact-rounding > cfg.tol {
+		r.Distance, r.OperatorDistance = cd.Exact, cd.Exact
+		r.LowerBound = rounding > 0
+		if rounding > 0 {
+			// The rounded circuits are cd.Exact apart, the circuits themselves within rounding of
+			// that; the lower end is what is certain.
+			r.Distance, r.OperatorDistance = cd.Exact-rounding, cd.Exact-rounding
+		}
+		r.Certifies = fmt.Sprintf("exact: how both circuits conjugate every Pauli generator; V†U splits into tensor factors of at most %d qubits, whose matrices give the distance", cd.Largest)
+	} else {
+		r.Certifies = "exact: how both circuits conjugate every Pauli generator; the distance reported is the lower bound a differing Pauli image certifies (V†U does not split into factors small enough to give the distance itself)"
+	}
 	r.Pauli = &PauliEvidence{
 		Generator:   res.Generator.String(),
 		Want:        res.Want.String(),

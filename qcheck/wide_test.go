@@ -244,9 +244,12 @@ func TestWideEnginesRefuseWhatTheyCannotAnswer(t *testing.T) {
 	if _, err := Compare(c, c, UseEngine(MatrixFree), ExactPhase()); err == nil {
 		t.Error("the matrix-free engine accepted ExactPhase")
 	}
-	wide := circuit.New(30).T(0)
+	wide := circuit.New(30).Append(phaseFlipOnAllOnes(t, 1), 0).T(1)
 	if _, err := Compare(wide, wide); err == nil {
-		t.Error("a 30-qubit non-Clifford comparison did not say it is too wide")
+		t.Error("a 30-qubit non-Clifford comparison with a custom gate did not say that no engine takes it")
+	}
+	if r, err := Compare(circuit.New(30).T(0), circuit.New(30).T(0)); err != nil || r.Engine != ZX || !r.Equivalent {
+		t.Errorf("a 30-qubit non-Clifford pair: %v, %+v; want the zx engine's proof", err, r.Engine)
 	}
 }
 
@@ -388,19 +391,28 @@ func TestLargeCliffordAnglesAreNotRoundedAway(t *testing.T) {
 	}
 }
 
-// Issue 17, reproducer 13: a Clifford pair too wide for the other engines, refused because its
-// angles' offsets exceed the tolerance, is refused for that reason, with the bound.
+// Issue 17, reproducer 13: a Clifford pair too wide for the dense engine, whose angles' offsets
+// exceed the tolerance, is refused by the tableau for that reason, with the bound; Auto gives it
+// to the ZX engine, which finds the distance rz(4000δ) has from the identity (as above).
 func TestWideRefusalSaysTheRoundingBound(t *testing.T) {
 	got := circuit.New(30)
 	for range 4000 {
 		got.RZ(math.Pi/2+9e-13, 0)
 	}
-	_, err := Compare(circuit.New(30), got)
+	_, err := Compare(circuit.New(30), got, UseEngine(Tableau))
 	if err == nil {
-		t.Fatal("Compare answered")
+		t.Fatal("the tableau answered")
 	}
 	// 4000 offsets of 9e-13 (to float64 rounding of π/2 + 9e-13): a bound of 3.6e-9.
 	if msg := err.Error(); !strings.Contains(msg, "off exact Clifford angles by up to 3.6e-09") || !strings.Contains(msg, "tolerance 1e-09") {
 		t.Errorf("the refusal does not give the reason and the bound: %v", err)
+	}
+	r, err := Compare(circuit.New(30), got)
+	if err != nil {
+		t.Fatal(err)
+	}
+	_, off := circuit.QuarterTurns(math.Pi/2 + 9e-13)
+	if want := 2 * math.Sin(4000*off/4); r.Engine != ZX || r.Equivalent || math.Abs(r.Distance-want) > 1e-12 {
+		t.Errorf("engine %v: equivalent %v, distance %.6g, want %.6g", r.Engine, r.Equivalent, r.Distance, want)
 	}
 }

@@ -92,7 +92,9 @@
 //     reading, even before their first measurement; values that depend on them cannot be
 //     stored in variables, and bits cannot be set other than by measurement (they start at 0);
 //   - input angle θ; and input float θ; (any numeric type): named parameters whose values the
-//     Inputs option gives until circuits carry free parameters (Program.Inputs lists them);
+//     Inputs option gives (Program.Inputs lists them); with the FreeInputs option, an input
+//     float given no value is a free real parameter instead (Program.Free, Program.Angles),
+//     allowed only in affine angles of rotation and phase gates (see FreeInputs);
 //   - // and /* */ comments.
 //
 // Everything else is refused at its line and column with the construct's name: def, while,
@@ -141,7 +143,7 @@
 // registers (Program.Qregs and Cregs,
 // each with the flat index of its element 0, and the lookups Program.Qubit and Program.Bit) and
 // the source line of every op (Program.Lines), so that a report about op k can point into the
-// file. Options: DropBarriers, Inputs, and MaxOps, which bounds how many ops a source may expand to
+// file. Options: DropBarriers, Inputs, FreeInputs, and MaxOps, which bounds how many ops a source may expand to
 // (DefaultMaxOps; gate definitions can double the count at each level of nesting). Each gate
 // definition's expanded size is counted when it is read, so a call that would pass the limit is
 // refused at its line and column before it is expanded. MaxOps also bounds the operands of all

@@ -13,7 +13,7 @@ import (
 type node struct {
 	op   byte // 'l' literal, 'n' name, 'i' index, 'c' call or cast, 'u' unary, 'b' binary
 	off  int
-	text string // the name, function, operator, or cast's base type
+	text string // the name, function, operator, cast's base type, or a number's digits
 	val  value  // the literal
 	typ  typ    // the cast's type
 	kids []*node
@@ -236,7 +236,7 @@ func (p *parser3) primary3(nest int) (*node, error) {
 		if err != nil {
 			return nil, p.errorf(t.off, "%v", err)
 		}
-		return &node{op: 'l', off: t.off, val: v}, p.advance()
+		return &node{op: 'l', off: t.off, val: v, text: string(t.text)}, p.advance()
 	case t.kind == tString:
 		// A bit string literal "0101": the first character is the most significant bit.
 		s := string(t.text[1 : len(t.text)-1])

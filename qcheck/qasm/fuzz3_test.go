@@ -38,7 +38,9 @@ func FuzzParse3(f *testing.F) {
 	for _, s := range seeds3 {
 		f.Add([]byte(s))
 	}
+	f.Add([]byte("OPENQASM 3;\ninclude \"stdgates.inc\";\ninput float a;\nqubit[2] q;\ncp(2*a - 0.5) q[0], q[1];\nU(a, -a/3, pi) q[1];\n"))
 	f.Fuzz(func(t *testing.T, src []byte) {
+		checkFree(t, src)
 		p, err := ParseProgram(src, MaxOps(1<<16), Inputs(map[string]float64{"θ": 0.5}))
 		if err != nil {
 			e, ok := err.(*Error)
@@ -65,4 +67,30 @@ func FuzzParse3(f *testing.F) {
 			t.Fatalf("round trip changed the circuit\nread: %v\nwrote:\n%s\nread back: %v", p.Circuit.Ops, out, back.Circuit.Ops)
 		}
 	})
+}
+
+// checkFree reads src with FreeInputs: errors are *Error, and the angles recorded for free
+// parameters belong to ops of the circuit, one per angle, whose placeholders are the angles'
+// constants.
+func checkFree(t *testing.T, src []byte) {
+	p, err := ParseProgram(src, MaxOps(1<<16), FreeInputs())
+	if err != nil {
+		if _, ok := err.(*Error); !ok {
+			t.Fatalf("FreeInputs: error %v is a %T, not *Error", err, err)
+		}
+		return
+	}
+	if len(p.Free) == 0 && len(p.Angles) > 0 {
+		t.Fatalf("free %v with angles %v", p.Free, p.Angles)
+	}
+	for i, angles := range p.Angles {
+		if i < 0 || i >= len(p.Circuit.Ops) || len(angles) != len(p.Circuit.Ops[i].Gate.Params) {
+			t.Fatalf("angles %v recorded for op %d of %v", angles, i, p.Circuit.Ops)
+		}
+		for k, a := range angles {
+			if x := p.Circuit.Ops[i].Gate.Params[k]; x != a.Const {
+				t.Fatalf("op %d angle %d: placeholder %v, constant %v", i, k, x, a.Const)
+			}
+		}
+	}
 }

@@ -43,6 +43,7 @@ func ParseProgram(src []byte, opts ...Option) (*Program, error) {
 		return nil, err
 	}
 	prog := &Program{Version: version}
+	var free *parser3 // the 3 reader, when the source has free input parameters
 	if version == 2 {
 		for name, d := range builtins() {
 			if d.keyword {
@@ -59,6 +60,9 @@ func ParseProgram(src []byte, opts ...Option) (*Program, error) {
 			return nil, err
 		}
 		prog.Inputs = p3.inputs
+		if len(p3.free) > 0 {
+			free = p3
+		}
 		if p3.physical {
 			prog.Qregs = []Register{{Name: "$", Size: p.nq}}
 		}
@@ -84,6 +88,9 @@ func ParseProgram(src []byte, opts ...Option) (*Program, error) {
 			}
 		}
 		prog.Lines[i] = line
+	}
+	if free != nil {
+		prog.Free, prog.Angles = free.free, free.angles
 	}
 	return prog, nil
 }

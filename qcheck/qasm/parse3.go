@@ -14,6 +14,8 @@ type parser3 struct {
 	measured []bool // per classical bit: whether a measurement may have written it
 	physical bool   // the source addresses physical qubits $n
 	inputs   []string
+	free     []string        // the free input parameters, in the order of declaration
+	angles   map[int][]Angle // the angles of the ops whose angles read free parameters
 	// condScope is the depth of the scope where the current condition on measured bits began;
 	// names declared outside it cannot be assigned under the condition.
 	condScope int
@@ -28,6 +30,7 @@ const (
 	sBits                  // a classical register (or a single bit)
 	sVar                   // a classical variable
 	sConst                 // a constant, or a loop variable
+	sFree                  // a free input parameter (the FreeInputs option)
 )
 
 type symbol struct {
@@ -434,8 +437,18 @@ func (p *parser3) declareClassical() error {
 	switch {
 	case isInput:
 		x, ok := p.cfg.inputs[string(name.text)]
+		if !ok && p.cfg.freeInputs {
+			if ty.kind != kFloat || ty.width != 0 && ty.width != 64 {
+				return p.errorf(tt.off, "input %s of type %s cannot be a free parameter (only float or float[64] can: an angle is reduced modulo 2π and a narrower float is rounded, so the gate's angle would not be affine in it); declare it float or give its value (qcheck: -input %s=VALUE)", name.text, ty, name.text)
+			}
+			if err := p.declareName(name, &symbol{kind: sFree, typ: ty}); err != nil {
+				return err
+			}
+			p.free = append(p.free, string(name.text))
+			return p.expect(";", "after the declaration")
+		}
 		if !ok {
-			return p.errorf(name.off, "input %s has no value: free parameters are not supported yet; give its value with the Inputs option (qcheck: -input %s=VALUE)", name.text, name.text)
+			return p.errorf(name.off, "input %s has no value: give its value with the Inputs option (qcheck: -input %s=VALUE), or leave it free with the FreeInputs option", name.text, name.text)
 		}
 		if v, err = p.convert(floatValue(x), ty, name.off); err != nil {
 			return err
@@ -478,6 +491,8 @@ func (p *parser3) assignment() error {
 		return p.errorf(name.off, "%s is a qubit register; expected a gate call or statement", name.text)
 	case sConst:
 		return p.errorf(name.off, "%s is a constant and cannot be assigned", name.text)
+	case sFree:
+		return p.errorf(name.off, "%s is a free input parameter and cannot be assigned", name.text)
 	case sBits:
 		target := bitTarget{bits: regBits(s.reg), off: name.off, single: s.single}
 		if p.tok.is("[") {

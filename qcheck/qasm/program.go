@@ -16,6 +16,12 @@ type Program struct {
 	// Inputs are the names of the input parameters of a version 3 source, in the order of
 	// declaration, each given its value by the Inputs option.
 	Inputs []string
+	// Free are the input parameters left free by the FreeInputs option, in the order of
+	// declaration. Angles then gives, for each op of Circuit whose angles read them, all its
+	// angles (in the order of its Params); Circuit holds placeholders there (each angle with
+	// every parameter 0). Both are nil without free parameters.
+	Free   []string
+	Angles map[int][]Angle
 	// Lines gives, for each op of Circuit, the 1-based source line of the statement it came
 	// from, so that a report about op k can point into the file.
 	Lines []int
@@ -54,6 +60,7 @@ type config struct {
 	dropBarriers bool
 	maxOps       int
 	inputs       map[string]float64
+	freeInputs   bool
 }
 
 // DefaultMaxOps bounds the ops one source may expand to (gate definitions can double the count
@@ -94,8 +101,8 @@ func MaxOps(n int) Option {
 }
 
 // Inputs gives values to the input parameters of an OpenQASM 3 source (input angle θ;), by
-// name. Until circuits can carry free parameters, every input a source declares needs a value;
-// ParseProgram records the names in Program.Inputs.
+// name. Without FreeInputs every input a source declares needs a value; ParseProgram records the
+// names of those given one in Program.Inputs.
 func Inputs(values map[string]float64) Option {
 	return func(c *config) {
 		c.inputs = make(map[string]float64, len(values))
@@ -104,3 +111,11 @@ func Inputs(values map[string]float64) Option {
 		}
 	}
 }
+
+// FreeInputs makes each input float (or float[64]) of an OpenQASM 3 source that Inputs gives no
+// value a free real parameter: ParseProgram lists them in Program.Free and the angles that read
+// them in Program.Angles (the qcheck command builds package param's circuits from them). A free
+// parameter may appear only in the angles of the rotation and phase gates, affinely with
+// rational coefficients; any other use is
+// an error at its line and column (see the package documentation).
+func FreeInputs() Option { return func(c *config) { c.freeInputs = true } }

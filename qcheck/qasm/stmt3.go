@@ -102,13 +102,39 @@ func (p *parser3) callStatement() error {
 		return err
 	}
 	var vals []float64
+	var angles []Angle // set when an angle reads a free parameter
 	if p.tok.is("(") {
 		if err := p.next(); err != nil {
 			return err
 		}
 		for !p.tok.is(")") {
 			at := p.tok.off
-			_, v, err := p.expression()
+			e, err := p.parseExpr3()
+			if err != nil {
+				return err
+			}
+			if p.usesFree(e) {
+				if err := p.freeCall(def, name, mods, at); err != nil {
+					return err
+				}
+				a, err := p.affine(e)
+				if err != nil {
+					return err
+				}
+				for len(angles) < len(vals) {
+					angles = append(angles, Angle{Const: vals[len(angles)]})
+				}
+				angles = append(angles, a)
+				vals = append(vals, a.Const)
+				if !p.tok.is(",") {
+					break
+				}
+				if err := p.next(); err != nil {
+					return err
+				}
+				continue
+			}
+			v, err := p.eval(e)
 			if err != nil {
 				return err
 			}
@@ -170,8 +196,21 @@ func (p *parser3) callStatement() error {
 		} else if p.nq > 0 {
 			ctx.anchor = 0
 		}
+		before := len(p.ops)
 		if err := p.apply(def, vals, mods, qubits, ctx, name.off); err != nil {
 			return err
+		}
+		if angles != nil {
+			if len(p.ops) != before+1 || p.ops[before].Gate.Name != def.native {
+				return p.errorf(name.off, "gate %s with a free input parameter did not become one %s gate", name.text, def.native)
+			}
+			for len(angles) < len(vals) {
+				angles = append(angles, Angle{Const: vals[len(angles)]})
+			}
+			if p.angles == nil {
+				p.angles = map[int][]Angle{}
+			}
+			p.angles[before] = angles
 		}
 	}
 	return nil
@@ -570,6 +609,8 @@ func (p *parser3) nameValue(n *node) (value, error) {
 		return value{}, p.errorf(n.off, "%s is a qubit register, not a classical value", n.text)
 	case sBits:
 		return p.bitsValue(regBits(s.reg), n.off)
+	case sFree:
+		return value{}, p.freeError(n, "input "+n.text+" used outside the angles of a gate call")
 	}
 	return s.val, nil
 }

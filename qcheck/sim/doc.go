@@ -12,6 +12,11 @@
 // Compile prepares a circuit once for many statevectors, and Apply(c.Inverse(), state) applies
 // the inverse.
 //
+// DifferenceWindow cancels the ops two circuits share at their ends, commuting ops past ops on
+// other qubits; the distance of the circuits is exactly that of what is left (see Window).
+// CliffordDistance gives the exact distance of two Clifford circuits from the tableau of V†U when
+// it splits into small tensor factors, and a certified lower bound otherwise.
+//
 // # Programs
 //
 // A circuit with measurements, resets and classically controlled ops is a program. Its meaning,

@@ -139,15 +139,20 @@ func intList(s string) ([]int, error) {
 
 // compareFiles parses both files and compares them; errors name the file and line at fault.
 func (f *compareFlags) compareFiles(a, b string) (qcheck.Result, error) {
-	opts, err := f.options()
-	if err != nil {
-		return qcheck.Result{}, err
-	}
 	pa, err := f.limits.load(a)
 	if err != nil {
 		return qcheck.Result{}, err
 	}
 	pb, err := f.limits.load(b)
+	if err != nil {
+		return qcheck.Result{}, err
+	}
+	return f.comparePrograms(a, b, pa, pb)
+}
+
+// comparePrograms compares the programs read from files a and b.
+func (f *compareFlags) comparePrograms(a, b string, pa, pb *qasm.Program) (qcheck.Result, error) {
+	opts, err := f.options()
 	if err != nil {
 		return qcheck.Result{}, err
 	}
@@ -195,7 +200,20 @@ func (f *compareFlags) compareWithin(pa, pb *qasm.Program, opts []qcheck.Option)
 
 const equivAbout = `
 Compares the circuit of B.qasm (got) with that of A.qasm (want, the reference) and exits 0 when
-they are equivalent within the tolerance, 1 when they are not, 2 on bad input or usage. By
+they are equivalent within the tolerance, 1 when they are not, 2 on bad input or usage.
+
+OpenQASM 3 files may declare free parameters, input float a; (no -input value for a): both files
+must then declare the same ones, and the pair is compared for every real value of them (package
+param): exit 0 when proved (the output says what the proof certifies: the grid, the degrees and
+the certified bound on the distance), 1 when refuted (the output gives values of the parameters
+and the distance there; check them with -input NAME=VALUE), 3 when neither (a randomized test
+passed, labelled "not a proof", or the certified bound is above -tol). A parameter may appear
+only in the angles of rx, ry, rz, crx, cry, crz, p, cp, U (and rxx, ryy, rzz), as sums and
+rational multiples; input angle (reduced modulo 2π) cannot be free; other uses are refused at
+their line and column. Only -tol and -exact-phase apply; -json writes the proof's result (keys
+verdict, method, parameters, points, bound, certifies, counterexample, worst).
+
+By
 default the distance is the operator norm of the difference of the two unitaries, minimised over
 a global phase. When either file measures, resets or has an if (and neither -measured nor
 -from-zero says otherwise), the files are compared as programs, as OpenQASM 2.0 defines them:
@@ -238,6 +256,7 @@ With -json, one JSON object (the encoding of qcheck.Result; keys stay, text may 
   tolerance          the tolerance used
   exact_phase        whether global phase counted
   phase              φ in radians with want ≈ e^{iφ}·got (0 with -exact-phase)
+  lower_bound        true when distance is a certified lower bound, not the distance itself
   operator_distance  the operator-norm distance whatever the measure
   witness            an input state that exposes the difference, as [re, im] amplitude pairs
                      indexed Σ b_q·2^q (qubit 0 is the least-significant bit); [] if none,
@@ -285,7 +304,19 @@ func equiv(args []string, stdout, stderr io.Writer) int {
 	if !ok {
 		return code
 	}
-	r, err := f.compareFiles(files[0], files[1])
+	f.limits.free = true
+	pa, err := f.limits.load(files[0])
+	if err != nil {
+		return c.fail("%v", err)
+	}
+	pb, err := f.limits.load(files[1])
+	if err != nil {
+		return c.fail("%v", err)
+	}
+	if len(pa.Free) > 0 || len(pb.Free) > 0 {
+		return f.proveFiles(c, files[0], files[1], pa, pb, *asJSON)
+	}
+	r, err := f.comparePrograms(files[0], files[1], pa, pb)
 	if err != nil {
 		return c.fail("%v", err)
 	}

@@ -32,13 +32,14 @@ type readLimits struct {
 	timeout  time.Duration
 	maxOps   int
 	inputs   inputValues
+	free     bool // inputs without a value are free parameters (qasm.FreeInputs), for equiv
 }
 
 func (l *readLimits) register(fs *flag.FlagSet) {
 	fs.Int64Var(&l.maxBytes, "max-input", defaultMaxInput, "refuse input files larger than `BYTES`")
 	fs.DurationVar(&l.timeout, "read-timeout", defaultReadTimeout, "give up reading an input that is not a regular file (a pipe, a device) after `D`")
 	fs.IntVar(&l.maxOps, "max-ops", qasm.DefaultMaxOps, "refuse files that expand to more than `N` ops (also bounds operands, 4N, and the work of expanding gates and loops, 8N)")
-	fs.Var(&l.inputs, "input", "value of an OpenQASM 3 input parameter, `NAME=VALUE` (repeat for each); needed until circuits carry free parameters")
+	fs.Var(&l.inputs, "input", "value of an OpenQASM 3 input parameter, `NAME=VALUE` (repeat for each); equiv proves for every value the input floats given none")
 }
 
 // inputValues is the -input flag: NAME=VALUE pairs.
@@ -131,7 +132,11 @@ func (l readLimits) load(path string) (*qasm.Program, error) {
 	if err != nil {
 		return nil, err
 	}
-	p, err := qasm.ParseProgram(src, qasm.MaxOps(l.maxOps), qasm.Inputs(l.inputs))
+	opts := []qasm.Option{qasm.MaxOps(l.maxOps), qasm.Inputs(l.inputs)}
+	if l.free {
+		opts = append(opts, qasm.FreeInputs())
+	}
+	p, err := qasm.ParseProgram(src, opts...)
 	if err != nil {
 		var e *qasm.Error
 		if errors.As(err, &e) {

@@ -26,12 +26,17 @@ const (
 	exitOK      = 0 // equivalent, or the command did what was asked
 	exitDiffer  = 1 // some circuits differ (or a pair failed its expectation)
 	exitBadUsed = 2 // bad input or usage
+	// exitOpen: equiv on files with free input parameters found no difference but did not prove
+	// the pair equal for every value (a randomized test passed, or the certified bound is above
+	// the tolerance).
+	exitOpen = 3
 )
 
 const usage = `qcheck checks that quantum circuits written in OpenQASM 2.0 or 3 mean the same thing.
 
 Usage:
   qcheck equiv [flags] A.qasm B.qasm     exit 0 if equivalent, 1 if not, 2 on bad input
+                                         (3: free input parameters, not proved for every value)
   qcheck measures [-json] A.qasm B.qasm  print every distance and fidelity (up to 10 qubits)
   qcheck random [flags]                  write random circuits as OpenQASM 2.0 or 3
   qcheck pairs [flags] DIR               check every NAME.before.qasm against NAME.after.qasm

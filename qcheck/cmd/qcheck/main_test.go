@@ -198,7 +198,7 @@ func TestEquivEngineFlag(t *testing.T) {
 		stderr string
 	}{
 		{[]string{"-engine", "tableau", ta, tb}, "Clifford"},
-		{[]string{"-engine", "fast", ta, tb}, "flag -engine: unknown engine; choose auto, dense, tableau, matrix-free, stabilizer-program, program or zero-state"},
+		{[]string{"-engine", "fast", ta, tb}, "flag -engine: unknown engine; choose auto, dense, tableau, matrix-free, stabilizer-program, program, zero-state or zx"},
 	} {
 		if code, _, errOut := engineOf(c.args...); code != exitBadUsed || !strings.Contains(errOut, c.stderr) {
 			t.Errorf("equiv %v: exit %d, stderr %q; want exit 2 and …%s…", c.args, code, errOut, c.stderr)
@@ -208,9 +208,15 @@ func TestEquivEngineFlag(t *testing.T) {
 
 func writeFiles(t *testing.T, files map[string]string) string {
 	t.Helper()
+	return writeFilesWith(t, "OPENQASM 2.0;\ninclude \"qelib1.inc\";\n", files)
+}
+
+// writeFilesWith writes each named source, after head, into a temporary directory it returns.
+func writeFilesWith(t *testing.T, head string, files map[string]string) string {
+	t.Helper()
 	dir := t.TempDir()
 	for name, src := range files {
-		if err := os.WriteFile(filepath.Join(dir, name), []byte("OPENQASM 2.0;\ninclude \"qelib1.inc\";\n"+src), 0o644); err != nil {
+		if err := os.WriteFile(filepath.Join(dir, name), []byte(head+src), 0o644); err != nil {
 			t.Fatal(err)
 		}
 	}

@@ -54,14 +54,14 @@ func TestRandomVersion3(t *testing.T) {
 	}
 }
 
-// An OpenQASM 3 input parameter needs a value until circuits carry free parameters: without
-// -input the command says so; with it, the value is used.
+// An OpenQASM 3 input angle cannot be a free parameter (its value is reduced modulo 2π): without
+// -input the command says so at its line and column; with it, the value is used.
 func TestInputFlag(t *testing.T) {
 	dir := t.TempDir()
 	a, b := filepath.Join(dir, "a.qasm"), filepath.Join(dir, "b.qasm")
 	os.WriteFile(a, []byte("OPENQASM 3;\ninclude \"stdgates.inc\";\ninput angle θ;\nqubit q;\nrz(θ) q;\n"), 0o644)
 	os.WriteFile(b, []byte("OPENQASM 2.0;\ninclude \"qelib1.inc\";\nqreg q[1];\nrz(0.25) q[0];\n"), 0o644)
-	if code, _, errOut := runCmd("equiv", a, b); code != exitBadUsed || !strings.Contains(errOut, "a.qasm:3:13: input θ has no value") || !strings.Contains(errOut, "-input θ=VALUE") {
+	if code, _, errOut := runCmd("equiv", a, b); code != exitBadUsed || !strings.Contains(errOut, "a.qasm:3:7: input θ of type angle cannot be a free parameter") || !strings.Contains(errOut, "-input θ=VALUE") {
 		t.Errorf("no -input: exit %d, %s", code, errOut)
 	}
 	if code, out, errOut := runCmd("equiv", "-input", "θ=0.25", a, b); code != exitOK {
