@@ -37,7 +37,7 @@ func padPairs(c *circuit.Circuit) (*circuit.Circuit, error) {
 func benchmarkPreserves(b *testing.B, pass Pass) {
 	checks, _ := strconv.Atoi(flag.Lookup("rapid.checks").Value.String())
 	prop := Property(pass, thirtyOps)
-	h := &searchTB{name: "BenchmarkPreserves"}
+	h := &recordTB{name: "BenchmarkPreserves"}
 	b.ReportAllocs()
 	b.ResetTimer()
 	start, cpu := time.Now(), cpuTime()
@@ -72,7 +72,7 @@ func BenchmarkCompare3Qubits30Ops(b *testing.B) {
 func BenchmarkGenerate3Qubits30Ops(b *testing.B) {
 	g := thirtyOps
 	checks, _ := strconv.Atoi(flag.Lookup("rapid.checks").Value.String())
-	h := &searchTB{name: "BenchmarkGenerate"}
+	h := &recordTB{name: "BenchmarkGenerate"}
 	b.ResetTimer()
 	start, cpu := time.Now(), cpuTime()
 	for i := 0; i < b.N; i++ {

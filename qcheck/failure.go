@@ -41,8 +41,8 @@ func (k FailureKind) String() string {
 	return fmt.Sprintf("FailureKind(%d)", int(k))
 }
 
-// Failure is an input circuit on which a pass is wrong, and what went wrong. From Preserves and
-// Search it is the minimal such circuit rapid could shrink to.
+// Failure is an input circuit on which a pass is wrong, and what went wrong. From Preserves it is
+// the smallest such circuit rapid could shrink to; from Search it is 1-minimal.
 type Failure struct {
 	Kind FailureKind
 	// Input is the circuit given to the pass (as it was before the pass ran).
@@ -57,12 +57,11 @@ type Failure struct {
 	Err error
 	// Result is the comparison of Input and Output, for NotEquivalent.
 	Result *Result
-	// Seed, FailFile and Passed describe how Search found the failure: rapid's seed and fail
-	// file to replay it, and how many checks passed before it. They are zero from Preserves,
-	// where rapid prints them itself.
-	Seed     uint64
-	FailFile string
-	Passed   int
+	// Seed and Passed describe how Search found the failure: the seed of the failing draw
+	// (see Search for how it replays), and how many checks passed before it. They are zero from
+	// Preserves, where rapid prints how to replay.
+	Seed   uint64
+	Passed int
 }
 
 // subject is a pass of either kind, seen uniformly.

@@ -5,11 +5,10 @@ import (
 	"qcheck.dev/qcheck/shrink"
 )
 
-// minimized returns the failure of a 1-minimal input that fails the same way as f's: rapid's
-// shrinking stops where no single random choice can move (ops derived from one another by a
-// motif, qubits drawn together), and shrink.Minimize finishes it on the circuit itself, until
-// removing any op, lowering any qubit or simplifying any angle makes the failure go away. The
-// result keeps f's Seed, FailFile and Passed, which describe the search. It is f itself when f's
+// minimized returns the failure of a 1-minimal input that fails the same way as f's:
+// shrink.Minimize works on the circuit itself, until removing any op, lowering any qubit or
+// simplifying any angle makes the failure go away. The result keeps f's Seed and Passed, which
+// describe the search. It is f itself when f's
 // input is already 1-minimal.
 func minimized(cfg *config, s subject, f *Failure) *Failure {
 	fails := func(c *circuit.Circuit) bool {
@@ -21,6 +20,6 @@ func minimized(cfg *config, s subject, f *Failure) *Failure {
 		return f
 	}
 	g := trial(cfg, s, m)
-	g.Seed, g.FailFile, g.Passed = f.Seed, f.FailFile, f.Passed
+	g.Seed, g.Passed = f.Seed, f.Passed
 	return g
 }

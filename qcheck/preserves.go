@@ -23,7 +23,7 @@ type LayoutPass func(*circuit.Circuit) (*circuit.Circuit, []int, error)
 // error, a panic, a change to the input circuit, an ill-formed output or a difference beyond the
 // tolerance fails the test once, with the smallest failing circuit rapid can shrink to and its
 // report; rapid prints how to replay it (-rapid.seed, or the fail file it saves under
-// testdata/rapid/). Success is silent.
+// testdata/rapid/). Success is silent. Search runs the same checks outside a test.
 //
 // t is normally the test's *testing.T (or *testing.B): Preserves then runs rapid.Check, with
 // rapid's -rapid.checks number of circuits (100 by default). Given a *rapid.T, inside a property

@@ -105,7 +105,7 @@ func TestReportBlamesTheMovedGates(t *testing.T) {
 // Preserves fails the test once, and rapid prints the report once, for the minimal case.
 func TestPreservesFailsOnceWithReport(t *testing.T) {
 	withSeed(t, 4)
-	h := &searchTB{name: "TestPreservesFailsOnceWithReport"}
+	h := &recordTB{name: "TestPreservesFailsOnceWithReport"}
 	Preserves(h, dropT, circuits(3, 20))
 	if !h.failed {
 		t.Fatal("Preserves accepted a pass that drops t gates")
@@ -123,7 +123,7 @@ func TestPreservesFailsOnceWithReport(t *testing.T) {
 }
 
 func TestPreservesSilentOnSuccess(t *testing.T) {
-	h := &searchTB{name: "TestPreservesSilentOnSuccess"}
+	h := &recordTB{name: "TestPreservesSilentOnSuccess"}
 	Preserves(h, cancelPairs, circuits(3, 10))
 	if h.failed {
 		t.Fatalf("a correct pass failed: %q", h.errors)
@@ -159,7 +159,7 @@ func TestPreservesRefusesAHandleWithoutRapid(t *testing.T) {
 }
 
 func TestPreservesRefusesBadOptions(t *testing.T) {
-	h := &searchTB{name: "x"}
+	h := &recordTB{name: "x"}
 	Preserves(h, cancelPairs, circuits(2, 5), Tolerance(-1))
 	if !h.failed || !strings.Contains(strings.Join(h.errors, ""), "Tolerance(-1)") {
 		t.Errorf("bad tolerance not reported: %q", h.errors)
@@ -220,7 +220,7 @@ func TestNilPassOrGenerator(t *testing.T) {
 	if _, err := Search(cancelPairs, nil); err == nil || !strings.Contains(err.Error(), "generator is nil") {
 		t.Errorf("nil generator: %v", err)
 	}
-	h := &searchTB{name: "nil"}
+	h := &recordTB{name: "nil"}
 	CheckRule(h, Rule(nil), nil)
 	if !h.failed || !strings.Contains(strings.Join(h.errors, ""), "the rule is nil") {
 		t.Errorf("nil rule: %q", h.errors)

@@ -172,10 +172,6 @@ func replaySection(b *strings.Builder, p *page) {
 	}
 	b.WriteString("\nreplay: ")
 	switch {
-	case f.FailFile != "" && f.Seed != 0:
-		fmt.Fprintf(b, "-rapid.failfile=%q (or -rapid.seed=%d)\n", f.FailFile, f.Seed)
-	case f.FailFile != "":
-		fmt.Fprintf(b, "-rapid.failfile=%q\n", f.FailFile)
 	case f.Seed != 0:
 		fmt.Fprintf(b, "-rapid.seed=%d\n", f.Seed)
 	default:

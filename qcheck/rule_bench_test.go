@@ -30,7 +30,7 @@ func BenchmarkCheckRule(b *testing.B) {
 
 func benchmarkRule(b *testing.B, property func() func(*rapid.T)) {
 	checks, _ := strconv.Atoi(flag.Lookup("rapid.checks").Value.String())
-	h := &searchTB{name: "BenchmarkCheckRule"}
+	h := &recordTB{name: "BenchmarkCheckRule"}
 	start, cpu := time.Now(), cpuTime()
 	for b.Loop() {
 		rapid.Check(h, property())

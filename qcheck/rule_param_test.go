@@ -27,7 +27,7 @@ func TestCheckRuleRefutesAParametricRule(t *testing.T) {
 		a := param.Var("a")
 		return param.New(2).CP(a, 0, 1), param.New(2).CRZ(a, 0, 1)
 	}
-	h := &searchTB{name: "crz for cp"}
+	h := &recordTB{name: "crz for cp"}
 	CheckRule(h, crzForCP, nil)
 	all := strings.Join(h.errors, "\n")
 	if !h.failed || !strings.Contains(all, "the rule itself is wrong") || !strings.Contains(all, "at a = π the distance is 0.765367") {
@@ -38,7 +38,7 @@ func TestCheckRuleRefutesAParametricRule(t *testing.T) {
 func TestCheckRuleCatchesAMatcherBugWithParameters(t *testing.T) {
 	// The rule is proved; the pass's matcher ignores qubits, which only the embedding shows.
 	withSeed(t, 7)
-	h := &searchTB{name: "matcher bug"}
+	h := &recordTB{name: "matcher bug"}
 	CheckRule(h, mergeRZForAll, mergeRZAnyQubit)
 	if !h.failed || !strings.Contains(strings.Join(append(h.errors, h.logs...), "\n"), "the rule's left side was placed at ops") {
 		t.Errorf("a matcher that ignores qubits passed: %q", h.errors)
@@ -46,12 +46,12 @@ func TestCheckRuleCatchesAMatcherBugWithParameters(t *testing.T) {
 }
 
 func TestCheckRuleRefusesParametricOptions(t *testing.T) {
-	h := &searchTB{name: "measure"}
+	h := &recordTB{name: "measure"}
 	CheckRule(h, mergeRZForAll, nil, UseMeasure(Diamond))
 	if !h.failed || !strings.Contains(strings.Join(h.errors, ""), "proved in the operator norm") {
 		t.Errorf("got %q", h.errors)
 	}
-	h = &searchTB{name: "widths"}
+	h = &recordTB{name: "widths"}
 	CheckRule(h, func(*rapid.T) (*param.Circuit, *param.Circuit) {
 		return param.New(1).RZ(param.Var("a"), 0), param.New(2).RZ(param.Var("a"), 0)
 	}, nil)

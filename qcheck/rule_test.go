@@ -51,7 +51,7 @@ func TestCheckRuleCatchesAWrongRule(t *testing.T) {
 		b := rapid.Float64Range(-math.Pi, math.Pi).Draw(t, "b")
 		return circuit.New(1).RZ(a, 0).RZ(b, 0), circuit.New(1).RZ(a-b, 0)
 	}
-	h := &searchTB{name: "wrong rule"}
+	h := &recordTB{name: "wrong rule"}
 	CheckRule(h, wrong, nil)
 	if !h.failed || !strings.Contains(strings.Join(h.errors, "\n"), "the rule itself is wrong") {
 		t.Errorf("a wrong rule passed: %q", h.errors)
@@ -62,7 +62,7 @@ func TestCheckRuleCatchesAWrongRule(t *testing.T) {
 // register with other rz ops nearby exposes it.
 func TestCheckRuleCatchesAMatcherBug(t *testing.T) {
 	withSeed(t, 7)
-	h := &searchTB{name: "matcher bug"}
+	h := &recordTB{name: "matcher bug"}
 	CheckRule(h, mergeRZ, mergeRZAnyQubit)
 	if !h.failed {
 		t.Fatal("a matcher that ignores qubits passed")
@@ -76,12 +76,12 @@ func TestCheckRuleCatchesAMatcherBug(t *testing.T) {
 }
 
 func TestCheckRuleRefuses(t *testing.T) {
-	h := &searchTB{name: "bad options"}
+	h := &recordTB{name: "bad options"}
 	CheckRule(h, mergeRZ, nil, OutputPermutation([]int{0}))
 	if !h.failed || !strings.Contains(strings.Join(h.errors, ""), "rule checks take no OutputPermutation") {
 		t.Errorf("got %q", h.errors)
 	}
-	h = &searchTB{name: "uneven sides"}
+	h = &recordTB{name: "uneven sides"}
 	CheckRule(h, func(t *rapid.T) (*circuit.Circuit, *circuit.Circuit) {
 		return circuit.New(1).X(0), circuit.New(2).X(0)
 	}, nil)

@@ -4,6 +4,7 @@ import (
 	"bytes"
 	"flag"
 	"math"
+	"math/cmplx"
 	"os"
 	"path/filepath"
 	"strings"
@@ -151,12 +152,16 @@ func keeps(t *testing.T, pass qcheck.LayoutPass, in *circuit.Circuit, opts []qch
 	return err == nil && r.Equivalent
 }
 
-// The demo's shrunk counterexample is a real bug, checked by hand: a Z on the target of a CX
-// does not slide through it, since CX·(I ⊗ Z_t) = (Z_c ⊗ Z_t)·CX (Nielsen & Chuang §10.5.2,
-// conjugation of Paulis by CNOT). So for a phase gate P on the target after it,
-// P_t·CX·Z_t = P_t·Z_t·Z_c·CX, while the wrong pass slides the Z through and merges it with P,
-// leaving (P·Z)_t·CX: the two differ by Z on the control, whose eigenphases 0 and π span a half
-// circle, a phase-free distance of 2·sin(π/4) = √2 (package metric's documentation).
+// The demo's shrunk counterexample is a real bug, checked by hand. Its input is A_t·CX·B_t (A
+// first) with A and B phase gates on the CX's target, and the wrong pass slides A through the
+// target and merges it with B, leaving (BA)_t·CX. The rule it breaks: with the control at 1, CX
+// applies X to the target, and X·P(a)·X = e^{ia}·P(−a) (multiply X by diag(1, e^{ia}); Nielsen &
+// Chuang §4.2 defines both, and for a = π this is CX·Z_t·CX = Z_c·Z_t, §10.5.2's conjugation of
+// Paulis by CNOT). So output†·input = CX·P_t(−a)·CX·P_t(a) is I where the control is 0 and
+// e^{−ia}·P(2a) on the target where it is 1: its eigenphases are 0, −a and +a. The shortest arc θ
+// holding them is 2π less the largest gap between them, and the phase-free distance is 2·sin(θ/4)
+// (package metric's documentation). For seed 1, A = T (a = π/4) and B = S: θ = π/2, so the
+// distance is 2·sin(π/8) ≈ 0.7654.
 func TestDemoCounterexampleIsReal(t *testing.T) {
 	f, err := campaign.Hunt(campaign.Peephole(), 1, campaign.DefaultChecks)
 	if err != nil {
@@ -167,11 +172,19 @@ func TestDemoCounterexampleIsReal(t *testing.T) {
 	}
 	in := f.Input
 	phase := map[string]bool{"z": true, "s": true, "t": true, "p": true, "rz": true}
-	if len(in.Ops) != 3 || in.Ops[0].Gate.Name != "z" || in.Ops[1].Gate.Name != "cx" || !phase[in.Ops[2].Gate.Name] ||
+	if len(in.Ops) != 3 || !phase[in.Ops[0].Gate.Name] || in.Ops[1].Gate.Name != "cx" || !phase[in.Ops[2].Gate.Name] ||
 		in.Ops[0].Qubits[0] != in.Ops[1].Qubits[1] || in.Ops[2].Qubits[0] != in.Ops[1].Qubits[1] {
-		t.Fatalf("shrunk input is not Z_t·CX·P_t: %#v", in)
+		t.Fatalf("shrunk input is not A_t·CX·B_t with phase gates A and B: %#v", in)
 	}
-	if d := f.Result.Distance; math.Abs(d-math.Sqrt2) > 1e-12 {
-		t.Errorf("distance %.15g, want √2 = %.15g", d, math.Sqrt2)
+	m := in.Ops[0].Gate.Elements()
+	a := math.Abs(cmplx.Phase(m[3] / m[0])) // P(a) up to global phase; the arc depends on |a| only
+	theta := 2*math.Pi - max(a, 2*math.Pi-2*a)
+	want := 2 * math.Sin(theta/4)
+	if d := f.Result.Distance; math.Abs(d-want) > 1e-12 {
+		t.Errorf("distance %.15g, want 2·sin(θ/4) = %.15g for a = %.6g", d, want, a)
+	}
+	// Seed 1 is the case worked above, so the general formula is checked against a number.
+	if in.Ops[0].Gate.Name != "t" || math.Abs(want-2*math.Sin(math.Pi/8)) > 1e-15 {
+		t.Errorf("seed 1 gave %#v, not the T-first case worked in the comment", in)
 	}
 }

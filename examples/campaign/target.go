@@ -29,10 +29,11 @@ type Target struct {
 // DefaultChecks is rapid's default number of checks per campaign.
 const DefaultChecks = 100
 
-// Hunt runs qcheck.Search on the target with rapid's seed and number of checks set as given, and
-// without fail files (so that nothing is written to, or replayed from, testdata/rapid/). It
-// returns the shrunk failure (1-minimal, as Search makes it), or nil when all checks passed. Hunt sets rapid's command-line
-// settings for the duration of the call and restores them; like Search, calls must not overlap.
+// Hunt runs qcheck.Search on the target with the given seed and number of checks, and returns
+// the failure (1-minimal, as Search makes it), or nil when all checks passed. Search reads its
+// seed and number of checks from rapid's command-line settings, so Hunt sets those two for the
+// duration of the call and restores them; calls must not overlap. Search itself writes no fail
+// file and reads none.
 func Hunt(t Target, seed uint64, checks int) (*qcheck.Failure, error) {
 	if seed == 0 {
 		return nil, fmt.Errorf("campaign: seed 0 asks rapid for a random seed; give a nonzero seed")
@@ -41,10 +42,8 @@ func Hunt(t Target, seed uint64, checks int) (*qcheck.Failure, error) {
 		return nil, fmt.Errorf("campaign: %d checks; want at least 1", checks)
 	}
 	restore, err := SetRapidFlags(map[string]string{
-		"rapid.seed":       strconv.FormatUint(seed, 10),
-		"rapid.checks":     strconv.Itoa(checks),
-		"rapid.nofailfile": "true",
-		"rapid.failfile":   "",
+		"rapid.seed":   strconv.FormatUint(seed, 10),
+		"rapid.checks": strconv.Itoa(checks),
 	})
 	if err != nil {
 		return nil, err
