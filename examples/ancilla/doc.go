@@ -1,5 +1,5 @@
 // Package ancilla is the multi-controlled X lowering of Fieldfare, the compiler an invented team
-// at Oxbow Quantum writes for its invented Tarn devices. Tarn chips run one- and two-qubit gates
+// at Thistlewick Qubit Foundry writes for its invented Tarn devices. Tarn chips run one- and two-qubit gates
 // only, and Fieldfare's front end accepts X gates with any number of controls (made by MCX); this
 // package rewrites each into Toffoli gates, borrowing extra qubits as work space, before the
 // Toffolis themselves are decomposed further.

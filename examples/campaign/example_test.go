@@ -19,7 +19,7 @@ func ExampleRun() {
 	lines := strings.Split(b.String(), "\n")
 	fmt.Println(strings.Join(lines[:4], "\n"))
 	// Output:
-	// Scenario: Oxbow Quantum's Fieldfare compiler team reviews a patch to its peephole optimizer.
+	// Scenario: Thistlewick Qubit Foundry's Fieldfare compiler team reviews a patch to its peephole optimizer.
 	// qcheck checks shortcut.Optimize on random 3-qubit circuits of up to 30 gates (seed 1).
 	//
 	// Checked 1 circuit: 0 kept their meaning, circuit 1 did not. Shrunk report:

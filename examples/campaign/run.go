@@ -15,7 +15,7 @@ func Run(w io.Writer, seed uint64) error {
 		return fmt.Errorf("campaign: seed 0 asks rapid for a random seed; give a nonzero seed")
 	}
 	t := Peephole()
-	fmt.Fprintf(w, "Scenario: Oxbow Quantum's Fieldfare compiler team reviews a patch to its peephole optimizer.\n")
+	fmt.Fprintf(w, "Scenario: Thistlewick Qubit Foundry's Fieldfare compiler team reviews a patch to its peephole optimizer.\n")
 	fmt.Fprintf(w, "qcheck checks %s on random 3-qubit circuits of up to 30 gates (seed %d).\n\n", t.Name, seed)
 	f, err := Hunt(t, seed, DefaultChecks)
 	if err != nil {

@@ -1,5 +1,5 @@
 // Package peephole is the peephole optimizer of Fieldfare, the compiler that an invented team at
-// an invented lab (Oxbow Quantum) writes for its Tarn devices: small superconducting chips whose
+// an invented lab (Thistlewick Qubit Foundry) writes for its Tarn devices: small superconducting chips whose
 // native two-qubit gate is cx and whose single-qubit gates are rz, sx and x.
 //
 // Fieldfare runs the optimizer after every lowering step, so it must be fast, local and exact.

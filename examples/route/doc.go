@@ -1,4 +1,4 @@
-// Package route is the qubit router of Fieldfare, the compiler an invented team at Oxbow Quantum
+// Package route is the qubit router of Fieldfare, the compiler an invented team at Thistlewick Qubit Foundry
 // writes for its invented Tarn devices. On a Tarn chip a two-qubit gate can act only on coupled
 // qubits: Tarn-6 is a line of six qubits, Tarn-9 a 3×3 grid. Circuits arrive written for
 // all-to-all connectivity, and the router inserts SWAP gates so that every two-qubit gate acts on
