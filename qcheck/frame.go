@@ -247,20 +247,7 @@ func (f *frame) setMeasuredQubits(qubits []int) error {
 	return nil
 }
 
-// An OpError is a refusal caused by one op of want or got. It gives the op's position so that a
-// caller holding the source of the circuit, such as a parsed OpenQASM file, can point at it.
-type OpError struct {
-	Circuit string // "want" or "got"
-	Index   int    // the op's position in the Ops of the circuit given to Compare
-	Op      string // the op, as circuit.Op.String writes it
-	Err     string // what is wrong, and what to do instead
-}
-
-func (e *OpError) Error() string {
-	return fmt.Sprintf("qcheck: %s's op %d (%s): %s", e.Circuit, e.Index, e.Op, e.Err)
-}
-
-// onlyFinalMeasurements returns an *OpError for the first op of c (named which) that Measured
+// onlyFinalMeasurements returns a *circuit.OpError, naming the circuit, for the first op of c (named which) that Measured
 // cannot take: a measurement followed by an op on its qubit, a reset, or a classically
 // controlled op. Such a circuit is a program, whose meaning is the default without Measured.
 func onlyFinalMeasurements(c *circuit.Circuit, which string) error {
@@ -284,7 +271,7 @@ func onlyFinalMeasurements(c *circuit.Circuit, which string) error {
 		default:
 			why = fmt.Sprintf("a %s", op.Gate.Name)
 		}
-		return &OpError{Circuit: which, Index: i, Op: op.String(), Err: why + "; Measured takes circuits whose measurements are all final and that otherwise only apply gates. Without Measured, circuits that measure, reset or branch before the end are compared as programs, their default meaning"}
+		return &circuit.OpError{Circuit: which, Index: i, Gate: op.Gate.Name, Err: why + "; Measured takes circuits whose measurements are all final and that otherwise only apply gates. Without Measured, circuits that measure, reset or branch before the end are compared as programs, their default meaning"}
 	}
 	return nil
 }

@@ -69,9 +69,9 @@ func TestMeasuredRefusesWhatItCannotRead(t *testing.T) {
 	}{
 		{"one side measures", circuit.New(1).H(0).Measure(0, 0), circuit.New(1).H(0), []Option{Measured()}, "got measures nothing"},
 		{"unmeasured qubit named", circuit.New(2).Measure(0, 0), circuit.New(2).Measure(0, 0), []Option{Measured(1)}, "want does not measure qubit 1"},
-		{"mid-circuit measurement", circuit.New(1).Measure(0, 0).H(0), circuit.New(1).H(0).Measure(0, 0), []Option{Measured()}, "want's op 0 (measure q0 -> c0): the measurement is followed by h q0"},
-		{"gate after the only measurement", circuit.New(1).H(0).Measure(0, 0).X(0), circuit.New(1).H(0).Measure(0, 0), []Option{Measured()}, "want's op 1 (measure q0 -> c0): the measurement is followed by x q0 on the same qubit, so it is not final"},
-		{"reset", circuit.New(2).H(0).Measure(0, 0), circuit.New(2).H(0).Reset(1).Measure(0, 0), []Option{Measured()}, "got's op 1 (reset q1): a reset; Measured takes circuits whose measurements are all final"},
+		{"mid-circuit measurement", circuit.New(1).Measure(0, 0).H(0), circuit.New(1).H(0).Measure(0, 0), []Option{Measured()}, "want's op 0 (measure): the measurement is followed by h q0"},
+		{"gate after the only measurement", circuit.New(1).H(0).Measure(0, 0).X(0), circuit.New(1).H(0).Measure(0, 0), []Option{Measured()}, "want's op 1 (measure): the measurement is followed by x q0 on the same qubit, so it is not final"},
+		{"reset", circuit.New(2).H(0).Measure(0, 0), circuit.New(2).H(0).Reset(1).Measure(0, 0), []Option{Measured()}, "got's op 1 (reset): a reset; Measured takes circuits whose measurements are all final"},
 	}
 	for _, c := range cases {
 		_, err := Compare(c.want, c.got, c.opts...)
@@ -89,11 +89,11 @@ func TestMeasuredRefusesProgramsWithTheirOp(t *testing.T) {
 	want.Ops[2].If = &circuit.Condition{Bits: []int{1}, Value: 1}
 	got := circuit.New(2).H(0).CX(0, 1).Measure(0, 0).Measure(1, 1)
 	_, err := Compare(want, got, Measured())
-	var e *OpError
+	var e *circuit.OpError
 	if !errors.As(err, &e) {
-		t.Fatalf("error %v, want an *OpError", err)
+		t.Fatalf("error %v, want a *circuit.OpError", err)
 	}
-	if e.Circuit != "want" || e.Index != 1 || e.Op != "measure q0 -> c1" {
+	if e.Circuit != "want" || e.Index != 1 || e.Gate != "measure" {
 		t.Errorf("OpError %+v, want want's op 1, measure q0 -> c1", e)
 	}
 	for _, s := range []string{"followed by measure q0 -> c0 on the same qubit", "Without Measured", "compared as programs"} {

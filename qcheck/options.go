@@ -222,7 +222,7 @@ type config struct {
 // the circuits (ranges, widths) are done by frameOf, and what an engine cannot do is said by
 // its refuses method.
 func newConfig(opts []Option) (*config, error) {
-	c := &config{tol: DefaultTolerance, engine: Auto, workLimit: DefaultWorkLimit}
+	c := &config{tol: DefaultTolerance, engine: Auto, workLimit: defaultWorkLimit}
 	if err := Options(opts).apply(c); err != nil {
 		return nil, err
 	}

@@ -221,7 +221,7 @@ func TestNilPassOrGenerator(t *testing.T) {
 		t.Errorf("nil generator: %v", err)
 	}
 	h := &recordTB{name: "nil"}
-	CheckRule(h, Rule(nil), nil)
+	CheckRule(h, (func(*rapid.T) (left, right *circuit.Circuit))(nil), nil)
 	if !h.failed || !strings.Contains(strings.Join(h.errors, ""), "the rule is nil") {
 		t.Errorf("nil rule: %q", h.errors)
 	}

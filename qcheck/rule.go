@@ -9,11 +9,6 @@ import (
 	"qcheck.dev/qcheck/param"
 )
 
-// Rule is a local rewrite rule: from parameters it draws with t (angles, a choice of gates), it
-// returns the pattern a pass looks for (left) and what the pass puts in its place (right), two
-// circuits of the same small width whose qubit i is the rule's i-th operand.
-type Rule func(t *rapid.T) (left, right *circuit.Circuit)
-
 // sides are what a rule returns: two circuits, or two parametric circuits of package param, whose
 // angles are affine expressions of named parameters (rz(a+b)).
 type sides interface {
@@ -33,7 +28,10 @@ const ruleGateWeight = 4
 // ruleContextGates are the common gates CheckRule surrounds a rule with.
 var ruleContextGates = []string{"h", "x", "s", "t", "sdg", "rz", "rx", "cx", "cz"}
 
-// CheckRule checks a rewrite rule in two steps, each over many draws of its parameters:
+// CheckRule checks a local rewrite rule. The rule, from parameters it draws with t (angles, a
+// choice of gates), returns the pattern a pass looks for (left) and what the pass puts in its
+// place (right): two circuits of the same small width whose qubit i is the rule's i-th operand.
+// It is checked in two steps, each over many draws of its parameters:
 //
 //  1. the rule itself: left and right must be equivalent under the options;
 //  2. the pass that applies it, in context: left is embedded at a random position of a random

@@ -4,18 +4,19 @@ import (
 	"fmt"
 )
 
-// DefaultWorkLimit is the work a comparison may take when no WorkLimit option is given: 10¹²
+// defaultWorkLimit is the work a comparison may take when no WorkLimit option is given: 10¹²
 // amplitude updates, a few minutes of one core. It admits every comparison the engines make
 // automatically at their usual sizes (a 12-qubit dense comparison of a few thousand gates, a
 // 22-qubit matrix-free one of a few hundred) and refuses, before starting, inputs such as 2²¹
 // gates on 14 qubits that would run for hours.
-const DefaultWorkLimit = 1e12
+const defaultWorkLimit = 1e12
 
 // WorkLimit sets the most work a comparison may take, in amplitude updates (one gate applied to
 // one amplitude, or one complex multiply-add of the dense linear algebra). Compare estimates the
 // work of the engine it chose before starting and returns an error with the estimate when it
-// exceeds the limit; raise the limit for comparisons that are worth the wait. It must be
-// positive; +Inf removes the limit.
+// exceeds the limit (Auto first tries the engines after it); raise the limit for comparisons that
+// are worth the wait. It must be positive; +Inf removes the limit. Without it the limit is 10¹²,
+// a few minutes of one core.
 func WorkLimit(units float64) Option {
 	return optionFunc(func(c *config) error {
 		if !(units > 0) {

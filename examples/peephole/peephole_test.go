@@ -39,7 +39,7 @@ func TestPassesPreserveTheUnitary(t *testing.T) {
 
 // rule turns a catalogue entry into a qcheck rule whose angles come from gen.Angle, which
 // reaches 0, ±π, ±2π, ±4π and tiny offsets from them where angle reduction goes wrong.
-func rule(rw peephole.Rewrite) qcheck.Rule {
+func rule(rw peephole.Rewrite) func(*rapid.T) (left, right *circuit.Circuit) {
 	return func(t *rapid.T) (*circuit.Circuit, *circuit.Circuit) {
 		angles := make([]float64, rw.Angles)
 		for i := range angles {

@@ -257,12 +257,16 @@ func (c *Circuit) Unitary() bool {
 
 // OpError is the error Validate returns for a bad op: which op, which gate, and what is wrong.
 type OpError struct {
-	Index int    // the op's position in Ops
-	Gate  string // the gate's name
-	Err   string // what is wrong
+	Circuit string // which circuit, where a caller works on several ("want", "got"); empty otherwise
+	Index   int    // the op's position in Ops
+	Gate    string // the gate's name
+	Err     string // what is wrong
 }
 
 func (e *OpError) Error() string {
+	if e.Circuit != "" {
+		return fmt.Sprintf("%s's op %d (%s): %s", e.Circuit, e.Index, e.Gate, e.Err)
+	}
 	return fmt.Sprintf("circuit: op %d (%s): %s", e.Index, e.Gate, e.Err)
 }
 

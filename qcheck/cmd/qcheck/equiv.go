@@ -11,6 +11,7 @@ import (
 	"time"
 
 	"qcheck.dev/qcheck"
+	"qcheck.dev/qcheck/circuit"
 	"qcheck.dev/qcheck/qasm"
 )
 
@@ -42,14 +43,17 @@ func (f *compareFlags) register(fs *flag.FlagSet) {
 	fs.BoolVar(&f.program, "program", false, "compare as programs: the distributions of the classical bits at the end (the default when a file measures, resets or has an if)")
 	fs.BoolVar(&f.fromZero, "from-zero", false, "compare on the input |0…0⟩ only (with -measured: the distributions of the measured qubits from there)")
 	fs.TextVar(&f.engine, "engine", qcheck.Auto, "`ENGINE` that answers: auto, dense, tableau (Clifford circuits) or matrix-free (see above)")
-	fs.Float64Var(&f.work, "work", qcheck.DefaultWorkLimit, "refuse, before starting, a comparison estimated to take more than `UNITS` amplitude updates")
+	fs.Float64Var(&f.work, "work", 0, "refuse, before starting, a comparison estimated to take more than `UNITS` amplitude updates (0: the library's default, 10¹²)")
 	fs.DurationVar(&f.timeout, "timeout", 0, "give up on a comparison after `DURATION` (such as 30s or 5m; 0: no limit), exit 2")
 	f.limits.register(fs)
 }
 
 // options turns the flags into qcheck options.
 func (f *compareFlags) options() ([]qcheck.Option, error) {
-	opts := []qcheck.Option{qcheck.Tolerance(f.tol), qcheck.WorkLimit(f.work)}
+	opts := []qcheck.Option{qcheck.Tolerance(f.tol)}
+	if f.work != 0 {
+		opts = append(opts, qcheck.WorkLimit(f.work))
+	}
 	if f.timeout < 0 {
 		return nil, fmt.Errorf("-timeout %v: the timeout must not be negative", f.timeout)
 	}
@@ -168,15 +172,16 @@ func (f *compareFlags) comparePrograms(a, b string, pa, pb *qasm.Program) (qchec
 		}
 	}
 	r, err := f.compareWithin(pa, pb, opts)
-	var opErr *qcheck.OpError
+	var opErr *circuit.OpError
 	switch {
 	case errors.As(err, &opErr):
 		path, prog := a, pa
 		if opErr.Circuit == "got" {
 			path, prog = b, pb
 		}
-		if opErr.Index < len(prog.Lines) {
-			return qcheck.Result{}, fmt.Errorf("%s:%d: %s: %s", path, prog.Lines[opErr.Index], opErr.Op, flagWords.Replace(opErr.Err))
+		if opErr.Circuit != "" && opErr.Index < len(prog.Lines) {
+			op := prog.Circuit.Ops[opErr.Index]
+			return qcheck.Result{}, fmt.Errorf("%s:%d: %s: %s", path, prog.Lines[opErr.Index], op, flagWords.Replace(opErr.Err))
 		}
 		fallthrough
 	case err != nil:
