@@ -84,7 +84,7 @@ type engine interface {
 
 // engines is every engine, in Auto's order of preference: the cheapest that answers exactly
 // first.
-var engines = []engine{tableauEngine{}, denseEngine{}, zxEngine{}, matrixFreeEngine{}, stabilizerProgramEngine{}, programEngine{}, zeroEngine{}}
+var engines = []engine{tableauEngine{}, denseEngine{}, zxEngine{}, matrixFreeEngine{}, stabilizerProgramEngine{}, programEngine{}, zeroEngine{}, finalMeasureEngine{}}
 
 // lookupEngine returns the engine of that name; Auto has none and returns nil.
 func lookupEngine(name Engine) (engine, error) {

@@ -31,13 +31,7 @@ func (r *Result) verdict() string {
 	if r.Equivalent {
 		rel = "≤"
 	}
-	switch {
-	case r.LowerBound:
-		return fmt.Sprintf("%s at least %.4g %s tolerance %g", r.Measure, r.Distance, rel, r.Tolerance)
-	case r.UpperBound:
-		return fmt.Sprintf("%s at most %.4g %s tolerance %g", r.Measure, r.Distance, rel, r.Tolerance)
-	}
-	return fmt.Sprintf("%s %.4g %s tolerance %g", r.Measure, r.Distance, rel, r.Tolerance)
+	return fmt.Sprintf("%s %s %s tolerance %g", r.Measure, distanceWords(*r), rel, r.Tolerance)
 }
 
 // Report writes the result for a person, in lines of at most 100 columns (drawings are wrapped by

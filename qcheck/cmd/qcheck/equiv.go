@@ -283,8 +283,8 @@ With -json, one JSON object (the encoding of qcheck.Result; keys stay, text may 
                      indexed Σ b_q·2^q (qubit 0 is the least-significant bit); [] if none,
                      if it shows no gap, or if it has more than 4,096 amplitudes (12 qubits)
   witness_gap        the gap the witness shows: a certified lower bound on operator_distance
-  engine             "dense", "tableau", "matrix-free", "stabilizer-program", "program" or
-                     "zero-state": the engine that answered
+  engine             "tableau", "dense", "zx", "matrix-free", "stabilizer-program",
+                     "program", "zero-state" or "final-measure": the engine that answered
   certifies          in words, what the engine's answer guarantees
   qubits             the width of the register that states and outcomes refer to (B's)
   measured           with -measured, the qubit of B's register each outcome bit reads (the

@@ -198,7 +198,7 @@ func TestEquivEngineFlag(t *testing.T) {
 		stderr string
 	}{
 		{[]string{"-engine", "tableau", ta, tb}, "Clifford"},
-		{[]string{"-engine", "fast", ta, tb}, "flag -engine: unknown engine; choose auto, tableau, dense, zx, matrix-free, stabilizer-program, program or zero-state"},
+		{[]string{"-engine", "fast", ta, tb}, "flag -engine: unknown engine; choose auto, tableau, dense, zx, matrix-free, stabilizer-program, program, zero-state or final-measure"},
 	} {
 		if code, _, errOut := engineOf(c.args...); code != exitBadUsed || !strings.Contains(errOut, c.stderr) {
 			t.Errorf("equiv %v: exit %d, stderr %q; want exit 2 and …%s…", c.args, code, errOut, c.stderr)
