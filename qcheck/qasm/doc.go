@@ -81,7 +81,7 @@
 //     tighter than unary minus), and sin, cos, tan, arcsin, arccos, arctan, exp, log, sqrt,
 //     ceiling, floor, mod, popcount;
 //   - for loops over ranges [a:b] and [a:step:b] (negative steps too) and sets {a, b}, with a
-//     typed or untyped loop variable; a loop may run at most MaxOps/32 times (131,072 at the
+//     typed or untyped loop variable; a loop may run at most MaxOps/32 times (32,768 at the
 //     default), so a loop of 10⁶ iterations is refused at its line and column before it runs;
 //   - if (condition) statement [else statement]: a condition known while reading chooses the
 //     branch; a condition on measured bits becomes the circuit.Condition of every op of the

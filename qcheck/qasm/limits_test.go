@@ -63,8 +63,8 @@ func TestEmptyBodiesCountAsWork(t *testing.T) {
 // 1,000 of them (11 KB) exhausted 12 GB. The operands are limited as well as the ops.
 func TestWideBarriersLimited(t *testing.T) {
 	src := "OPENQASM 2.0;\nqreg q[1048576];\n" + strings.Repeat("barrier q;\n", 1000)
-	// 4 × DefaultMaxOps operands hold 16 barriers of 2^20 qubits; the 17th is refused.
-	refusedQuickly(t, src, 19, 1, "more than "+strconv.Itoa(operandsPerOp*DefaultMaxOps)+" operands")
+	// 4 × DefaultMaxOps operands hold 4 barriers of 2^20 qubits; the 5th is refused.
+	refusedQuickly(t, src, 7, 1, "more than "+strconv.Itoa(operandsPerOp*DefaultMaxOps)+" operands")
 	// Dropped barriers cost nothing.
 	if c, err := Parse([]byte(src), DropBarriers()); err != nil || c.Len() != 0 {
 		t.Fatalf("DropBarriers: %v", err)
@@ -160,7 +160,7 @@ func TestOpenQASM3WorkLimited(t *testing.T) {
 			[]Option{MaxOps(1 << 16)}, "more than 524288 steps"},
 		{"include \"stdgates.inc\";\nqubit q;\npow(1000000000000000) @ x q;\n", nil, "pow(1e+15) repeats the gate more times than the source's work limit allows"},
 		{chain, []Option{MaxOps(1 << 16)}, "524288 steps"},
-		{"include \"stdgates.inc\";\nqubit q;\nfor int i in [0:999999] { x q; }\n", nil, "for loop of 1000000 iterations: at most 131072"},
+		{"include \"stdgates.inc\";\nqubit q;\nfor int i in [0:999999] { x q; }\n", nil, "for loop of 1000000 iterations: at most 32768"},
 	} {
 		var before, after runtime.MemStats
 		runtime.ReadMemStats(&before)

@@ -138,7 +138,7 @@ func TestParse3Errors(t *testing.T) {
 		{std + "qubit q;\nfoo q;", 4, 1, "unknown gate, name or statement foo"},
 		{std + "include \"other.inc\";", 3, 9, "only \"stdgates.inc\""},
 		{"include \"qelib1.inc\";\nqreg q[1];", 1, 9, "start the file with OPENQASM 2.0;"},
-		{std + "qubit[2] q;\nfor int i in [0:999999] { x q[0]; }", 4, 1, "for loop of 1000000 iterations: at most 131072"},
+		{std + "qubit[2] q;\nfor int i in [0:999999] { x q[0]; }", 4, 1, "for loop of 1000000 iterations: at most 32768"},
 		{std + "qubit[2] q;\nbit[2] c;\nif (c[0] || c[1]) x q[0];", 5, 10, "cannot be written as bits == value"},
 		{std + "qubit[2] q;\nbit[2] c;\nif (c[0]) { if (c[1]) x q[0]; }", 5, 13, "inside another"},
 		{std + "qubit[2] q;\nbit[2] c;\nint k = 0;\nif (c[0]) k = 1;", 6, 11, "cannot be assigned under a condition on measured bits"},

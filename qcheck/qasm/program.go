@@ -64,8 +64,9 @@ type config struct {
 }
 
 // DefaultMaxOps bounds the ops one source may expand to (gate definitions can double the count
-// at each level of nesting), so that a small hostile file cannot exhaust memory.
-const DefaultMaxOps = 1 << 22
+// at each level of nesting), so that a small hostile file cannot exhaust memory or time; the
+// command's -max-ops raises it for larger real files.
+const DefaultMaxOps = 1 << 20
 
 // operandsPerOp and workPerOp set the source's other limits from MaxOps: its ops may have
 // operandsPerOp × MaxOps operands in all (qubits, classical bits and condition bits), and

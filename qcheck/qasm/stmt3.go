@@ -333,7 +333,7 @@ func (p *parser3) bodyStatement3(gate string, params, qubits []string) (bodyCall
 	return b, p.expect(";", "after the call")
 }
 
-// maxIterations returns how many times one for loop may run: MaxOps/32 (131,072 at the
+// maxIterations returns how many times one for loop may run: MaxOps/32 (32,768 at the
 // default). Every iteration also counts against the work limit, so nested loops are bounded too.
 func (p *parser3) maxIterations() int64 { return int64(max(p.cfg.maxOps/32, 1)) }
 

@@ -121,9 +121,9 @@ func random(args []string, stdout, stderr io.Writer) int {
 }
 
 // maxRandomOps bounds -gates: a million ops take the generator about 13 s and 570 MB on a loaded
-// 2-core machine, and stay well inside the reader's op limit (qasm.DefaultMaxOps), so that every
-// file random writes can be read back.
-const maxRandomOps = 1 << 20
+// 2-core machine; it is the reader's op limit (qasm.DefaultMaxOps), so that every file random
+// writes can be read back.
+const maxRandomOps = qasm.DefaultMaxOps
 
 // countFlag is a non-negative count written as an integer or in exponent form (1e6), as people
 // write large counts; a value that is not a whole number, or is out of range, is refused.
