@@ -309,7 +309,7 @@ func TestEngine(t *testing.T) {
 		}
 		c, opts := circuit.New(2).H(0).CX(0, 1), []Option{UseEngine(e)}
 		switch e {
-		case "program", "stabilizer-program":
+		case "program", "stabilizer-program", "final-measure":
 			c.Measure(0, 0).Measure(1, 1)
 		case "zero-state":
 			opts = append(opts, FromZero())
