@@ -126,12 +126,24 @@ func (c *Circuit) Qubits() int {
 }
 
 // Bits returns the number of classical bits: one more than the highest bit a measure writes or a
-// condition reads, or the number set by SetBits, whichever is larger (0 for a nil circuit).
+// condition reads, or the number set by SetBits, whichever is larger (0 for a nil circuit). It
+// reads the ops each time, so ops set directly into Ops count too.
 func (c *Circuit) Bits() int {
 	if c == nil {
 		return 0
 	}
-	return c.bits
+	n := c.bits
+	for _, op := range c.Ops {
+		for _, b := range op.Bits {
+			n = max(n, b+1)
+		}
+		if op.If != nil {
+			for _, b := range op.If.Bits {
+				n = max(n, b+1)
+			}
+		}
+	}
+	return n
 }
 
 // SetBits declares the size of the classical register.

@@ -38,18 +38,7 @@ func soleRegisters(c *circuit.Circuit) (q, cr []Register) {
 	if c.Qubits() > 0 {
 		q = []Register{{Name: "q", Size: c.Qubits()}}
 	}
-	// Ops may be set directly, so a measure can write past Bits(); size c to hold every bit.
 	nc := c.Bits()
-	for _, op := range c.Ops {
-		for _, b := range op.Bits {
-			nc = max(nc, b+1)
-		}
-		if op.If != nil {
-			for _, b := range op.If.Bits {
-				nc = max(nc, b+1)
-			}
-		}
-	}
 	if nc > 0 {
 		cr = []Register{{Name: "c", Size: nc}}
 	}
@@ -120,7 +109,7 @@ func write(c *circuit.Circuit, qregs, cregs []Register, version int) ([]byte, er
 	for _, r := range cregs {
 		nc = max(nc, r.Start+r.Size)
 	}
-	cn, err := flat(cregs, max(nc, c.Bits()), "classical bit")
+	cn, err := flat(cregs, nc, "classical bit") // bits past the registers are refused at the op that names them
 	if err != nil {
 		return nil, err
 	}

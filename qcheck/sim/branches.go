@@ -75,7 +75,7 @@ func ProgramOutcomes(c *circuit.Circuit, opts ProgramOptions) (*Outcomes, error)
 	if err := c.Validate(); err != nil {
 		return nil, err
 	}
-	n, nbits := c.Qubits(), bitsOf(c)
+	n, nbits := c.Qubits(), c.Bits()
 	maxBranches, maxBytes := opts.limits()
 	if n > maxStateQubits || int64(16)<<n > maxBytes {
 		return nil, fmt.Errorf("sim: a %d-qubit statevector needs %s, more than the %s allowed", n, bytesString(math.Ldexp(16, n)), bytesString(float64(maxBytes)))
@@ -132,23 +132,6 @@ func ProgramOutcomes(c *circuit.Circuit, opts ProgramOptions) (*Outcomes, error)
 		e.read(b, last)
 	}
 	return e.out, nil
-}
-
-// bitsOf returns the number of classical bits a program has: Circuit.Bits, or one more than the
-// highest bit an op names if that is larger (a circuit whose Ops were set directly).
-func bitsOf(c *circuit.Circuit) int {
-	n := c.Bits()
-	for _, op := range c.Ops {
-		for _, b := range op.Bits {
-			n = max(n, b+1)
-		}
-		if op.If != nil {
-			for _, b := range op.If.Bits {
-				n = max(n, b+1)
-			}
-		}
-	}
-	return n
 }
 
 // finalMeasures marks the measurements that no later op touches, reads or overwrites, and that

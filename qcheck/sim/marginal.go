@@ -77,7 +77,7 @@ func checkBitList(bits []int) error {
 // are ignored, and so is every phase the measurement cannot see.
 func MeasureAtEnd(c *circuit.Circuit, qubits ...int) *circuit.Circuit {
 	out := c.Clone()
-	first := bitsOf(c)
+	first := c.Bits()
 	for j, q := range qubits {
 		out.Measure(q, first+j)
 	}

@@ -91,7 +91,7 @@ func StabilizerProgramOutcomes(c *circuit.Circuit, opts ProgramOptions) (*Stabil
 		return nil, err
 	}
 	limit, _ := opts.limits()
-	nbits := bitsOf(c)
+	nbits := c.Bits()
 	first := &symbolicRun{t: identityTableau(c.Qubits()), bits: make([]affineBit, nbits), weight: 1}
 	runs := []*symbolicRun{first}
 	cache := newMapCache()
