@@ -192,13 +192,14 @@ func (g Gate) String() string {
 }
 
 // FormatAngle writes an angle briefly for people: multiples of π/8 up to ±4π as such (π/2, -3π/4,
-// 2π), other values with at most five significant digits.
+// 2π), other values (tiny ones too: -1.8e-15, never 0π) with at most five significant digits.
 func FormatAngle(a float64) string {
 	if a == 0 {
 		return "0"
 	}
 	k := a / (math.Pi / 8)
-	if r := math.Round(k); math.Abs(k-r) < 1e-12 && math.Abs(r) <= 32 {
+	// A tiny nonzero angle is not written as 0: it is the difference a verdict may be about.
+	if r := math.Round(k); r != 0 && math.Abs(k-r) < 1e-12 && math.Abs(r) <= 32 {
 		n, d := int(r), 8
 		for d > 1 && n%2 == 0 {
 			n, d = n/2, d/2
