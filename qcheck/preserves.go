@@ -116,7 +116,8 @@ func property(cfg *config, s subject, g *rapid.Generator[*circuit.Circuit], seen
 }
 
 // failWith fails a property with the failure's report, logged once (rapid logs it only when it
-// replays the minimal failure), and a one-line message.
+// replays the minimal failure), and a one-line message: the headline, which rapid prints first,
+// so the logged report leaves it out.
 func failWith(t *rapid.T, f *Failure) {
 	t.Helper()
 	t.Log(lazyReport{f})
@@ -127,4 +128,6 @@ func failWith(t *rapid.T, f *Failure) {
 // for the minimal failure but not for the many failing attempts while shrinking.
 type lazyReport struct{ f *Failure }
 
-func (l lazyReport) String() string { return "\n" + l.f.Report() }
+func (l lazyReport) String() string {
+	return "\n" + writeSections(&page{r: l.f.Result, f: l.f, want: "input", got: "output"}, sections[1:])
+}

@@ -69,9 +69,12 @@ var sections = []section{
 }
 
 // write runs every section over the page.
-func write(p *page) string {
+func write(p *page) string { return writeSections(p, sections) }
+
+// writeSections writes the given sections of a report.
+func writeSections(p *page, list []section) string {
 	var b strings.Builder
-	for _, s := range sections {
+	for _, s := range list {
 		s(&b, p)
 	}
 	return b.String()
