@@ -52,9 +52,13 @@ type building struct {
 	first bool
 	pool  []int
 	pick  []int
-	// touch holds the qubits of a sandwich's first op, which the ops after it
-	// share; nil outside a sandwich.
+	// touch holds the qubits of a sandwich's or a commuting run's first op,
+	// which the ops after it share: diagonal gates on disjoint qubits commute
+	// trivially, and only those that overlap test a pass's reordering and
+	// merging of them. Nil in other chunks.
 	touch []int
+	// touchChoice is the choice of the op whose qubits touch holds, or −1.
+	touchChoice int
 }
 
 // extraOp is one op of a chunk, or the mark that ends the chunk.
@@ -116,7 +120,7 @@ func (b *building) chunk(t *rapid.T) bool {
 	times := 2 + drawBelow(t, 2)
 	form := drawBelow(t, formKinds)
 	sibling := 8*drawBelow(t, 8) + drawBelow(t, 8)
-	b.first, b.pool, b.pick, b.touch = true, nil, b.weights, nil
+	b.first, b.pool, b.pick, b.touch, b.touchChoice = true, nil, b.weights, nil, -1
 	if kind == chunkCommute {
 		if diagonal := b.diagonal(); diagonal != nil {
 			b.pick = diagonal
@@ -135,9 +139,9 @@ func (b *building) chunk(t *rapid.T) bool {
 		ops = append(ops, e.op)
 		if b.first {
 			b.first, firstChoice, first = false, e.choice, e.op
-			b.pool, b.pick = b.extrasFor(kind, e.op)
-			if kind == chunkSandwich {
-				b.touch = e.op.Qubits
+			b.pool, b.pick = b.extrasFor(kind, e.choice, e.op)
+			if kind == chunkSandwich || kind == chunkCommute {
+				b.touch, b.touchChoice = e.op.Qubits, e.choice
 			}
 		}
 		if kind == chunkSandwich {
@@ -216,14 +220,14 @@ func (b *building) again(i int, op circuit.Op, form, sibling int) circuit.Op {
 
 // extrasFor returns the qubits and gate weights for the ops of a chunk of the
 // given kind after its first op.
-func (b *building) extrasFor(kind int, first circuit.Op) (pool, pick []int) {
+func (b *building) extrasFor(kind, i int, first circuit.Op) (pool, pick []int) {
 	switch kind {
 	case chunkSameRun:
 		return first.Qubits, b.sameWidth(len(first.Qubits))
 	case chunkSandwich:
-		return nil, b.otherWidth(len(first.Qubits))
+		return nil, b.roleDependent(i, b.otherWidth(len(first.Qubits)))
 	case chunkCommute:
-		return nil, b.diagonal()
+		return nil, b.diagonalLike(len(first.Qubits))
 	case chunkRepeat:
 		return nil, b.weights
 	}
@@ -232,9 +236,11 @@ func (b *building) extrasFor(kind int, first circuit.Op) (pool, pick []int) {
 
 // drawExtra draws a "go on" mark (on with probability 3/4; 0 stops) and then
 // one op under the current pool and pick, if this is the chunk's first op or
-// the mark is on and the chunk takes more. In a sandwich (touch not nil) the
-// op shares a qubit with the first op, in a role drawn at random, three times
-// in four, and acts elsewhere otherwise.
+// the mark is on and the chunk takes more. In a sandwich or a commuting run
+// (touch not nil) the op acts elsewhere one time in four; two times in four,
+// if it has the first op's width, it acts on the first op's qubits in the
+// same order, sharing every role; otherwise it shares one qubit with the
+// first op, in a role drawn by role.
 func (b *building) drawExtra(t *rapid.T) extraOp {
 	more := drawBelow(t, 4) != 0
 	if !b.first && (!more || b.pick == nil) {
@@ -244,18 +250,66 @@ func (b *building) drawExtra(t *rapid.T) extraOp {
 	if b.touch == nil {
 		return extraOp{op: b.op(t, i, b.pool), choice: i, more: more}
 	}
-	elsewhere := drawBelow(t, 4) == 0
-	if rest := without(b.touch, b.qubits); elsewhere && len(rest) >= b.choices[i].qubits {
+	share := drawBelow(t, 4)
+	if rest := without(b.touch, b.qubits); share == shareNone && len(rest) >= b.choices[i].qubits {
 		return extraOp{op: b.op(t, i, rest), choice: i, more: more}
 	}
 	op := b.op(t, i, nil)
-	pos, shared := drawBelow(t, len(op.Qubits)), b.touch[drawBelow(t, len(b.touch))]
+	if share != shareOne && len(op.Qubits) == len(b.touch) {
+		copy(op.Qubits, b.touch)
+		return extraOp{op: op, choice: i, more: more}
+	}
+	pos, shared := b.role(t, i, len(op.Qubits)), b.touch[drawBelow(t, len(b.touch))]
 	if k := slices.Index(op.Qubits, shared); k >= 0 {
 		op.Qubits[k], op.Qubits[pos] = op.Qubits[pos], op.Qubits[k]
 	} else {
 		op.Qubits[pos] = shared
 	}
 	return extraOp{op: op, choice: i, more: more}
+}
+
+// role draws the operand of gate i that a sandwich's or commuting run's
+// first op shares. After a single-qubit first op, the operands in which it
+// does not commute with gate i weigh three times the others: a sandwich
+// whose middle blocks its bread is where a wrong commutation rule changes
+// the meaning, and a multi-qubit gate usually blocks in some roles only (a
+// Pauli X passes a cx on its target, not on its control).
+func (b *building) role(t *rapid.T, i, k int) int {
+	w := slices.Repeat([]int{1}, k)
+	if b.touchChoice >= 0 && b.choices[b.touchChoice].qubits == 1 {
+		for pos, blocked := range b.blocks[b.touchChoice][i] {
+			if blocked {
+				w[pos] = 3
+			}
+		}
+	}
+	return drawWeighted(t, w)
+}
+
+// How an op of a sandwich or a commuting run shares the first op's qubits,
+// in shrinking order; the value 2 too shares all of them.
+const (
+	shareNone = iota // it acts on other qubits
+	shareAll         // it acts on the same qubits, in the same roles
+	_
+	shareOne // it shares one qubit
+)
+
+// roleDependent returns the weights w with those of the gates that single-
+// qubit choice i passes in some of their roles and not in others counted
+// three times: a commutation rule that forgets to check the role (whether
+// the first op sits on a control or a target) is wrong only around such
+// gates. w is returned as is after a wider first op.
+func (b *building) roleDependent(i int, w []int) []int {
+	if b.blocks[i] == nil {
+		return w
+	}
+	for j, bl := range b.blocks[i] {
+		if slices.Contains(bl, true) && slices.Contains(bl, false) {
+			w[j] *= 3
+		}
+	}
+	return w
 }
 
 // otherWidth returns the weights of the gates, those of a width other than k
@@ -315,6 +369,20 @@ func (b *building) diagonal() []int {
 	}
 	if !any {
 		return nil
+	}
+	return w
+}
+
+// diagonalLike returns the weights of the diagonal gates, those acting on
+// exactly k qubits counted three times, so that a commuting run after a
+// two-qubit diagonal gate holds other two-qubit ones (which may land on the
+// same pair) as often as single-qubit ones; nil if there are none.
+func (b *building) diagonalLike(k int) []int {
+	w := b.diagonal()
+	for i, ch := range b.choices {
+		if w != nil && ch.qubits == k {
+			w[i] *= 3
+		}
 	}
 	return w
 }

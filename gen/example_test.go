@@ -22,9 +22,9 @@ func ExampleCircuit() {
 	// cx q1,q2
 	// h q2
 	// h q2
+	// cx q2,q0
 	// h q2
-	// rz(-4π) q2
-	// h q2
+	// rz(4.1768) q2
 }
 
 // The zero Options draw up to 20 ops on 3 qubits from DefaultGateSet.

@@ -8,7 +8,7 @@ import (
 )
 
 // Options configure Circuit. The zero value is useful: circuits of up to 20
-// ops on 3 qubits, drawn from DefaultGateSet with equal weights, with 85% of
+// ops on 3 qubits, drawn from DefaultGateSet with equal weights, with 95% of
 // the draws spent on motifs.
 type Options struct {
 	// Qubits is the width of the drawn circuits; 0 means 3.
@@ -45,7 +45,7 @@ type Options struct {
 	// reversed, or another gate of the same width; runs of gates on the
 	// same qubits; runs of commuting diagonal gates; and a block of ops
 	// repeated two or three times. Only gates of the set with a positive
-	// weight appear, in motifs too. 0 means 85; a negative value means none;
+	// weight appear, in motifs too. 0 means 95; a negative value means none;
 	// at most 100.
 	Motifs int
 }
@@ -66,7 +66,7 @@ func DefaultGateSet() []string {
 const (
 	defaultQubits = 3
 	defaultMaxOps = 20
-	defaultMotifs = 85 // measured: testdata/catalogue/detection.txt
+	defaultMotifs = 95 // measured: testdata/catalogue/detection.txt
 )
 
 // choice is one gate Circuit may draw.
@@ -89,6 +89,9 @@ type plan struct {
 	chunkWeights   []int     // single op, then each motif kind
 	patterns       []pattern // the identities whose gates are all in the set
 	motifs         bool      // whether any motif is drawn
+	// blocks[i][j][pos] reports whether single-qubit choice i fails to
+	// commute with choice j on j's operand pos (nil for wider choices i).
+	blocks [][][]bool
 }
 
 // diagonalGates are the standard gates whose matrices are diagonal
@@ -180,6 +183,17 @@ func (o Options) resolve() (*plan, error) {
 
 	for i := range p.choices {
 		p.choices[i].inverse = p.inverseOf(i)
+	}
+
+	p.blocks = make([][][]bool, len(p.choices))
+	for i, a := range p.choices {
+		if a.qubits != 1 {
+			continue
+		}
+		p.blocks[i] = make([][]bool, len(p.choices))
+		for j, g := range p.choices {
+			p.blocks[i][j] = blocks(a.gate, g.gate)
+		}
 	}
 
 	motifs := o.Motifs

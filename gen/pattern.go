@@ -119,9 +119,12 @@ const (
 	missAngle   // one op's angle moves by π
 )
 
-// missWeights make two draws in five move an op, the near miss that a
-// matcher which forgets to check an operand falls for.
-var missWeights = []int{missNone: 1, missMove: 2, missReverse: 1, missAngle: 1}
+// missWeights make two draws in six move an op, the near miss that a matcher
+// which forgets to check an operand falls for, and two in six reverse one,
+// the near miss of a matcher blind to operand order. A near miss that cannot
+// apply to the drawn pattern (no multi-qubit op to reverse, no angle to
+// change) moves an op instead, so that no draw is a near miss in name only.
+var missWeights = []int{missNone: 2, missMove: 2, missReverse: 3, missAngle: 1}
 
 // drawPattern draws a pattern among the available ones, its qubits, its angle
 // and a near miss, and returns its ops.
@@ -152,6 +155,20 @@ func (b *building) drawPattern(t *rapid.T) []circuit.Op {
 		}
 		ops[i] = op
 	}
+	// The ops a reversal or an angle change can act on: multi-qubit ops,
+	// whose operands have roles, and ops with one angle.
+	var multi, angled []int
+	for i, op := range ops {
+		if len(op.Qubits) > 1 {
+			multi = append(multi, i)
+		}
+		if len(op.Gate.Params) == 1 {
+			angled = append(angled, i)
+		}
+	}
+	if miss == missReverse && len(multi) == 0 || miss == missAngle && len(angled) == 0 {
+		miss = missMove
+	}
 	switch miss {
 	case missMove:
 		// An inner op of a longer pattern: moving what a matcher finds
@@ -161,16 +178,9 @@ func (b *building) drawPattern(t *rapid.T) []circuit.Op {
 			k = 1 + k%(len(ops)-2)
 		}
 	case missReverse:
-		// A multi-qubit op, whose operands have roles.
-		var multi []int
-		for i, op := range ops {
-			if len(op.Qubits) > 1 {
-				multi = append(multi, i)
-			}
-		}
-		if len(multi) > 0 {
-			k = multi[k%len(multi)]
-		}
+		k = multi[k%len(multi)]
+	case missAngle:
+		k = angled[k%len(angled)]
 	}
 	switch op := &ops[k]; miss {
 	case missMove:

@@ -22,5 +22,5 @@ func ExampleRun() {
 	// Scenario: Thistlewick Qubit Foundry's Fieldfare compiler team reviews a patch to its peephole optimizer.
 	// qcheck checks shortcut.Optimize on random 3-qubit circuits of up to 30 gates (seed 1).
 	//
-	// Checked 1 circuit: 0 kept their meaning, circuit 1 did not. Shrunk report:
+	// Checked 2 circuits: 1 kept their meaning, circuit 2 did not. Shrunk report:
 }
