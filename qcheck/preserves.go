@@ -110,24 +110,34 @@ func property(cfg *config, s subject, g *rapid.Generator[*circuit.Circuit], seen
 			if seen != nil {
 				seen(f)
 			}
-			failWith(t, f)
+			failWith(t, f, func() *Failure { return minimized(cfg, s, f) })
 		}
 	}
 }
 
 // failWith fails a property with the failure's report, logged once (rapid logs it only when it
 // replays the minimal failure), and a one-line message: the headline, which rapid prints first,
-// so the logged report leaves it out.
-func failWith(t *rapid.T, f *Failure) {
+// so the logged report leaves it out. With minimize, the report is of the 1-minimal input that
+// minimize finds from rapid's shrunk one, when that is smaller, under a line saying so.
+func failWith(t *rapid.T, f *Failure, minimize func() *Failure) {
 	t.Helper()
-	t.Log(lazyReport{f})
+	t.Log(lazyReport{f, minimize})
 	t.Fatalf("%s", f.Headline())
 }
 
 // lazyReport formats a failure's report only when rapid actually prints it, which it does once
 // for the minimal failure but not for the many failing attempts while shrinking.
-type lazyReport struct{ f *Failure }
+type lazyReport struct {
+	f        *Failure
+	minimize func() *Failure // nil: report f as it is
+}
 
 func (l lazyReport) String() string {
+	if l.minimize != nil {
+		if m := l.minimize(); m != l.f {
+			return fmt.Sprintf("\nrapid shrank the input to %d ops; removing ops, lowering qubits and simplifying angles while it still fails takes it to %d:\n\n%s",
+				l.f.Input.Len(), m.Input.Len(), m.Report())
+		}
+	}
 	return "\n" + writeSections(&page{r: l.f.Result, f: l.f, want: "input", got: "output"}, sections[1:])
 }

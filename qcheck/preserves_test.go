@@ -5,6 +5,7 @@ import (
 	"testing"
 
 	"pgregory.net/rapid"
+	"qcheck.dev/gen"
 	"qcheck.dev/qcheck/circuit"
 )
 
@@ -224,5 +225,29 @@ func TestNilPassOrGenerator(t *testing.T) {
 	CheckRule(h, (func(*rapid.T) (left, right *circuit.Circuit))(nil), nil)
 	if !h.failed || !strings.Contains(strings.Join(h.errors, ""), "the rule is nil") {
 		t.Errorf("nil rule: %q", h.errors)
+	}
+}
+
+// Preserves reports a 1-minimal input, not only rapid's shrunk one. A pass that drops the first
+// op of any circuit longer than two ops fails on every circuit of three ops whose first op is not
+// the identity, and on none shorter, so the reported input must have exactly three ops; rapid
+// alone sometimes stops at four (seeds 1 and 3 of this generator did).
+func TestPreservesReportsMinimalInput(t *testing.T) {
+	dropFirst := func(c *circuit.Circuit) (*circuit.Circuit, error) {
+		d := c.Clone()
+		if len(d.Ops) > 2 {
+			d.Ops = d.Ops[1:]
+		}
+		return d, nil
+	}
+	g := gen.Circuit(gen.Options{Qubits: 3, MaxOps: 12, GateSet: []string{"h", "cx", "t", "rz"}})
+	for _, seed := range []uint64{1, 2, 3} {
+		withSeed(t, seed)
+		h := &recordTB{name: "TestPreservesReportsMinimalInput"}
+		Preserves(h, dropFirst, g)
+		logs := strings.Join(h.logs, "\n")
+		if !h.failed || !strings.Contains(logs, "3-op circuit") || !strings.Contains(logs, "3 op(s)") {
+			t.Errorf("seed %d: the report is not of a 3-op input:\n%s", seed, logs)
+		}
 	}
 }

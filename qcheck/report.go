@@ -369,7 +369,11 @@ func (r Result) writeEvidence(b *strings.Builder) {
 	witness := r.Witness != nil && r.WitnessGap > 0
 	if witness {
 		fmt.Fprintf(b, "\nwitness input ψ (kets are %s: qubit 0 is the rightmost bit):\n", ketOrder(n))
-		b.WriteString(wrapList("  ψ = ", strings.Fields(Ket(r.Witness, n)), " "))
+		lead, k := "  ψ = ", Ket(r.Witness, n)
+		if rest, ok := strings.CutPrefix(k, "≈ "); ok { // small amplitudes left out
+			lead, k = "  ψ ≈ ", rest
+		}
+		b.WriteString(wrapList(lead, strings.Fields(k), " "))
 		if r.ExactPhase {
 			fmt.Fprintf(b, "  ‖want·ψ − got·ψ‖ = %.4g (a certified lower bound on the operator-norm distance)\n", r.WitnessGap)
 		} else {

@@ -113,7 +113,7 @@ func ruleProperty[S sides](cfg *config, rule func(t *rapid.T) (left, right S), p
 		in, at := embed(t, left)
 		if f := trial(cfg, s, in); f != nil {
 			t.Logf("the rule's left side was placed at ops %d–%d, its qubits 0..%d on qubits %v", at.start, at.start+left.Len()-1, left.Qubits()-1, at.qubits)
-			failWith(t, f)
+			failWith(t, f, nil)
 		}
 	}
 }
