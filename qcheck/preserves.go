@@ -84,7 +84,10 @@ func LayoutProperty(pass LayoutPass, g *rapid.Generator[*circuit.Circuit], opts 
 func checkedProperty(s subject, g *rapid.Generator[*circuit.Circuit], opts []Option) func(*rapid.T) {
 	cfg, err := checkedConfig(s, g, opts)
 	if err != nil {
-		return func(t *rapid.T) { t.Fatalf("qcheck: %v", err) }
+		return func(t *rapid.T) {
+			t.Helper()
+			t.Fatalf("qcheck: %v", err)
+		}
 	}
 	return property(cfg, s, g, nil)
 }
@@ -105,6 +108,7 @@ func checkedConfig(s subject, g *rapid.Generator[*circuit.Circuit], opts []Optio
 // handing the failure to seen (when not nil).
 func property(cfg *config, s subject, g *rapid.Generator[*circuit.Circuit], seen func(*Failure)) func(*rapid.T) {
 	return func(t *rapid.T) {
+		t.Helper()
 		in := g.Draw(t, "circuit")
 		if f := trial(cfg, s, in); f != nil {
 			if seen != nil {

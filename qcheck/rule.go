@@ -69,7 +69,10 @@ func RuleProperty[S interface {
 }](rule func(t *rapid.T) (left, right S), pass Pass, opts ...Option) func(*rapid.T) {
 	cfg, err := ruleConfig[S](rule == nil, opts)
 	if err != nil {
-		return func(t *rapid.T) { t.Fatalf("qcheck: %v", err) }
+		return func(t *rapid.T) {
+			t.Helper()
+			t.Fatalf("qcheck: %v", err)
+		}
 	}
 	return ruleProperty(cfg, rule, pass)
 }
@@ -99,6 +102,7 @@ func ruleProperty[S sides](cfg *config, rule func(t *rapid.T) (left, right S), p
 	}
 	var proofs proofCache
 	return func(t *rapid.T) {
+		t.Helper()
 		l, r := rule(t)
 		var left *circuit.Circuit
 		switch l := any(l).(type) {
