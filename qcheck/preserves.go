@@ -120,13 +120,14 @@ func property(cfg *config, s subject, g *rapid.Generator[*circuit.Circuit], seen
 }
 
 // failWith fails a property with the failure's report, logged once (rapid logs it only when it
-// replays the minimal failure), and a one-line message: the headline, which rapid prints first,
-// so the logged report leaves it out. With minimize, the report is of the 1-minimal input that
-// minimize finds from rapid's shrunk one, when that is smaller, under a line saying so.
+// replays the minimal failure), and a one-line message saying what kind of failure it is, which
+// rapid prints twice; the report's headline, with the figures, is printed once. With minimize,
+// the report is of the 1-minimal input that minimize finds from rapid's shrunk one, when that is
+// smaller, under a line saying so.
 func failWith(t *rapid.T, f *Failure, minimize func() *Failure) {
 	t.Helper()
 	t.Log(lazyReport{f, minimize})
-	t.Fatalf("%s", f.Headline())
+	t.Fatalf("%s", f.Kind.summary())
 }
 
 // lazyReport formats a failure's report only when rapid actually prints it, which it does once
@@ -143,5 +144,5 @@ func (l lazyReport) String() string {
 				l.f.Input.Len(), m.Input.Len(), m.Report())
 		}
 	}
-	return "\n" + writeSections(&page{r: l.f.Result, f: l.f, want: "input", got: "output"}, sections[1:])
+	return "\n" + l.f.Report()
 }

@@ -121,6 +121,12 @@ func TestPreservesFailsOnceWithReport(t *testing.T) {
 	if !strings.Contains(h.errors[0], "-rapid.seed=") {
 		t.Errorf("failure message does not say how to replay: %q", h.errors[0])
 	}
+	// The headline with its figures stands once, in the report; the failure message says only
+	// what kind of failure it is.
+	all := strings.Join(append(h.errors, h.logs...), "\n")
+	if n := strings.Count(all, "qcheck: the pass changes a "); n != 1 {
+		t.Errorf("the headline is printed %d times, want once:\n%s", n, all)
+	}
 }
 
 func TestPreservesSilentOnSuccess(t *testing.T) {

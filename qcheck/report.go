@@ -69,12 +69,9 @@ var sections = []section{
 }
 
 // write runs every section over the page.
-func write(p *page) string { return writeSections(p, sections) }
-
-// writeSections writes the given sections of a report.
-func writeSections(p *page, list []section) string {
+func write(p *page) string {
 	var b strings.Builder
-	for _, s := range list {
+	for _, s := range sections {
 		s(&b, p)
 	}
 	return b.String()
@@ -491,6 +488,22 @@ func (f *Failure) Headline() string {
 		return fmt.Sprintf("qcheck: the pass returned an unusable circuit for a %s: %v", in, f.Err)
 	}
 	return "qcheck: the pass failed"
+}
+
+// summary says in one line what kind of failure this is, for the message of a failed property
+// whose report (with the figures) is logged beside it.
+func (k FailureKind) summary() string {
+	what := map[FailureKind]string{
+		NotEquivalent: "the pass changes the meaning of a circuit",
+		PassError:     "the pass returned an error on a valid circuit",
+		PassPanic:     "the pass panicked",
+		ModifiedInput: "the pass modified its input circuit",
+		BadOutput:     "the pass returned an unusable circuit",
+	}[k]
+	if what == "" {
+		what = "the pass failed"
+	}
+	return "qcheck: " + what + "; the report shows the smallest input found"
 }
 
 // Report writes the failure for a person: what went wrong, the minimal input drawn and listed
