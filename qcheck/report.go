@@ -265,6 +265,9 @@ func writeAngleDiff(b *strings.Builder, aName string, a *circuit.Circuit, bName 
 // writeDiff writes the structural difference of two op lists with go-cmp.
 func writeDiff(b *strings.Builder, aName string, a *circuit.Circuit, bName string, c *circuit.Circuit) {
 	as, cs := opStrings(a), opStrings(c)
+	if d := cmp.Diff(as, cs); d != "" {
+		as, cs = distinctOpStrings(a, as, c, cs)
+	}
 	d := cmp.Diff(as, cs)
 	if d == "" {
 		writeAngleDiff(b, aName, a, bName, c)
@@ -284,6 +287,44 @@ func opStrings(c *circuit.Circuit) []string {
 		out[i] = op.String()
 	}
 	return out
+}
+
+// distinctOpStrings rewrites, with every digit of their angles, the ops whose brief forms (as and
+// cs) are shared by ops of a and c that are not the same, so that a diff never shows two
+// different ops as one common line.
+func distinctOpStrings(a *circuit.Circuit, as []string, c *circuit.Circuit, cs []string) ([]string, []string) {
+	exact := func(op circuit.Op) string {
+		g := op.Gate.Name
+		if len(op.Gate.Params) > 0 {
+			parts := make([]string, len(op.Gate.Params))
+			for i, p := range op.Gate.Params {
+				parts[i] = strconv.FormatFloat(p, 'g', -1, 64)
+			}
+			g += "(" + strings.Join(parts, ",") + ")"
+		}
+		return strings.Replace(op.String(), op.Gate.String(), g, 1)
+	}
+	forms := map[string]map[string]bool{} // brief form → the exact forms it stands for
+	note := func(c *circuit.Circuit, brief []string) {
+		for i, op := range c.Ops {
+			if forms[brief[i]] == nil {
+				forms[brief[i]] = map[string]bool{}
+			}
+			forms[brief[i]][exact(op)] = true
+		}
+	}
+	note(a, as)
+	note(c, cs)
+	redo := func(c *circuit.Circuit, brief []string) []string {
+		out := append([]string(nil), brief...)
+		for i, op := range c.Ops {
+			if len(forms[brief[i]]) > 1 {
+				out[i] = exact(op)
+			}
+		}
+		return out
+	}
+	return redo(a, as), redo(c, cs)
 }
 
 // writeBlame names the ops that explain the difference.

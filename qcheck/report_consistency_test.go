@@ -67,3 +67,18 @@ func TestProgramOutcomeOnlyWhenDifferent(t *testing.T) {
 		t.Errorf("equivalent %v, outcome %q with %g and %g", r.Equivalent, r.Outcome, r.OutcomeWant, r.OutcomeGot)
 	}
 }
+
+// The op diff never shows two different ops as one common line: rz(0.3) and rz(0.3 + 1e-6) print
+// alike with five digits, so when the lists also differ otherwise, both are written with every
+// digit (the difference the verdict is about: operator norm 2·sin(1e-6/4) ≈ 5e-7, from the
+// eigenphases ∓θ/2 of rz, Nielsen & Chuang §4.2).
+func TestDiffShowsAnglesThatDiffer(t *testing.T) {
+	r, err := Compare(circuit.New(1).RZ(0.3, 0), circuit.New(1).RZ(0.3+1e-6, 0).Z(0).Z(0))
+	if err != nil {
+		t.Fatal(err)
+	}
+	rep := r.Report()
+	if r.Equivalent || !strings.Contains(rep, `- 	"rz(0.3) q0"`) || !strings.Contains(rep, `+ 	"rz(0.300001) q0"`) {
+		t.Errorf("the diff hides the changed angle:\n%s", rep)
+	}
+}
