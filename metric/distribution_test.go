@@ -1,10 +1,7 @@
 package metric
 
 import (
-	"compress/gzip"
-	"encoding/json"
 	"math"
-	"os"
 	"testing"
 
 	"gonum.org/v1/gonum/mat"
@@ -39,22 +36,11 @@ func complexMatrix(d int, re, im []float64) *mat.CDense {
 // factor 2 of the truth (common practice for a first-order bound; the doc comment explains why it
 // is first order).
 func TestDistributionGapAgainstNumPy(t *testing.T) {
-	f, err := os.Open("../testdata/metric/distribution.json.gz")
-	if err != nil {
-		t.Fatal(err)
-	}
-	defer f.Close()
-	z, err := gzip.NewReader(f)
-	if err != nil {
-		t.Fatal(err)
-	}
 	var ref struct {
 		Provenance string
 		Cases      []distributionCase
 	}
-	if err := json.NewDecoder(z).Decode(&ref); err != nil {
-		t.Fatal(err)
-	}
+	readGzipJSON(t, "../testdata/metric/distribution.json.gz", &ref)
 	if len(ref.Cases) < 30 {
 		t.Fatalf("only %d cases", len(ref.Cases))
 	}

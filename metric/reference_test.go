@@ -51,7 +51,18 @@ type traceValue struct {
 
 func loadReference(t *testing.T) reference {
 	t.Helper()
-	f, err := os.Open("../testdata/metric/reference.json.gz")
+	var r reference
+	readGzipJSON(t, "../testdata/metric/reference.json.gz", &r)
+	if len(r.Random) < 50 || len(r.Adversarial) < 20 {
+		t.Fatalf("reference holds %d random and %d adversarial pairs, want at least 50 and 20", len(r.Random), len(r.Adversarial))
+	}
+	return r
+}
+
+// readGzipJSON decodes the gzipped JSON file at path into v, failing the test on any error.
+func readGzipJSON(t *testing.T, path string, v any) {
+	t.Helper()
+	f, err := os.Open(path)
 	if err != nil {
 		t.Fatal(err)
 	}
@@ -60,14 +71,9 @@ func loadReference(t *testing.T) reference {
 	if err != nil {
 		t.Fatal(err)
 	}
-	var r reference
-	if err := json.NewDecoder(z).Decode(&r); err != nil {
-		t.Fatal(err)
+	if err := json.NewDecoder(z).Decode(v); err != nil {
+		t.Fatalf("%s: %v", path, err)
 	}
-	if len(r.Random) < 50 || len(r.Adversarial) < 20 {
-		t.Fatalf("reference holds %d random and %d adversarial pairs, want at least 50 and 20", len(r.Random), len(r.Adversarial))
-	}
-	return r
 }
 
 func unpack(r, c int, data [][2]float64) *mat.CDense {
